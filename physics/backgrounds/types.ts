@@ -1,0 +1,62 @@
+/**
+ * The interface every background (Minkowski, Schwarzschild, Rindler wedge, de Sitter static patch) implements.
+ * SI units throughout; t is the background's static (Killing) time in seconds, r its static radial coordinate in
+ * metres (areal radius for Schwarzschild and de Sitter, distance along the acceleration for Rindler and Minkowski).
+ */
+import type { BackgroundKind } from "../scenario/schema";
+
+export type HorizonKind = "event" | "acceleration" | "cosmological";
+
+export interface HorizonInfo {
+  kind: HorizonKind;
+  /** Surface gravity κ of the Killing horizon, normalised to the Killing vector that is unit at infinity (or at the lab, for Rindler), in s^-1 (κ/c in m^-1 would be the geometric value). */
+  surfaceGravityPerSecond: number;
+  /** Temperature of the horizon as seen by the Killing observer the normalisation refers to (Hawking, Unruh, Gibbons–Hawking), in kelvin. */
+  temperatureKelvin: number;
+  /** Where the horizon sits in the static radial coordinate, metres. */
+  radiusMetres: number;
+}
+
+export type BackgroundFlagCode =
+  | "lab-inside-horizon"
+  | "lab-inside-photon-sphere"
+  | "lab-beyond-cosmological-horizon"
+  | "lab-too-close-to-horizon-for-double";
+
+export interface BackgroundFlag {
+  code: BackgroundFlagCode;
+  severity: "caution" | "invalid";
+  message: string;
+}
+
+/** A point of the conformal (Penrose) diagram: T up, X to the right, both dimensionless, null rays at ±45°. */
+export interface DiagramPoint {
+  T: number;
+  X: number;
+}
+
+export interface ConformalMap {
+  /** Static coordinates (seconds, metres) → diagram point, for the region the lab lives in. */
+  toDiagram(tSeconds: number, rMetres: number): DiagramPoint;
+  /** Diagram point → static coordinates; null outside the region covered by the static chart. */
+  fromDiagram(point: DiagramPoint): { tSeconds: number; rMetres: number } | null;
+}
+
+export interface Background {
+  kind: BackgroundKind;
+  /** Proper acceleration the lab needs to stay static, m s^-2 (0 for an inertial lab). */
+  labProperAccelerationMetresPerSecondSquared: number;
+  /** dτ/dt at the lab: the lab's redshift (lapse) factor, dimensionless, in (0, 1]. */
+  labRedshiftFactor: number;
+  /** The lab's static radial coordinate, metres. */
+  labRadiusMetres: number;
+  /** Proper distance from the lab to the horizon along the static slice, metres; null without a horizon. */
+  labProperDistanceToHorizonMetres: number | null;
+  horizon: HorizonInfo | null;
+  /** Local (Tolman) temperature at the lab, kelvin: the horizon temperature divided by the redshift factor. */
+  labLocalTemperatureKelvin: number;
+  /** Tortoise coordinate r*(r), metres, so that u = ct − r*, v = ct + r* are null. */
+  tortoiseMetres(rMetres: number): number;
+  conformal: ConformalMap;
+  flags: BackgroundFlag[];
+}

@@ -1,0 +1,147 @@
+/**
+ * The scenario document: what a user draws and sets, in SI numbers. Version 1.
+ *
+ * Every reader goes through parseScenarioDocument, which accepts any known version and upgrades it to the
+ * current one; an unknown or malformed document is answered with the list of what is wrong, never a crash.
+ */
+import { z } from "zod";
+
+export const CURRENT_SCHEMA_VERSION = 1 as const;
+
+const positive = (what: string) => z.number({ error: `${what} must be a number` }).finite().positive(`${what} must be positive`);
+const nonNegative = (what: string) => z.number({ error: `${what} must be a number` }).finite().nonnegative(`${what} must not be negative`);
+
+export const rampShapeSchema = z.enum(["smoothstep", "cosine", "minimum-jerk", "linear"]);
+export type RampShape = z.infer<typeof rampShapeSchema>;
+
+export const backgroundSchema = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("minkowski") }),
+  z.object({ kind: z.literal("schwarzschild"), massKg: positive("black-hole mass") }),
+  z.object({ kind: z.literal("rindler"), accelerationMetresPerSecondSquared: positive("lab acceleration") }),
+  z.object({ kind: z.literal("de-sitter"), hubbleRatePerSecond: positive("Hubble rate") }),
+]);
+export type BackgroundSpec = z.infer<typeof backgroundSchema>;
+export type BackgroundKind = BackgroundSpec["kind"];
+
+/** Where the lab sits. Minkowski and Rindler labs need no placement (the Rindler lab is set by its acceleration). */
+export const labPlacementSchema = z.discriminatedUnion("placement", [
+  z.object({ placement: z.literal("inertial") }),
+  z.object({ placement: z.literal("areal-radius"), arealRadiusMetres: positive("lab areal radius") }),
+  z.object({ placement: z.literal("proper-distance-above-horizon"), properDistanceMetres: positive("lab proper distance above the horizon") }),
+]);
+export type LabPlacement = z.infer<typeof labPlacementSchema>;
+
+export const sourceSchema = z.object({
+  chargeCoulombs: z.number({ error: "charge must be a number" }).finite(),
+  massKg: nonNegative("source mass"),
+  /** Mass of the lab apparatus that recoils against the source, when the document accounts for it. */
+  labMassKg: nonNegative("lab mass").nullable().default(null),
+});
+export type SourceSpec = z.infer<typeof sourceSchema>;
+
+export const separationSchema = z.object({
+  axis: z.enum(["radial", "tangential"]),
+  split: z.enum(["symmetric", "one-branch-stays"]),
+  /** Full separation d of the two branches at the hold. */
+  distanceMetres: nonNegative("separation"),
+});
+export type SeparationSpec = z.infer<typeof separationSchema>;
+
+export const segmentsProtocolSchema = z.object({
+  kind: z.literal("segments"),
+  separation: z.object({ durationSeconds: positive("separation duration"), shape: rampShapeSchema }),
+  hold: z.object({ durationSeconds: nonNegative("hold duration") }),
+  recombination: z.object({ durationSeconds: positive("recombination duration"), shape: rampShapeSchema }),
+});
+
+/** A separation profile s(t) ∈ [0, 1] × d, as a mathjs expression in t (seconds), over [0, durationSeconds]. */
+export const formulaProtocolSchema = z.object({
+  kind: z.literal("formula"),
+  expression: z.string().min(1, "formula must not be empty").max(2000, "formula is too long"),
+  durationSeconds: positive("formula duration"),
+});
+
+/** A measured separation profile (seconds, metres of full separation), e.g. from a lab sequencer's CSV. */
+export const sampledProtocolSchema = z.object({
+  kind: z.literal("sampled"),
+  samples: z
+    .array(z.object({ timeSeconds: z.number().finite(), separationMetres: z.number().finite() }))
+    .min(2, "a sampled profile needs at least two samples")
+    .max(1_000_000, "a sampled profile may have at most 1,000,000 samples"),
+  interpolation: z.enum(["linear", "cubic-spline"]),
+});
+
+export const protocolSchema = z.discriminatedUnion("kind", [segmentsProtocolSchema, formulaProtocolSchema, sampledProtocolSchema]);
+export type ProtocolSpec = z.infer<typeof protocolSchema>;
+
+export const displaySchema = z
+  .object({ theme: z.enum(["light", "dark"]).default("light"), showGrid: z.boolean().default(true) })
+  .default({ theme: "light", showGrid: true });
+
+export const scenarioDocumentV1Schema = z.object({
+  schemaVersion: z.literal(1),
+  background: backgroundSchema,
+  lab: labPlacementSchema,
+  source: sourceSchema,
+  separation: separationSchema,
+  protocol: protocolSchema,
+  display: displaySchema,
+});
+
+export const scenarioDocumentSchema = scenarioDocumentV1Schema;
+export type ScenarioDocument = z.infer<typeof scenarioDocumentSchema>;
+export type ScenarioDocumentInput = z.input<typeof scenarioDocumentSchema>;
+
+export interface SchemaIssue {
+  /** Dotted path into the document, e.g. "protocol.hold.durationSeconds". */
+  path: string;
+  message: string;
+}
+
+export type ParseResult = { ok: true; document: ScenarioDocument } | { ok: false; issues: SchemaIssue[] };
+
+/** Upgraders from version n to n + 1, applied in order. Empty while only version 1 exists. */
+const upgraders: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {};
+
+export function parseScenarioDocument(input: unknown): ParseResult {
+  if (typeof input !== "object" || input === null || Array.isArray(input)) {
+    return { ok: false, issues: [{ path: "", message: "a scenario document must be a JSON object" }] };
+  }
+  let doc = input as Record<string, unknown>;
+  const version = doc.schemaVersion;
+  if (typeof version !== "number" || !Number.isInteger(version) || version < 1) {
+    return { ok: false, issues: [{ path: "schemaVersion", message: "schemaVersion must be a positive integer" }] };
+  }
+  if (version > CURRENT_SCHEMA_VERSION) {
+    return {
+      ok: false,
+      issues: [{ path: "schemaVersion", message: `schema version ${version} is newer than this Branchline (${CURRENT_SCHEMA_VERSION}); update Branchline to read it` }],
+    };
+  }
+  for (let v = version; v < CURRENT_SCHEMA_VERSION; v++) doc = upgraders[v](doc);
+  const parsed = scenarioDocumentSchema.safeParse(doc);
+  if (parsed.success) return { ok: true, document: parsed.data };
+  return { ok: false, issues: parsed.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })) };
+}
+
+export function backgroundKindOf(document: ScenarioDocument): BackgroundKind {
+  return document.background.kind;
+}
+
+/** A sensible new scenario: a charged microparticle split by 1 µm in flat spacetime. */
+export function defaultScenarioDocument(): ScenarioDocument {
+  return {
+    schemaVersion: 1,
+    background: { kind: "minkowski" },
+    lab: { placement: "inertial" },
+    source: { chargeCoulombs: 1.602_176_634e-19 * 100, massKg: 1e-14, labMassKg: null },
+    separation: { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 },
+    protocol: {
+      kind: "segments",
+      separation: { durationSeconds: 0.01, shape: "minimum-jerk" },
+      hold: { durationSeconds: 0.1 },
+      recombination: { durationSeconds: 0.01, shape: "minimum-jerk" },
+    },
+    display: { theme: "light", showGrid: true },
+  };
+}

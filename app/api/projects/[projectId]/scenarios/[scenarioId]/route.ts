@@ -1,0 +1,25 @@
+import { getDb } from "@/db";
+import { deleteScenario, getScenario, updateScenario, validDocument } from "@/db/scenarios";
+import { scenarioUpdateSchema } from "@/lib/contracts";
+import { json, noContent, readJson, requireActor, route } from "@/lib/http";
+
+type Params = { projectId: string; scenarioId: string };
+
+export const GET = route<Params>(async (req, { projectId, scenarioId }) => {
+  const actor = await requireActor(req);
+  return json({ scenario: await getScenario(getDb(), actor, projectId, scenarioId) });
+});
+
+/** Saves with optimistic concurrency: send the version you edited; a stale one answers 409 with currentVersion. */
+export const PUT = route<Params>(async (req, { projectId, scenarioId }) => {
+  const actor = await requireActor(req);
+  const input = await readJson(req, scenarioUpdateSchema);
+  const document = input.document === undefined ? undefined : validDocument(input.document);
+  return json({ scenario: await updateScenario(getDb(), actor, projectId, scenarioId, { version: input.version, title: input.title, document }) });
+});
+
+export const DELETE = route<Params>(async (req, { projectId, scenarioId }) => {
+  const actor = await requireActor(req);
+  await deleteScenario(getDb(), actor, projectId, scenarioId);
+  return noContent();
+});

@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import type { ReactNode } from "react";
+import { SiteHeader } from "@/components/layout/SiteHeader";
+import { currentUser } from "@/lib/session";
+import { mono, sans, serif } from "./fonts";
+import { Providers } from "./providers";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Branchline", template: "%s · Branchline" },
+  description: "How much which-path information a superposed body's own fields leak, in flat spacetime and outside horizons.",
+};
+
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await currentUser();
+  return (
+    <html lang="en" className={`${sans.variable} ${serif.variable} ${mono.variable}`}>
+      <body className="min-h-screen bg-paper text-ink antialiased">
+        <Providers>
+          <SiteHeader user={user ? { name: user.name, email: user.email, siteRole: user.siteRole } : null} />
+          <main className="mx-auto w-full max-w-6xl px-6 py-8">{children}</main>
+        </Providers>
+      </body>
+    </html>
+  );
+}

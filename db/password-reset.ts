@@ -1,0 +1,48 @@
+import "server-only";
+import { createHash, randomBytes } from "node:crypto";
+import type { Kysely } from "kysely";
+import { AppError } from "./errors";
+import { findUserByEmail, setPassword } from "./users";
+import type { Database } from "./schema";
+
+const RESET_TOKEN_HOURS = 1;
+const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
+
+/**
+ * Issues a one-time reset token (256 random bits; only its hash is stored) for the account with this e-mail,
+ * or null when there is none. Callers answer the same either way, so the endpoint does not reveal accounts.
+ */
+export async function issuePasswordReset(db: Kysely<Database>, email: string): Promise<{ token: string; name: string; email: string } | null> {
+  const user = await findUserByEmail(db, email);
+  if (!user) return null;
+  const token = randomBytes(32).toString("base64url");
+  await db
+    .insertInto("passwordResetTokens")
+    .values({ tokenHash: sha256(token), userId: user.id, expiresAt: new Date(Date.now() + RESET_TOKEN_HOURS * 3600_000) })
+    .execute();
+  return { token, name: user.name, email: user.email };
+}
+
+/** Sets a new password with a reset token; the token works once and expires. */
+export async function completePasswordReset(db: Kysely<Database>, token: string, password: string): Promise<void> {
+  await db.transaction().execute(async (trx) => {
+    const row = await trx
+      .updateTable("passwordResetTokens")
+      .set({ usedAt: new Date() })
+      .where("tokenHash", "=", sha256(token))
+      .where("usedAt", "is", null)
+      .where("expiresAt", ">", new Date())
+      .returning("userId")
+      .executeTakeFirst();
+    if (!row) {
+      throw new AppError("unprocessable", "this reset link is invalid, used or expired; ask for a new one", [
+        { path: "token", message: "invalid or expired" },
+      ]);
+    }
+    await setPassword(trx, row.userId, password);
+    // Other outstanding links die with this one; the failed sign-ins are forgiven, or the owner would stay locked out.
+    await trx.deleteFrom("passwordResetTokens").where("userId", "=", row.userId).where("usedAt", "is", null).execute();
+    const user = await trx.selectFrom("users").select("email").where("id", "=", row.userId).executeTakeFirstOrThrow();
+    await trx.deleteFrom("signInAttempts").where("email", "=", user.email).where("succeeded", "=", false).execute();
+  });
+}

@@ -1,0 +1,96 @@
+import "server-only";
+import { type Kysely, sql } from "kysely";
+import { type Actor, type ProjectAction, allowedProjectActions, assertProjectAccess } from "./access";
+import { roleInProject } from "./members";
+import type { Database, ProjectRole } from "./schema";
+
+export interface ProjectDto {
+  id: string;
+  name: string;
+  description: string;
+  role: ProjectRole;
+  /** What the caller's role allows, so the UI can hide what it cannot do (the server still decides). */
+  can: ProjectAction[];
+  scenarioCount: number;
+  lastChangedAt: string;
+  createdAt: string;
+}
+
+function projectQuery(db: Kysely<Database>, userId: string) {
+  return db
+    .selectFrom("projects as p")
+    .innerJoin("projectMembers as m", (j) => j.onRef("m.projectId", "=", "p.id").on("m.userId", "=", userId))
+    .select([
+      "p.id",
+      "p.name",
+      "p.description",
+      "p.createdAt",
+      "m.role",
+      sql<string>`(select count(*) from scenarios s where s.project_id = p.id)`.as("scenarioCount"),
+      sql<Date>`greatest(p.updated_at, coalesce((select max(s.updated_at) from scenarios s where s.project_id = p.id), p.updated_at))`.as(
+        "lastChangedAt",
+      ),
+    ]);
+}
+
+type ProjectRow = Awaited<ReturnType<ReturnType<typeof projectQuery>["executeTakeFirstOrThrow"]>>;
+
+function toDto(row: ProjectRow): ProjectDto {
+  return {
+    id: row.id,
+    name: row.name,
+    description: row.description,
+    role: row.role,
+    can: allowedProjectActions(row.role),
+    scenarioCount: Number(row.scenarioCount),
+    lastChangedAt: new Date(row.lastChangedAt).toISOString(),
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+export async function listProjects(db: Kysely<Database>, actor: Actor): Promise<ProjectDto[]> {
+  const rows = await projectQuery(db, actor.userId).orderBy("lastChangedAt", "desc").execute();
+  return rows.map(toDto);
+}
+
+export async function getProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<ProjectDto> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:read");
+  return toDto(await projectQuery(db, actor.userId).where("p.id", "=", projectId).executeTakeFirstOrThrow());
+}
+
+export async function createProject(
+  db: Kysely<Database>,
+  actor: Actor,
+  input: { name: string; description?: string },
+): Promise<ProjectDto> {
+  const id = await db.transaction().execute(async (trx) => {
+    const project = await trx
+      .insertInto("projects")
+      .values({ name: input.name, description: input.description ?? "", createdBy: actor.userId })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await trx.insertInto("projectMembers").values({ projectId: project.id, userId: actor.userId, role: "owner" }).execute();
+    return project.id;
+  });
+  return getProject(db, actor, id);
+}
+
+export async function updateProject(
+  db: Kysely<Database>,
+  actor: Actor,
+  projectId: string,
+  input: { name?: string; description?: string },
+): Promise<ProjectDto> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:rename");
+  await db
+    .updateTable("projects")
+    .set({ ...input, updatedAt: new Date() })
+    .where("id", "=", projectId)
+    .execute();
+  return getProject(db, actor, projectId);
+}
+
+export async function deleteProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<void> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:delete");
+  await db.deleteFrom("projects").where("id", "=", projectId).execute();
+}

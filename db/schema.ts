@@ -1,0 +1,108 @@
+/**
+ * The one Database interface: tables in snake_case in PostgreSQL, camelCase here (Kysely's CamelCasePlugin maps
+ * between them). Generated<> marks columns the database fills in.
+ */
+import type { ColumnType, Generated, Insertable, Selectable, Updateable } from "kysely";
+
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+type Json = ColumnType<unknown, string, string>;
+
+export type SiteRole = "admin" | "member";
+export type ProjectRole = "owner" | "editor" | "viewer";
+
+export interface UsersTable {
+  id: Generated<string>;
+  email: string;
+  name: string;
+  passwordHash: string | null;
+  siteRole: ColumnType<SiteRole, SiteRole | undefined, SiteRole>;
+  emailVerifiedAt: Date | null;
+  createdAt: Generated<Date>;
+  updatedAt: Timestamp;
+}
+
+export interface VerificationTokensTable {
+  identifier: string;
+  token: string;
+  expiresAt: Date;
+}
+
+export interface PasswordResetTokensTable {
+  tokenHash: string;
+  userId: string;
+  expiresAt: Date;
+  usedAt: Date | null;
+  createdAt: Generated<Date>;
+}
+
+export interface SignInAttemptsTable {
+  id: Generated<string>;
+  email: string;
+  address: string;
+  succeeded: boolean;
+  attemptedAt: Generated<Date>;
+}
+
+export interface ProjectsTable {
+  id: Generated<string>;
+  name: string;
+  description: Generated<string>;
+  createdBy: string | null;
+  createdAt: Generated<Date>;
+  updatedAt: Timestamp;
+}
+
+export interface ProjectMembersTable {
+  projectId: string;
+  userId: string;
+  role: ProjectRole;
+  createdAt: Generated<Date>;
+}
+
+export interface ScenariosTable {
+  id: Generated<string>;
+  projectId: string;
+  title: string;
+  document: Json;
+  schemaVersion: number;
+  backgroundKind: string;
+  version: Generated<number>;
+  createdBy: string | null;
+  updatedBy: string | null;
+  createdAt: Generated<Date>;
+  updatedAt: Timestamp;
+}
+
+export interface ScenarioRevisionsTable {
+  id: Generated<string>;
+  scenarioId: string;
+  version: number;
+  title: string;
+  document: Json;
+  schemaVersion: number;
+  createdBy: string | null;
+  createdAt: Generated<Date>;
+}
+
+export interface Database {
+  users: UsersTable;
+  verificationTokens: VerificationTokensTable;
+  passwordResetTokens: PasswordResetTokensTable;
+  signInAttempts: SignInAttemptsTable;
+  projects: ProjectsTable;
+  projectMembers: ProjectMembersTable;
+  scenarios: ScenariosTable;
+  scenarioRevisions: ScenarioRevisionsTable;
+}
+
+export type User = Selectable<UsersTable>;
+export type NewUser = Insertable<UsersTable>;
+export type UserUpdate = Updateable<UsersTable>;
+export type Project = Selectable<ProjectsTable>;
+export type NewProject = Insertable<ProjectsTable>;
+export type ProjectUpdate = Updateable<ProjectsTable>;
+export type ProjectMember = Selectable<ProjectMembersTable>;
+export type Scenario = Selectable<ScenariosTable>;
+export type NewScenario = Insertable<ScenariosTable>;
+export type ScenarioUpdate = Updateable<ScenariosTable>;
+export type ScenarioRevision = Selectable<ScenarioRevisionsTable>;

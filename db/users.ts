@@ -1,0 +1,105 @@
+import "server-only";
+import bcrypt from "bcryptjs";
+import type { Kysely } from "kysely";
+import { type Actor, assertSiteAccess } from "./access";
+import { AppError, conflict, notFound } from "./errors";
+import { isUuid } from "./ids";
+import type { Database, SiteRole, User } from "./schema";
+
+export interface UserDto {
+  id: string;
+  email: string;
+  name: string;
+  siteRole: SiteRole;
+  emailVerifiedAt: string | null;
+  createdAt: string;
+}
+
+const BCRYPT_ROUNDS = 10;
+
+export function toUserDto(u: User): UserDto {
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    siteRole: u.siteRole,
+    emailVerifiedAt: u.emailVerifiedAt?.toISOString() ?? null,
+    createdAt: u.createdAt.toISOString(),
+  };
+}
+
+export const normaliseEmail = (email: string) => email.trim().toLowerCase();
+
+export async function findUserByEmail(db: Kysely<Database>, email: string): Promise<User | undefined> {
+  return db.selectFrom("users").selectAll().where("email", "=", normaliseEmail(email)).executeTakeFirst();
+}
+
+export async function findUserById(db: Kysely<Database>, id: string): Promise<User | undefined> {
+  if (!isUuid(id)) return undefined;
+  return db.selectFrom("users").selectAll().where("id", "=", id).executeTakeFirst();
+}
+
+export async function hashPassword(password: string): Promise<string> {
+  return bcrypt.hash(password, BCRYPT_ROUNDS);
+}
+
+/** Checks a password against a stored hash; a user without a password (magic-link only) never matches. */
+export async function passwordMatches(user: User, password: string): Promise<boolean> {
+  return user.passwordHash !== null && bcrypt.compare(password, user.passwordHash);
+}
+
+export async function createUser(
+  db: Kysely<Database>,
+  input: { email: string; name: string; password?: string; siteRole?: SiteRole; emailVerified?: boolean },
+): Promise<UserDto> {
+  const email = normaliseEmail(input.email);
+  const row = await db
+    .insertInto("users")
+    .values({
+      email,
+      name: input.name,
+      passwordHash: input.password ? await hashPassword(input.password) : null,
+      siteRole: input.siteRole ?? "member",
+      emailVerifiedAt: input.emailVerified ? new Date() : null,
+    })
+    .onConflict((oc) => oc.expression((eb) => eb.fn("lower", ["email"])).doNothing())
+    .returningAll()
+    .executeTakeFirst();
+  if (!row) throw conflict("an account with this e-mail address already exists", [{ path: "email", message: "already registered" }]);
+  return toUserDto(row);
+}
+
+export async function setPassword(db: Kysely<Database>, userId: string, password: string): Promise<void> {
+  await db.updateTable("users").set({ passwordHash: await hashPassword(password), updatedAt: new Date() }).where("id", "=", userId).execute();
+}
+
+export async function updateAccount(db: Kysely<Database>, actor: Actor, input: { name?: string }): Promise<UserDto> {
+  const row = await db
+    .updateTable("users")
+    .set({ ...input, updatedAt: new Date() })
+    .where("id", "=", actor.userId)
+    .returningAll()
+    .executeTakeFirstOrThrow();
+  return toUserDto(row);
+}
+
+export async function listUsers(db: Kysely<Database>, actor: Actor | null): Promise<UserDto[]> {
+  assertSiteAccess(actor, "users:list");
+  const rows = await db.selectFrom("users").selectAll().orderBy("createdAt").execute();
+  return rows.map(toUserDto);
+}
+
+/** Changes a site role; the last administrator cannot demote themselves (the site would have none). */
+export async function setSiteRole(db: Kysely<Database>, actor: Actor | null, userId: string, siteRole: SiteRole): Promise<UserDto> {
+  assertSiteAccess(actor, "users:set-role");
+  return db.transaction().execute(async (trx) => {
+    const target = await findUserById(trx, userId);
+    if (!target) throw notFound("user");
+    if (target.siteRole === "admin" && siteRole !== "admin") {
+      const admins = await trx.selectFrom("users").select("id").where("siteRole", "=", "admin").forUpdate().execute();
+      if (admins.length === 1) throw new AppError("conflict", "the last site administrator cannot be demoted");
+    }
+    const row = await trx.updateTable("users").set({ siteRole, updatedAt: new Date() }).where("id", "=", userId).returningAll().executeTakeFirstOrThrow();
+    return toUserDto(row);
+  });
+}

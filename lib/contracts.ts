@@ -1,0 +1,49 @@
+/**
+ * Request bodies and queries of the JSON API, shared by the route handlers (which enforce them) and the forms
+ * (which show the same messages inline). Pure zod: no server code, safe to import in the browser.
+ */
+import { z } from "zod";
+
+export const emailSchema = z.string().trim().toLowerCase().email("enter a valid e-mail address").max(320, "e-mail address is too long");
+export const passwordSchema = z.string().min(10, "use at least 10 characters").max(200, "use at most 200 characters");
+export const displayNameSchema = z.string().trim().min(1, "enter a name").max(200, "use at most 200 characters");
+export const projectRoleSchema = z.enum(["owner", "editor", "viewer"], { error: "role must be owner, editor or viewer" });
+export const siteRoleSchema = z.enum(["admin", "member"], { error: "site role must be admin or member" });
+
+export const signUpSchema = z.object({ email: emailSchema, name: displayNameSchema, password: passwordSchema });
+export const passwordResetRequestSchema = z.object({ email: emailSchema });
+export const passwordResetConfirmSchema = z.object({ token: z.string().min(10, "the reset token is missing"), password: passwordSchema });
+export const accountUpdateSchema = z.object({ name: displayNameSchema.optional() }).strict();
+export const siteRoleUpdateSchema = z.object({ siteRole: siteRoleSchema }).strict();
+
+export const projectNameSchema = z.string().trim().min(1, "enter a project name").max(200, "use at most 200 characters");
+export const projectCreateSchema = z.object({ name: projectNameSchema, description: z.string().max(2000, "use at most 2000 characters").optional() }).strict();
+export const projectUpdateSchema = z
+  .object({ name: projectNameSchema.optional(), description: z.string().max(2000, "use at most 2000 characters").optional() })
+  .strict()
+  .refine((v) => v.name !== undefined || v.description !== undefined, { message: "nothing to change: give a name or a description" });
+
+export const memberAddSchema = z.object({ email: emailSchema, role: projectRoleSchema }).strict();
+export const memberUpdateSchema = z.object({ role: projectRoleSchema }).strict();
+
+export const scenarioTitleSchema = z.string().trim().min(1, "enter a title").max(200, "use at most 200 characters");
+/** The document itself is checked against the physics schema (with upgrades of older versions) by the server. */
+export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: z.unknown().optional() }).strict();
+export const scenarioUpdateSchema = z
+  .object({
+    version: z.number({ error: "version is required (the version you edited)" }).int().positive(),
+    title: scenarioTitleSchema.optional(),
+    document: z.unknown().optional(),
+  })
+  .strict();
+export const scenarioDuplicateSchema = z.object({ title: scenarioTitleSchema.optional() }).strict();
+
+export const scenarioListQuerySchema = z.object({
+  page: z.coerce.number().int().min(1, "page starts at 1").default(1),
+  pageSize: z.coerce.number().int().min(1).max(100, "at most 100 per page").default(25),
+  sort: z.enum(["title", "updatedAt", "createdAt", "backgroundKind"]).default("updatedAt"),
+  order: z.enum(["asc", "desc"]).default("desc"),
+  q: z.string().max(200).optional(),
+  background: z.enum(["minkowski", "schwarzschild", "rindler", "de-sitter"]).optional(),
+});
+export type ScenarioListQueryInput = z.input<typeof scenarioListQuerySchema>;

@@ -1,0 +1,87 @@
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import type { z } from "zod";
+import type { Actor } from "../db/access";
+import { AppError, type ErrorCode, type FieldIssue } from "../db/errors";
+import { actorFromRequest } from "./session";
+
+const statusOf: Record<ErrorCode, number> = {
+  bad_request: 400,
+  validation_failed: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  version_conflict: 409,
+  payload_too_large: 413,
+  unprocessable: 422,
+  rate_limited: 429,
+};
+
+/** Largest JSON body a route accepts (a sampled protocol of many points fits). */
+export const MAX_JSON_BYTES = 8 * 1024 * 1024;
+
+export function errorResponse(error: AppError): NextResponse {
+  const body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}), ...error.details } };
+  return NextResponse.json(body, { status: statusOf[error.code] });
+}
+
+function zodIssues(error: z.ZodError, prefix = ""): FieldIssue[] {
+  return error.issues.map((i) => ({ path: [prefix, ...i.path.map(String)].filter(Boolean).join("."), message: i.message }));
+}
+
+export async function readJson<T extends z.ZodType>(req: Request, schema: T): Promise<z.infer<T>> {
+  const length = Number(req.headers.get("content-length") ?? 0);
+  if (length > MAX_JSON_BYTES) throw new AppError("payload_too_large", `the request body is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB`);
+  let text: string;
+  try {
+    text = await req.text();
+  } catch {
+    throw new AppError("bad_request", "the request body could not be read");
+  }
+  if (text.length > MAX_JSON_BYTES) throw new AppError("payload_too_large", `the request body is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB`);
+  let json: unknown;
+  try {
+    json = text ? JSON.parse(text) : undefined;
+  } catch {
+    throw new AppError("bad_request", "the request body is not valid JSON");
+  }
+  const parsed = schema.safeParse(json);
+  if (!parsed.success) throw new AppError("validation_failed", "the request body is not valid", zodIssues(parsed.error));
+  return parsed.data;
+}
+
+export function readQuery<T extends z.ZodType>(req: NextRequest, schema: T): z.infer<T> {
+  const parsed = schema.safeParse(Object.fromEntries(req.nextUrl.searchParams));
+  if (!parsed.success) throw new AppError("validation_failed", "the query parameters are not valid", zodIssues(parsed.error));
+  return parsed.data;
+}
+
+export async function requireActor(req: NextRequest): Promise<Actor> {
+  const actor = await actorFromRequest(req);
+  if (!actor) throw new AppError("unauthenticated", "sign in first");
+  return actor;
+}
+
+type RouteContext<P> = { params: Promise<P> };
+
+/**
+ * Wraps a route handler: known errors become the one error shape with their status; anything else is logged on
+ * the server and answered as a plain 500 without details, so no stack trace ever reaches a client.
+ */
+export function route<P = Record<string, string>>(
+  handler: (req: NextRequest, params: P) => Promise<Response>,
+): (req: NextRequest, ctx: RouteContext<P>) => Promise<Response> {
+  return async (req, ctx) => {
+    try {
+      return await handler(req, (await ctx?.params) ?? ({} as P));
+    } catch (error) {
+      if (error instanceof AppError) return errorResponse(error);
+      console.error("[api] unexpected error", req.method, req.nextUrl?.pathname, error);
+      return NextResponse.json({ error: { code: "internal", message: "something went wrong on the server; the error has been logged" } }, { status: 500 });
+    }
+  };
+}
+
+export const json = (body: unknown, status = 200) => NextResponse.json(body, { status });
+export const noContent = () => new NextResponse(null, { status: 204 });

@@ -1,6 +1,6 @@
 import "server-only";
 import bcrypt from "bcryptjs";
-import type { Kysely } from "kysely";
+import { type Kysely, sql } from "kysely";
 import { type Actor, assertSiteAccess } from "./access";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
@@ -62,7 +62,7 @@ export async function createUser(
       siteRole: input.siteRole ?? "member",
       emailVerifiedAt: input.emailVerified ? new Date() : null,
     })
-    .onConflict((oc) => oc.expression((eb) => eb.fn("lower", ["email"])).doNothing())
+    .onConflict((oc) => oc.expression(sql`lower(email)`).doNothing())
     .returningAll()
     .executeTakeFirst();
   if (!row) throw conflict("an account with this e-mail address already exists", [{ path: "email", message: "already registered" }]);

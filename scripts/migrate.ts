@@ -1,15 +1,11 @@
-/** Runs every pending migration in migrations/ (Kysely's Migrator), printing each step; exits non-zero on failure. */
-import { promises as fs } from "node:fs";
-import path from "node:path";
-import { FileMigrationProvider, Migrator } from "kysely";
+/** Runs every pending migration (Kysely's Migrator), printing each step; exits non-zero on failure. */
+import { Migrator } from "kysely";
 import { createDb } from "../db/connect";
+import { migrations } from "../migrations";
 
 export async function migrateToLatest(connectionString?: string): Promise<void> {
   const db = createDb(connectionString, 2);
-  const migrator = new Migrator({
-    db,
-    provider: new FileMigrationProvider({ fs, path, migrationFolder: path.resolve(__dirname, "../migrations") }),
-  });
+  const migrator = new Migrator({ db, provider: { getMigrations: async () => migrations } });
   const { error, results } = await migrator.migrateToLatest();
   for (const r of results ?? []) {
     console.log(`[migrate] ${r.status === "Success" ? "applied" : r.status.toLowerCase()} ${r.migrationName}`);

@@ -1,0 +1,8 @@
+// Every migration, in order. Listed statically (rather than read from the folder at run time) so that the
+// same list works under tsx, vitest and bundlers. Add each new migration here.
+import type { Migration } from "kysely";
+import * as createCoreTables from "./2026_12_01_000000_create_core_tables";
+
+export const migrations: Record<string, Migration> = {
+  "2026_12_01_000000_create_core_tables": createCoreTables,
+};

@@ -1,0 +1,31 @@
+#!/usr/bin/env bash
+# npm run demo: install if needed, start PostgreSQL and the fake SMTP server on loopback, migrate, seed,
+# build, and serve Branchline on http://localhost:3000 (PORT to change). Ctrl-C stops everything it started.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+
+PORT="${PORT:-3000}"
+ensure_dependencies
+bash scripts/services.sh start
+trap 'bash scripts/services.sh stop' EXIT
+
+npm run --silent db:migrate
+npm run --silent db:seed
+echo "[demo] building (about half a minute)" >&2
+node_modules/.bin/next build >.data/run/build.log 2>&1 || { tail -40 .data/run/build.log; exit 1; }
+
+export NEXTAUTH_URL="http://localhost:$PORT"
+export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(ensure_secret)}"
+export BRANCHLINE_MAILBOX_URL="http://127.0.0.1:${MAILBOX_PORT:-2526}"
+
+cat <<MSG
+
+  Branchline is starting on http://localhost:$PORT
+
+  Demo owner (also site administrator):  owner@lindenbrook.example    / lindenbrook-demo-owner
+  Demo viewer (read-only):               referee@lindenbrook.example  / lindenbrook-demo-viewer
+  Mail sent by the demo (sign-in links, password resets):  http://localhost:$PORT/dev/mailbox
+
+MSG
+node_modules/.bin/next start -p "$PORT"

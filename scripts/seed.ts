@@ -1,0 +1,79 @@
+/**
+ * Demo data, all invented: an owner and a viewer account, and a project of a fictitious research group with
+ * three scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab).
+ * Idempotent: a second run finds the demo account and changes nothing. Run with the react-server condition
+ * (npm run db:seed) so that the data access layer's server-only marker resolves.
+ */
+import { createDb } from "../db/connect";
+import { addMemberByEmail } from "../db/members";
+import { createProject } from "../db/projects";
+import { createScenario } from "../db/scenarios";
+import { createUser, findUserByEmail } from "../db/users";
+import { solarMass } from "../physics/constants";
+import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
+
+export const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner", name: "Demo Owner (group lead)" };
+export const DEMO_VIEWER = { email: "referee@lindenbrook.example", password: "lindenbrook-demo-viewer", name: "Demo Viewer (referee)" };
+
+const e = 1.602_176_634e-19;
+
+function flatSpaceStudy(): ScenarioDocument {
+  const doc = defaultScenarioDocument();
+  doc.source = { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null };
+  doc.separation = { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 };
+  return doc;
+}
+
+function hoveringLab(): ScenarioDocument {
+  const doc = defaultScenarioDocument();
+  doc.background = { kind: "schwarzschild", massKg: 10 * solarMass.value };
+  doc.lab = { placement: "areal-radius", arealRadiusMetres: 1.5e5 };
+  doc.source = { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null };
+  doc.separation = { axis: "radial", split: "symmetric", distanceMetres: 1e-5 };
+  doc.protocol = {
+    kind: "segments",
+    separation: { durationSeconds: 0.05, shape: "minimum-jerk" },
+    hold: { durationSeconds: 1 },
+    recombination: { durationSeconds: 0.05, shape: "minimum-jerk" },
+  };
+  return doc;
+}
+
+function acceleratedLab(): ScenarioDocument {
+  const doc = defaultScenarioDocument();
+  doc.background = { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 };
+  doc.source = { chargeCoulombs: 10 * e, massKg: 1e-15, labMassKg: null };
+  doc.separation = { axis: "tangential", split: "one-branch-stays", distanceMetres: 5e-7 };
+  return doc;
+}
+
+async function seed(): Promise<void> {
+  const db = createDb(undefined, 2);
+  try {
+    if (await findUserByEmail(db, DEMO_OWNER.email)) {
+      console.log("[seed] demo data already present");
+      return;
+    }
+    const owner = await createUser(db, { ...DEMO_OWNER, emailVerified: true, siteRole: "admin" });
+    await createUser(db, { ...DEMO_VIEWER, emailVerified: true });
+    const actor = { userId: owner.id, siteRole: owner.siteRole };
+    const project = await createProject(db, actor, {
+      name: "Lindenbrook matter-wave group: horizon budget",
+      description: "Which-path budgets for a charged microsphere interferometer, from the bench to a lab near a horizon (invented demo data).",
+    });
+    await addMemberByEmail(db, actor, project.id, DEMO_VIEWER.email, "viewer");
+    await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
+    await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
+    await createScenario(db, actor, project.id, { title: "Accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
+    console.log("[seed] created the demo project with three scenarios");
+  } finally {
+    await db.destroy();
+  }
+}
+
+if (require.main === module) {
+  seed().catch((err) => {
+    console.error("[seed] failed:", err instanceof Error ? err.message : err);
+    process.exit(1);
+  });
+}

@@ -17,6 +17,10 @@ import type { Background, StaticLabPosition } from "./types";
 
 export { BackgroundInputError, type BackgroundInputErrorCode } from "./errors";
 export type * from "./types";
+export { diagramBoundaries, type DiagramBoundary, type DiagramBoundaryKind } from "./boundaries";
+export { constantRadiusCurve, constantTimeCurve } from "./grid";
+export { blackHoleInteriorToDiagram, singularityCurve } from "./schwarzschild-interior";
+export { horizonTemperatureKelvin } from "./horizon-temperature";
 
 export interface MakeBackgroundOptions {
   /** Minkowski only: the length L of the diagram's arctan((ct ± r)/L); default one light-second. */

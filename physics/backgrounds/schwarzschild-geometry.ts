@@ -35,7 +35,9 @@ export function schwarzschildTortoiseMetres(rMetres: number, horizonRadiusMetres
 export function schwarzschildRadiusFromTortoiseMetres(tortoiseMetres: number, horizonRadiusMetres: number): number {
   const s = tortoiseMetres / horizonRadiusMetres - 1;
   const logY = descendToRoot((l) => Math.exp(l) + l - s, (l) => Math.exp(l) + 1, s < 1 ? s : Math.log(s));
-  return horizonRadiusMetres * (1 + Math.exp(logY));
+  // e^ℓ amplifies ℓ's rounding by |ℓ|; one Newton step on y + ln y = s itself restores full relative precision.
+  const y = Math.exp(logY);
+  return horizonRadiusMetres * (1 + y - (y + logY - s) / (1 + 1 / y));
 }
 
 /**

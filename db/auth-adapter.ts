@@ -11,7 +11,7 @@ import { findUserByEmail, findUserById, normaliseEmail } from "./users";
 export function branchlineAuthAdapter(db: Kysely<Database>): Adapter {
   const toAdapterUser = (u: User): AdapterUser => ({ id: u.id, email: u.email, name: u.name, emailVerified: u.emailVerifiedAt });
   return {
-    async createUser(user) {
+    async createUser(user: Omit<AdapterUser, "id">) {
       const email = normaliseEmail(user.email);
       const row = await db
         .insertInto("users")

@@ -7,7 +7,8 @@ import { NextRequest } from "next/server";
 import { getDb } from "@/db";
 import { createUser } from "@/db/users";
 
-type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
+// Route handlers type their own params; the harness passes whatever the case names.
+type Handler = (req: NextRequest, ctx: { params: Promise<any> }) => Promise<Response>;
 
 export interface CallOptions {
   params?: Record<string, string>;

@@ -76,20 +76,26 @@ export function gudermannianSqueeze(hubbleRatePerSecond: number): NullSqueeze {
   };
 }
 
+/** (P, Q) → (T, X) = ((P + Q)/2, (Q − P)/2). */
 export function diagramPointFromNull(P: number, Q: number): DiagramPoint {
   return { T: (P + Q) / 2, X: (Q - P) / 2 };
 }
 
+/** (T, X) → (P, Q) = (T − X, T + X), the inverse of diagramPointFromNull. */
 export function nullFromDiagramPoint(point: DiagramPoint): { P: number; Q: number } {
   return { P: point.T - point.X, Q: point.T + point.X };
 }
 
+/** The radial part of a static chart: the tortoise coordinate and its inverse. */
 export interface StaticChart {
   tortoiseMetres(rMetres: number): number;
   radiusFromTortoiseMetres(tortoiseMetres: number): number | null;
 }
 
-/** The conformal map of a static chart: (t, r) → (u, v) → (P, Q) → (T, X), and back. */
+/**
+ * The conformal map of a static chart: (t, r) → (u, v) → (P, Q) → (T, X), and back. fromDiagram returns null off
+ * the chart, including points that rounding has put on its boundary.
+ */
 export function staticConformalMap(chart: StaticChart, p: NullSqueeze, q: NullSqueeze): ConformalMap {
   return {
     toDiagram(tSeconds, rMetres) {

@@ -6,6 +6,7 @@ export type BackgroundInputErrorCode =
   | "lab-beyond-cosmological-horizon"
   | "placement-does-not-fit-background";
 
+/** Thrown by makeBackground; `path` and `message` are ready for the API error shape's `fields`. */
 export class BackgroundInputError extends Error {
   /** Dotted path into the scenario document, e.g. "lab.arealRadiusMetres". */
   readonly path: string;

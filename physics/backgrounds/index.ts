@@ -21,6 +21,7 @@ export { diagramBoundaries, type DiagramBoundary, type DiagramBoundaryKind } fro
 export { constantRadiusCurve, constantTimeCurve } from "./grid";
 export { blackHoleInteriorToDiagram, singularityCurve } from "./schwarzschild-interior";
 export { horizonTemperatureKelvin } from "./horizon-temperature";
+export { schwarzschildRadiusMetres } from "./schwarzschild-geometry";
 
 export interface MakeBackgroundOptions {
   /** Minkowski only: the length L of the diagram's arctan((ct ± r)/L); default one light-second. */

@@ -6,6 +6,7 @@
 import { c, G } from "../constants";
 import type { StaticLabPosition } from "./types";
 
+/** Schwarzschild radius r_s = 2GM/c² of a mass in kg (Schwarzschild 1916; MTW ch. 31). */
 export function schwarzschildRadiusMetres(massKg: number): number {
   return (2 * G * massKg) / (c * c);
 }
@@ -49,6 +50,7 @@ export function schwarzschildProperDistanceAboveHorizonMetres(rMetres: number, h
   return Math.sqrt(rMetres * above) + horizonRadiusMetres * Math.asinh(Math.sqrt(above / horizonRadiusMetres));
 }
 
+/** A lab at areal radius r > r_s: lapse √((r − r_s)/r), 1 − lapse = (r_s/r)/(1 + lapse), proper distance ℓ(r). */
 export function schwarzschildPositionAtRadius(rMetres: number, horizonRadiusMetres: number): StaticLabPosition {
   const lapse = Math.sqrt((rMetres - horizonRadiusMetres) / rMetres);
   return {

@@ -46,6 +46,11 @@ export interface DiagramPoint {
   X: number;
 }
 
+/**
+ * Precision: diagram coordinates are doubles of order 1. With the exponential squeezes (Schwarzschild, Rindler,
+ * de Sitter) null coordinates beyond about 35c/κ (κ → H for de Sitter) crowd onto the diagram's edge and no longer
+ * invert (fromDiagram gives null there): the drawing stays right, the coordinates are lost.
+ */
 export interface ConformalMap {
   /** Static coordinates (seconds, metres) → diagram point, for the region the lab lives in. */
   toDiagram(tSeconds: number, rMetres: number): DiagramPoint;
@@ -76,7 +81,7 @@ export interface Background {
   horizon: HorizonInfo | null;
   /** Local (Tolman) temperature at the lab, kelvin: the horizon temperature divided by the redshift factor. */
   labLocalTemperatureKelvin: number;
-  /** Tortoise coordinate r*(r), metres, so that u = ct − r*, v = ct + r* are null. */
+  /** Tortoise coordinate r*(r), metres, so that u = ct − r*, v = ct + r* are null; NaN outside the static region. */
   tortoiseMetres(rMetres: number): number;
   /** Inverse of tortoiseMetres; null where no radius of the static region has that r*. */
   radiusFromTortoiseMetres(tortoiseMetres: number): number | null;

@@ -78,6 +78,16 @@ export const displaySchema = z
   .object({ theme: z.enum(["light", "dark"]).default("light"), showGrid: z.boolean().default(true) })
   .default({ theme: "light", showGrid: true });
 
+/**
+ * Numerical settings. Optional: a document without them gets the defaults. `kinkTimeResolutionSeconds` is the
+ * time step at which a kinked profile (whose far-field photon number grows without bound as the step shrinks) is
+ * evaluated; null means the shortest moving segment divided by 1024.
+ */
+export const numericsSchema = z
+  .object({ kinkTimeResolutionSeconds: positive("kink time resolution").nullable().default(null) })
+  .default({ kinkTimeResolutionSeconds: null });
+export type NumericsSpec = z.infer<typeof numericsSchema>;
+
 export const scenarioDocumentV1Schema = z.object({
   schemaVersion: z.literal(1),
   background: backgroundSchema,
@@ -86,6 +96,7 @@ export const scenarioDocumentV1Schema = z.object({
   separation: separationSchema,
   protocol: protocolSchema,
   display: displaySchema,
+  numerics: numericsSchema,
 });
 
 export const scenarioDocumentSchema = scenarioDocumentV1Schema;
@@ -143,5 +154,6 @@ export function defaultScenarioDocument(): ScenarioDocument {
       recombination: { durationSeconds: 0.01, shape: "minimum-jerk" },
     },
     display: { theme: "light", showGrid: true },
+    numerics: { kinkTimeResolutionSeconds: null },
   };
 }

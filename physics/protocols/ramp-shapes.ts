@@ -1,0 +1,46 @@
+/**
+ * Ramp shapes: the fraction σ(u) of the full separation reached at dimensionless time u ∈ [0, 1] of a separation
+ * ramp (a recombination ramp runs the same shape backwards, 1 − σ(u)), and its rate dσ/du.
+ *
+ * Smoothness matters for the far-field count: where the velocity jumps (linear), the photon number grows without
+ * bound as the time resolution shrinks; where only the acceleration jumps (smoothstep, cosine), |ṽ(ω)|² falls as
+ * ω⁻⁴; minimum-jerk (position C², acceleration continuous, the jerk jumps at the ends) falls as ω⁻⁶.
+ * Minimum-jerk: T. Flash and N. Hogan, J. Neurosci. 5, 1688 (1985), the quintic 10u³ − 15u⁴ + 6u⁵.
+ */
+import type { RampShape } from "../scenario/schema";
+
+export interface RampShapeDefinition {
+  fraction(u: number): number;
+  rate(u: number): number;
+  /** Largest |dσ/du| over the ramp. */
+  peakRate: number;
+  /** True when the velocity jumps at the ends of the ramp. */
+  kinked: boolean;
+}
+
+export const rampShapes: Readonly<Record<RampShape, RampShapeDefinition>> = {
+  smoothstep: {
+    fraction: (u) => u * u * (3 - 2 * u),
+    rate: (u) => 6 * u * (1 - u),
+    peakRate: 1.5,
+    kinked: false,
+  },
+  cosine: {
+    fraction: (u) => 0.5 * (1 - Math.cos(Math.PI * u)),
+    rate: (u) => 0.5 * Math.PI * Math.sin(Math.PI * u),
+    peakRate: Math.PI / 2,
+    kinked: false,
+  },
+  "minimum-jerk": {
+    fraction: (u) => u * u * u * (10 + u * (-15 + 6 * u)),
+    rate: (u) => 30 * u * u * (1 - u) * (1 - u),
+    peakRate: 30 / 16,
+    kinked: false,
+  },
+  linear: {
+    fraction: (u) => u,
+    rate: () => 1,
+    peakRate: 1,
+    kinked: true,
+  },
+};

@@ -1,0 +1,178 @@
+/**
+ * The ramp-driven count per unit squared source, ⟨N⟩_ramp / A² = ∫₀^∞ W_rest(ω) |ṽ(ω)/A|² dω, by FFT, converged
+ * by doubling the samples until the total changes by less than 1e-3 relative.
+ *
+ * Per window group (physics/spectra/window-groups.ts) of duration τ_g, with τ₀ the longest and r = τ₀/τ_g:
+ *   J_g = r ∫₀^∞ w̄(rΩ, ᾱ) |ĝ_g(Ω)|² dΩ,  ⟨N⟩_ramp/A² = K τ₀^{−p−1} [Σ_g J_g + 2 Σ_{g<h} X_gh].
+ * The Ω integral runs on the FFT grid (trapezoid, step π/2, to the Nyquist frequency πn) after subtracting a
+ * reference R(Ω) = (c₀ + c₂Ω²) e^{−s²Ω²} (s = ¼) that matches |ĝ|² to O(Ω⁴) at Ω = 0; R's own integral is done in
+ * closed form (inertial part: ∫Ω^p e^{−s²Ω²} = Γ((p+1)/2)/(2s^{p+1})) plus Gauss–Legendre for the thermal part.
+ * Why: the weight ~ |Ω|^p is not smooth at Ω = 0 when extended evenly, and a ramp alone has |ĝ(0)|² = 1, so the plain
+ * trapezoid would err by (π/2)²/12 relative to the O(1) integral; after the subtraction the error is O(Ω⁶) terms.
+ * X_gh, the interference of well-separated groups, is computed in the time domain (physics/spectra/cross-term.ts).
+ *
+ * A kinked profile has no limit (the count grows like the logarithm of the bandwidth): it is evaluated at the time
+ * step the document states, or the shortest moving window / 1024, and the change against half that resolution is
+ * reported, unconverged.
+ */
+import type { MotionWindow, SeparationHistory } from "../protocols/types";
+import type { Convergence } from "../result";
+import { rampKernel, rampWeight, thermalCorrectionWeight, type ChannelDefinition } from "../spectra/channels";
+import { crossTerm } from "../spectra/cross-term";
+import { integrateGaussLegendre } from "../spectra/gauss-legendre";
+import { groupWindows, type WindowGroup } from "../spectra/window-groups";
+import { PADDING_FACTOR, windowSpectrum } from "../spectra/window-spectrum";
+
+export const CONVERGENCE_TARGET = 1e-3;
+const BASE_SAMPLES_PER_SHORTEST_WINDOW = 256;
+const MAX_SAMPLES = 1 << 18;
+const MIN_SAMPLES = 64;
+const MAX_LEVELS = 8;
+const DEFAULT_KINK_SAMPLES = 1024;
+const REFERENCE_WIDTH = 0.25;
+const CROSS_ORDER = 24;
+
+export interface RampIntegral {
+  /** log10 of ⟨N⟩_ramp / A², A the source amplitude in SI; −Infinity when there is no motion. */
+  log10PerSquaredSource: number;
+  convergence: Convergence;
+}
+
+function nextPowerOfTwo(x: number): number {
+  return 2 ** Math.ceil(Math.log2(Math.max(1, x)));
+}
+
+function samplesFor(group: WindowGroup, perShortest: number): number {
+  const n = nextPowerOfTwo((perShortest * group.window.durationSeconds) / group.shortestMovingSeconds);
+  return Math.min(MAX_SAMPLES, Math.max(MIN_SAMPLES, n));
+}
+
+function factorial(k: number): number {
+  let f = 1;
+  for (let i = 2; i <= k; i++) f *= i;
+  return f;
+}
+
+/** ∫₀^∞ Ω^p (c₀ + c₂Ω²) e^{−s²Ω²} dΩ for odd p. */
+function inertialReferenceIntegral(p: number, c0: number, c2: number): number {
+  const s = REFERENCE_WIDTH;
+  const a = (p + 1) / 2;
+  return (c0 * factorial(a - 1)) / (2 * s ** (p + 1)) + (c2 * factorial(a)) / (2 * s ** (p + 3));
+}
+
+/** ∫₀^∞ corr(rΩ) R(Ω) dΩ on panels that halve towards Ω = 0, where the thermal correction has its structure. */
+function thermalReferenceIntegral(correction: (omega: number) => number, scale: number, alphaBar: number, c0: number, c2: number): number {
+  const s = REFERENCE_WIDTH;
+  const top = 7 / s;
+  const reference = (omega: number) => correction(scale * omega) * (c0 + c2 * omega * omega) * Math.exp(-s * s * omega * omega);
+  const finest = 1e-3 * Math.min(alphaBar / scale, top);
+  let sum = 0;
+  let hi = top;
+  for (let k = 0; k < 80 && hi > finest; k++) {
+    sum += integrateGaussLegendre(reference, hi / 2, hi, 12);
+    hi /= 2;
+  }
+  return sum + integrateGaussLegendre(reference, 0, hi, 12);
+}
+
+function groupIntegral(window: MotionWindow, definition: ChannelDefinition, samples: number, scale: number, alphaBar: number): number {
+  const spectrum = windowSpectrum(window, definition, samples);
+  const weight = rampWeight(definition, alphaBar);
+  const [mu0, mu1, mu2] = spectrum.moments;
+  const c0 = mu0 * mu0;
+  const c2 = mu1 * mu1 - mu0 * mu2 + c0 * REFERENCE_WIDTH * REFERENCE_WIDTH;
+  const s2 = REFERENCE_WIDTH * REFERENCE_WIDTH;
+  const step = spectrum.frequencyStep;
+  const last = spectrum.power.length - 1;
+  let trapezoid = 0;
+  for (let j = 0; j <= last; j++) {
+    const omega = j * step;
+    const residual = spectrum.power[j] - (c0 + c2 * omega * omega) * Math.exp(-s2 * omega * omega);
+    const term = weight(scale * omega) * residual;
+    trapezoid += j === 0 || j === last ? 0.5 * term : term;
+  }
+  trapezoid *= step;
+  let reference = scale ** definition.power * inertialReferenceIntegral(definition.power, c0, c2);
+  if (alphaBar > 0) reference += thermalReferenceIntegral(thermalCorrectionWeight(definition, alphaBar), scale, alphaBar, c0, c2);
+  return scale * (trapezoid + reference);
+}
+
+interface LevelResult {
+  total: number;
+  samplesPerWindow: number;
+  timeStepSeconds: number;
+}
+
+function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, referenceSeconds: number, alphaBar: number, perShortest: number): LevelResult {
+  let total = 0;
+  let samplesPerWindow = 0;
+  let timeStepSeconds = Infinity;
+  for (const group of groups) {
+    const n = samplesFor(group, perShortest);
+    samplesPerWindow = Math.max(samplesPerWindow, n);
+    timeStepSeconds = Math.min(timeStepSeconds, group.window.durationSeconds / n);
+    total += groupIntegral(group.window, definition, n, referenceSeconds / group.window.durationSeconds, alphaBar);
+  }
+  const kernel = rampKernel(definition, alphaBar);
+  for (let g = 0; g < groups.length; g++) {
+    for (let h = g + 1; h < groups.length; h++) {
+      total += 2 * crossTerm(groups[g].window, groups[h].window, definition, kernel, referenceSeconds, CROSS_ORDER);
+    }
+  }
+  return { total, samplesPerWindow, timeStepSeconds };
+}
+
+function relativeChange(coarse: number, fine: number): number {
+  if (fine === coarse) return 0;
+  return Math.abs(fine - coarse) / Math.max(Math.abs(fine), Number.MIN_VALUE);
+}
+
+/**
+ * ⟨N⟩_ramp / A² for a separation history in a channel whose field is thermal at α (s⁻¹) along the lab's worldline
+ * (α = 0: the inertial vacuum). `kinkTimeResolutionSeconds` is the stated resolution for kinked profiles.
+ */
+export function rampQuantaPerSquaredSource(
+  history: SeparationHistory,
+  definition: ChannelDefinition,
+  alphaPerSecond: number,
+  kinkTimeResolutionSeconds: number | null,
+): RampIntegral {
+  const groups = groupWindows(history.windows);
+  const mode = groups.length === 0 ? "none" : groups.length === 1 && history.windows.length > 1 ? "whole-protocol" : "separate-ramps";
+  if (groups.length === 0) {
+    return { log10PerSquaredSource: -Infinity, convergence: { relativeChange: 0, converged: true, samplesPerWindow: 0, transformLength: 0, mode, timeStepSeconds: 0 } };
+  }
+  const referenceSeconds = Math.max(...groups.map((g) => g.window.durationSeconds));
+  const alphaBar = alphaPerSecond * referenceSeconds;
+  const shortest = Math.min(...groups.map((g) => g.shortestMovingSeconds));
+  const kinked = groups.some((g) => g.window.kinked);
+
+  let coarse: LevelResult;
+  let fine: LevelResult;
+  if (kinked) {
+    const perShortest = kinkTimeResolutionSeconds === null ? DEFAULT_KINK_SAMPLES : Math.max(2, shortest / kinkTimeResolutionSeconds);
+    coarse = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest / 2);
+    fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
+  } else {
+    let perShortest = BASE_SAMPLES_PER_SHORTEST_WINDOW;
+    coarse = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
+    fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, 2 * perShortest);
+    for (let level = 1; level < MAX_LEVELS && relativeChange(coarse.total, fine.total) > CONVERGENCE_TARGET; level++) {
+      if (fine.samplesPerWindow >= MAX_SAMPLES) break;
+      perShortest *= 2;
+      coarse = fine;
+      fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, 2 * perShortest);
+    }
+  }
+  const change = relativeChange(coarse.total, fine.total);
+  const convergence: Convergence = {
+    relativeChange: change,
+    converged: change <= CONVERGENCE_TARGET,
+    samplesPerWindow: fine.samplesPerWindow,
+    transformLength: PADDING_FACTOR * fine.samplesPerWindow,
+    mode,
+    timeStepSeconds: fine.timeStepSeconds,
+  };
+  const log10 = fine.total > 0 ? definition.log10Coefficient - (definition.power + 1) * Math.log10(referenceSeconds) + Math.log10(fine.total) : -Infinity;
+  return { log10PerSquaredSource: log10, convergence };
+}

@@ -1,0 +1,206 @@
+/**
+ * Where every reported number comes from: one entry per formula, keyed by the `sourceKey` each Quantity carries.
+ * The /methods page renders this table; keep each entry's formula the one the code evaluates.
+ */
+
+export interface SourceEntry {
+  title: string;
+  citation: string;
+  /** The formula as evaluated, in LaTeX (SI units). */
+  formula: string;
+  assumptions: string[];
+  failureModes: string[];
+}
+
+const farFieldAssumptions = [
+  "dipole (resp. quadrupole) approximation: separation much smaller than c times the ramp time",
+  "slow motion: branch speeds much below c",
+  "the field starts and ends in its vacuum; only the difference of the branches' sources counts",
+];
+
+const thermalAssumptions = [
+  "the lab is static and the field is in the state regular on the horizon (Minkowski vacuum for Rindler, Bunch–Davies for de Sitter)",
+  "separation much smaller than the distance to the horizon, so the field is sampled on one worldline",
+  "each quantum is counted once: those crossing the horizon are the same as those reaching infinity",
+];
+
+const entries = {
+  "far-field-em": {
+    title: "Photons radiated to null infinity by the dipole difference (Larmor's formula counted in quanta)",
+    citation:
+      "J. D. Jackson, Classical Electrodynamics, 3rd ed., §9.2 and §14.2 (Larmor power); spontaneous-emission normalisation A = ω³|d|²/(3πε₀ħc³); " +
+      "D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 105, 086001 (2022), arXiv:2112.10798; A. Belenchia et al., PRD 98, 126009 (2018)",
+    formula: "\\langle N\\rangle_\\infty = \\frac{1}{6\\pi^2\\varepsilon_0\\hbar c^3}\\int_0^\\infty \\omega^3\\,|\\Delta\\tilde p(\\omega)|^2\\,d\\omega,\\quad \\Delta p = q\\,(x_A - x_B)",
+    assumptions: farFieldAssumptions,
+    failureModes: [
+      "kinked paths (velocity jumps): the count grows like the logarithm of the bandwidth and is reported at the stated time resolution",
+      "a jump of the separation (branches starting or ending apart) is not a finite protocol",
+    ],
+  },
+  "far-field-gw": {
+    title: "Gravitons radiated to null infinity by the quadrupole difference (the quadrupole formula counted in quanta)",
+    citation:
+      "L. D. Landau & E. M. Lifshitz, The Classical Theory of Fields, §110; P. C. Peters & J. Mathews, Phys. Rev. 131, 435 (1963); " +
+      "D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 105, 086001 (2022), arXiv:2112.10798",
+    formula:
+      "\\langle N\\rangle_\\infty = \\frac{G}{5\\pi\\hbar c^5}\\int_0^\\infty \\omega^5 \\sum_{ij}|\\Delta\\tilde I^{\\rm STF}_{ij}(\\omega)|^2 d\\omega,\\quad \\Delta I_{ij} = m_{\\rm eff}(x_A^2 - x_B^2)(n_in_j - \\tfrac13\\delta_{ij})",
+    assumptions: [
+      ...farFieldAssumptions,
+      "the lab recoils to keep the centre of mass fixed: m_eff = m(1 + m/M_lab) when the document gives a lab mass, m otherwise",
+      "a symmetric split has equal branch quadrupoles: the leading-order difference is exactly zero (higher multipoles not computed)",
+    ],
+    failureModes: ["as for the electromagnetic count; octupole and higher orders are not included"],
+  },
+  "rindler-em": {
+    title: "Uniformly accelerated lab: the spectral formula with the accelerated-observer electric-field spectrum",
+    citation:
+      "T. H. Boyer, PRD 21, 2137 (1980); S. Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986); " +
+      "D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026",
+    formula:
+      "\\langle N\\rangle = \\frac{1}{\\hbar^2}\\int\\frac{d\\omega}{2\\pi}|\\Delta\\tilde p|^2 S(\\omega),\\ S(\\omega) = \\frac{\\hbar\\omega(\\omega^2 + a^2/c^2)}{3\\pi\\varepsilon_0 c^3(1 - e^{-2\\pi c\\omega/a})},\\ S(0) = \\frac{\\hbar a^3}{6\\pi^2\\varepsilon_0 c^6}",
+    assumptions: thermalAssumptions,
+    failureModes: ["separation comparable with c²/a", "kinked paths (ramp-driven part reported at the stated resolution)"],
+  },
+  "rindler-gw": {
+    title: "Uniformly accelerated lab, gravity: thermal spectrum with the spin-2 factor (assumed form)",
+    citation:
+      "scalings from D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026; " +
+      "the (ω² + a²/c²)(ω² + 4a²/c²) density of states is the Fourier transform of a csch⁶ correlator, assumed here, to confirm",
+    formula:
+      "\\langle N\\rangle = \\int_0^\\infty \\frac{2G}{15\\pi\\hbar c^5}\\,\\frac{(\\omega^2+\\alpha^2)(\\omega^2+4\\alpha^2)}{\\omega}\\coth\\frac{\\pi\\omega}{\\alpha}\\,|\\tilde{\\dot Q}(\\omega)|^2 d\\omega,\\ \\alpha = a/c",
+    assumptions: [...thermalAssumptions, "isotropic tidal-field correlator along the accelerated worldline (assumed; not established)"],
+    failureModes: ["the coefficient of the hold rate is not established independently: treat as an order-of-magnitude estimate"],
+  },
+  "de-sitter-em": {
+    title: "de Sitter static patch: the thermal spectrum at α = √(a² + c²H²)/c (conformal invariance of Maxwell theory)",
+    citation:
+      "G. W. Gibbons & S. W. Hawking, PRD 15, 2738 (1977); H. Narnhofer, I. Peter, W. Thirring, Int. J. Mod. Phys. B 10, 1507 (1996); " +
+      "S. Deser & O. Levin, CQG 14, L163 (1997); D. L. Danielson, G. Satishchandran, R. M. Wald, arXiv:2301.00026",
+    formula: "S(\\omega)\\ \\text{as for Rindler with}\\ a \\to \\sqrt{a_{\\rm lab}^2 + c^2H^2} = 2\\pi c k_B T_{\\rm local}/\\hbar",
+    assumptions: [...thermalAssumptions, "exact at the centre; off the centre the thermal form at the local temperature is an estimate (to confirm)"],
+    failureModes: ["separation comparable with the distance to the cosmological horizon"],
+  },
+  "de-sitter-gw": {
+    title: "de Sitter static patch, gravity: thermal spin-2 form at the local temperature (assumed form)",
+    citation: "as de-sitter-em and rindler-gw; gravity is not conformally invariant, so this is an estimate",
+    formula: "\\text{as rindler-gw with}\\ \\alpha = 2\\pi k_B T_{\\rm local}/\\hbar",
+    assumptions: [...thermalAssumptions, "thermal spin-2 density of states assumed"],
+    failureModes: ["order-of-magnitude only"],
+  },
+  "schwarzschild-far-em": {
+    title: "Black hole, lab far away: published order-of-magnitude estimate of the horizon decoherence rate",
+    citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, 'Black holes decohere quantum superpositions', IJMPD 31, 2241003 (2022), arXiv:2205.06279",
+    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^3M^3q^2d^2}{\\varepsilon_0\\hbar c^6 D^6}\\quad(\\text{Planck units: } M^3q^2d^2/D^6),\\ D = \\text{areal radius of the lab}",
+    assumptions: ["D ≫ 2GM/c²", "Unruh state", "rate per Killing time, converted to lab proper time by the redshift factor"],
+    failureModes: ["order of magnitude only: the coefficient is not given by the source", "not valid near the horizon"],
+  },
+  "schwarzschild-far-gw": {
+    title: "Black hole, lab far away, gravity: published order-of-magnitude estimate",
+    citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, IJMPD 31, 2241003 (2022), arXiv:2205.06279",
+    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^6M^5 (m_{\\rm eff}d^2)^2}{\\hbar c^{10}D^{10}}",
+    assumptions: ["D ≫ 2GM/c²", "the quadrupole scale m d² of the source difference (zero for a symmetric split)"],
+    failureModes: ["order of magnitude only", "not valid near the horizon"],
+  },
+  "schwarzschild-near-em": {
+    title: "Black hole, lab near the horizon: Rindler limit with the lab's local acceleration",
+    citation: "Rindler spectrum (Boyer 1980; Takagi 1986) with a = GM/(b²√(1 − 2GM/(c²b))); arXiv:2205.06279, arXiv:2301.00026",
+    formula: "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{q^2d^2 a^3}{6\\pi^2\\varepsilon_0\\hbar c^6}",
+    assumptions: ["proper distance to the horizon ≪ 2GM/c²", "rate per lab proper time"],
+    failureModes: ["estimate: neglects the curvature of the horizon and the field's back-scattering"],
+  },
+  "schwarzschild-near-gw": {
+    title: "Black hole, lab near the horizon, gravity: Rindler limit (thermal spin-2 form) with the local acceleration",
+    citation: "as rindler-gw with a = GM/(b²√(1 − 2GM/(c²b)))",
+    formula: "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{8G}{15\\pi\\hbar c^5}\\Big(\\frac{a}{c}\\Big)^5 (m_{\\rm eff}d^2)^2",
+    assumptions: ["proper distance to the horizon ≪ 2GM/c²", "assumed spin-2 thermal form"],
+    failureModes: ["order of magnitude only"],
+  },
+  "schwarzschild-interpolated-em": {
+    title: "Black hole, lab between near and far: log-linear interpolation of the two estimates",
+    citation: "interpolation of schwarzschild-near-em (b ≤ 1.01·2GM/c²) and schwarzschild-far-em (b ≥ 10·2GM/c²) in ln b",
+    formula: "\\log\\Gamma = (1-w)\\log\\Gamma_{\\rm near} + w\\log\\Gamma_{\\rm far},\\ w = \\ln(b/1.01r_s)/\\ln(10/1.01)",
+    assumptions: ["both estimates hold at their ends"],
+    failureModes: ["no physics between the ends: a marked interpolation, not a computation"],
+  },
+  "schwarzschild-interpolated-gw": {
+    title: "Black hole, lab between near and far, gravity: log-linear interpolation of the two estimates",
+    citation: "interpolation of schwarzschild-near-gw and schwarzschild-far-gw in ln b",
+    formula: "\\log\\Gamma = (1-w)\\log\\Gamma_{\\rm near} + w\\log\\Gamma_{\\rm far}",
+    assumptions: ["both estimates hold at their ends"],
+    failureModes: ["a marked interpolation, not a computation"],
+  },
+  "schwarzschild-ramps": {
+    title: "Black hole: quanta of the ramps to null infinity, in the flat-space approximation at the lab",
+    citation: "far-field-em / far-field-gw evaluated in the lab's proper time",
+    formula: "\\langle N\\rangle_\\infty\\ \\text{as far-field, local flat approximation}",
+    assumptions: ["ramp wavelengths short compared with the distance to the hole", "redshift and back-scattering neglected"],
+    failureModes: ["ramps with c·duration comparable with the distance to the horizon"],
+  },
+  "spectral-split": {
+    title: "Split of the spectral count into hold-driven (zero-frequency noise) and ramp-driven parts",
+    citation: "derived: W(ω) = W₀/ω² + W_rest(ω); see physics/spectra/channels.ts; the rate S(0)|Δp|²/ħ² as in arXiv:2407.02567 and arXiv:2405.00804",
+    formula: "\\langle N\\rangle_{\\rm hold} = \\frac{S(0)}{\\hbar^2}\\int \\Delta p(t)^2 dt,\\quad \\langle N\\rangle_{\\rm ramp} = \\int_0^\\infty W_{\\rm rest}(\\omega)|\\tilde{\\dot{\\Delta p}}(\\omega)|^2d\\omega",
+    assumptions: ["the two parts add exactly; the hold part includes the time spent apart during the ramps"],
+    failureModes: ["none beyond those of the spectrum"],
+  },
+  "source-strength-em": {
+    title: "Dipole difference scale q·d",
+    citation: "definition",
+    formula: "A = |q|\\,d_0",
+    assumptions: ["point charge; the lab is neutral"],
+    failureModes: [],
+  },
+  "source-strength-gw": {
+    title: "Quadrupole difference scale m_eff·d² (lab recoil included when the lab mass is given)",
+    citation: "definition; two-body reduced quadrupole μ r² with r = x(1 + m/M_lab)",
+    formula: "A = m\\,(1 + m/M_{\\rm lab})\\,d_0^2\\ \\text{(one branch stays)},\\quad 0\\ \\text{(symmetric split)}",
+    assumptions: ["point mass"],
+    failureModes: [],
+  },
+  decoherence: {
+    title: "Decoherence from the expected number of entangling quanta",
+    citation: "coherent-state overlap |⟨ψ_A|ψ_B⟩| = e^{−⟨N⟩/2}; arXiv:2112.10798, arXiv:2205.06279",
+    formula: "\\mathcal D = 1 - e^{-\\langle N\\rangle/2}",
+    assumptions: ["the field ends in coherent states sourced by each branch"],
+    failureModes: [],
+  },
+  visibility: {
+    title: "Interference visibility",
+    citation: "as decoherence",
+    formula: "|\\langle\\psi_A|\\psi_B\\rangle| = e^{-\\langle N\\rangle/2}",
+    assumptions: [],
+    failureModes: [],
+  },
+  "decoherence-time": {
+    title: "Decoherence time: the hold at which the hold-driven count reaches one quantum",
+    citation: "convention of arXiv:2205.06279 (order of magnitude)",
+    formula: "T_D = 1/\\Gamma_{\\rm hold}",
+    assumptions: ["the hold-driven count grows linearly with the hold"],
+    failureModes: ["none where there is no horizon: reported as absent"],
+  },
+  "combined-channels": {
+    title: "Both channels together",
+    citation: "independent fields: overlaps multiply, counts add",
+    formula: "\\langle N\\rangle = \\langle N\\rangle_{\\rm EM} + \\langle N\\rangle_{\\rm GW}",
+    assumptions: ["no cross-correlation between electromagnetic and gravitational field states"],
+    failureModes: [],
+  },
+  "protocol-kinematics": {
+    title: "Protocol kinematics: durations, peak separation, peak branch speed",
+    citation: "from the document's protocol (physics/protocols)",
+    formula: "v_{\\rm peak} = \\max_t |\\dot x_{A,B}(t)|",
+    assumptions: [],
+    failureModes: ["a jump in the separation has no finite speed"],
+  },
+  "background-lab": {
+    title: "The lab in its background: proper acceleration, redshift factor, local temperature, distance to the horizon",
+    citation: "physics/backgrounds (Tolman, Phys. Rev. 35, 904 (1930); Unruh, PRD 14, 870 (1976); Hawking 1975; Gibbons & Hawking 1977)",
+    formula: "T_{\\rm local} = T_{\\rm horizon}/\\sqrt{-g_{tt}}",
+    assumptions: ["static lab"],
+    failureModes: [],
+  },
+} satisfies Record<string, SourceEntry>;
+
+export type SourceKey = keyof typeof entries;
+
+export const sources: Readonly<Record<SourceKey, SourceEntry>> = entries;

@@ -1,0 +1,159 @@
+/**
+ * The two radiation channels and their spectral weights along the lab's worldline.
+ *
+ * Every count is ⟨N⟩ = ∫₀^∞ W(ω) |ṽ(ω)|² dω, with v(t) = dA f(t)/dt the rate of change of the source (the dipole
+ * difference Δp = q d₀ σ(t) for electromagnetism; the quadrupole scale m d₀² σ(t)² for gravity) and
+ * ṽ(ω) = ∫ v(t) e^{iωt} dt. For a field state that is thermal along the worldline at α = 2π k_B T_local/ħ (in s⁻¹):
+ *
+ *   W(ω) = K ω⁻¹ P(ω²) coth(πω/α),   P(ω²) = Π_k (ω² + k²α²),  k = 1 (EM), k = 1, 2 (gravity).
+ *
+ * Derivation. With the Wightman spectrum S_W(ω) = ∫ dτ e^{iωτ} ⟨E(τ)E(0)⟩, ⟨N⟩ = (1/ħ²)∫dω/2π |Δp̃|² S_W; the even
+ * part of S_W is ½ S(ω) coth-form, and |Δp̃|² = |ṽ|²/ω². For EM, S_W = ħωP/(3πε0c³(1 − e^{−2πω/α})) (Boyer, PRD 21,
+ * 2137 (1980); Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986)), so K_EM = 1/(6π² ε0 ħ c³), and as α → 0,
+ * W → K_EM ω, Larmor's formula counted in quanta. For gravity, K_GW = (2/3)·G/(5π ħ c⁵): the quadrupole formula
+ * counted in quanta, (G/5πħc⁵)∫ω⁵Σ|ΔĨ_ij|², with Σ_ij (n_i n_j − δ_ij/3)² = 2/3 for a difference along one axis;
+ * its thermal form with the spin-2 factor (ω² + α²)(ω² + 4α²) is an assumption (the Fourier transform of a
+ * csch⁶ correlator), flagged where used.
+ *
+ * Split. W has a double pole at ω = 0, W ≈ W₀/ω² with W₀ = K α P(0)/π: it is the zero-frequency noise, whose share
+ * is exactly Γ ∫ f(t)² dt with Γ = π W₀ = K α P(0) (per unit A², s⁻¹): the hold-driven part. The rest,
+ * W_rest = W − W₀/ω², is finite at ω = 0 and carries the ramp-driven part.
+ *
+ * Units: times in a reference scale τ₀ (Ω = ωτ₀, ᾱ = ατ₀), W_rest(ω) = K τ₀^{−p} w̄(Ω, ᾱ) with p = 2·(number of k) − 1.
+ */
+import { G, c, epsilon0, hbar } from "../constants";
+import type { Channel } from "../result";
+
+export interface ChannelDefinition {
+  channel: Channel;
+  /** log10 K, in SI: the coefficient of W. */
+  log10Coefficient: number;
+  /** Power p of the inertial-vacuum weight W = K ω^p. */
+  power: number;
+  /** The k of the thermal factors ω² + k²α². */
+  thermalOrders: readonly number[];
+  /** The channel's source profile f(σ) and df/du from σ and dσ/du. */
+  profile(sigma: number): number;
+  profileRate(sigma: number, sigmaRate: number): number;
+}
+
+export const electromagneticChannel: ChannelDefinition = {
+  channel: "electromagnetic",
+  log10Coefficient: -Math.log10(6 * Math.PI * Math.PI * epsilon0 * hbar * c ** 3),
+  power: 1,
+  thermalOrders: [1],
+  profile: (sigma) => sigma,
+  profileRate: (_sigma, sigmaRate) => sigmaRate,
+};
+
+export const gravitationalChannel: ChannelDefinition = {
+  channel: "gravitational",
+  log10Coefficient: Math.log10((2 / 3) * (G / (5 * Math.PI * hbar))) - 5 * Math.log10(c),
+  power: 3,
+  thermalOrders: [1, 2],
+  profile: (sigma) => sigma * sigma,
+  profileRate: (sigma, sigmaRate) => 2 * sigma * sigmaRate,
+};
+
+/** Coefficients of P(Ω²) − P(0) as a polynomial in Ω² (index i ↔ Ω^{2i}, i ≥ 1), and P(0). */
+function thermalPolynomial(orders: readonly number[], alpha: number): { coefficients: number[]; atZero: number } {
+  let coefficients = [1];
+  for (const k of orders) {
+    const shift = k * k * alpha * alpha;
+    const next = new Array(coefficients.length + 1).fill(0);
+    coefficients.forEach((a, i) => {
+      next[i] += a * shift;
+      next[i + 1] += a;
+    });
+    coefficients = next;
+  }
+  return { coefficients, atZero: coefficients[0] };
+}
+
+/** x coth x − 1, accurate for small x. */
+function xCothXMinusOne(x: number): number {
+  if (x < 0.1) {
+    const x2 = x * x;
+    return x2 * (1 / 3 + x2 * (-1 / 45 + x2 * (2 / 945 - x2 / 4725)));
+  }
+  return x / Math.tanh(x) - 1;
+}
+
+/**
+ * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K, for many Ω at one ᾱ. ᾱ = 0 gives Ω^p exactly.
+ * Two forms, each free of cancellation where it is used: x = πΩ/ᾱ < 1, (ᾱ/πΩ²)[P(xcothx − 1) + (P − P₀)];
+ * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀].
+ */
+export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
+  const p = definition.power;
+  if (alphaBar === 0) return (omega) => omega ** p;
+  const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
+  const minusZero = (omega2: number) => {
+    let sum = 0;
+    for (let i = coefficients.length - 1; i >= 1; i--) sum = (sum + coefficients[i]) * omega2;
+    return sum;
+  };
+  return (omega) => {
+    const omega2 = omega * omega;
+    const x = (Math.PI * omega) / alphaBar;
+    if (x < 1) {
+      if (omega === 0) return (alphaBar / Math.PI) * ((atZero * Math.PI * Math.PI) / (3 * alphaBar * alphaBar) + coefficients[1]);
+      const polynomial = atZero + minusZero(omega2);
+      return (alphaBar / (Math.PI * omega2)) * (polynomial * xCothXMinusOne(x) + minusZero(omega2));
+    }
+    const polynomial = atZero + minusZero(omega2);
+    const boseTail = x > 350 ? 0 : (2 * x) / Math.expm1(2 * x);
+    return polynomial / omega + (alphaBar / (Math.PI * omega2)) * (polynomial * boseTail - atZero);
+  };
+}
+
+/** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */
+export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
+  const p = definition.power;
+  if (alphaBar === 0) return () => 0;
+  const full = rampWeight(definition, alphaBar);
+  const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
+  const top = coefficients.length - 1;
+  return (omega) => {
+    const x = (Math.PI * omega) / alphaBar;
+    if (x < 1) return full(omega) - omega ** p;
+    const omega2 = omega * omega;
+    let belowTop = 0;
+    for (let i = top - 1; i >= 1; i--) belowTop = (belowTop + coefficients[i]) * omega2;
+    const polynomial = atZero + belowTop + coefficients[top] * omega2 ** top;
+    const boseTail = x > 350 ? 0 : (2 * x) / Math.expm1(2 * x);
+    return (atZero + belowTop) / omega + (alphaBar / (Math.PI * omega2)) * (polynomial * boseTail - atZero);
+  };
+}
+
+/**
+ * The time-domain ramp kernel k̄(x̄, ᾱ) = ∫₀^∞ w̄(Ω, ᾱ) cos(Ωx̄) dΩ for x̄ > 0, which couples two ramps that do not
+ * overlap: their cross term is 2∫∫ g₁ g₂ k̄. Derived by integrating k̄'' = −∫Ω² w̄ cos(Ωx̄) dΩ twice with decay at
+ * infinity, where ∫₀^∞ Ω(Ω² + ᾱ²)coth(πΩ/ᾱ)cos(Ωx̄)dΩ = (3/8)ᾱ⁴ csch⁴(ᾱx̄/2) and the spin-2 analogue is
+ * −(15/8)ᾱ⁶ csch⁶(ᾱx̄/2):
+ *   EM:      k̄ = −ᾱ²[ln(1 − e^{−ᾱx̄}) + ¼ csch²(ᾱx̄/2)]                       → −1/x̄² as ᾱ → 0;
+ *   gravity: k̄ = (15/2)ᾱ⁴[csch⁴y/20 − (2/15)csch²y − (8/15)ln(1 − e^{−2y})], y = ᾱx̄/2  → 6/x̄⁴.
+ */
+export function rampKernel(definition: ChannelDefinition, alphaBar: number): (x: number) => number {
+  const gravitational = definition.channel === "gravitational";
+  if (alphaBar === 0) return gravitational ? (x) => 6 / x ** 4 : (x) => -1 / (x * x);
+  if (gravitational) {
+    return (x) => {
+      const y = (alphaBar * x) / 2;
+      const csch2 = 1 / Math.sinh(y) ** 2;
+      return 7.5 * alphaBar ** 4 * ((csch2 * csch2) / 20 - (2 / 15) * csch2 - (8 / 15) * Math.log(-Math.expm1(-2 * y)));
+    };
+  }
+  return (x) => {
+    const y = (alphaBar * x) / 2;
+    return -alphaBar * alphaBar * (Math.log(-Math.expm1(-2 * y)) + 0.25 / Math.sinh(y) ** 2);
+  };
+}
+
+/** log10 of the hold-rate coefficient Γ/A² = K α^{2n+1} Π k² (s⁻¹ per unit A²); −Infinity when α = 0. */
+export function log10HoldRateCoefficient(definition: ChannelDefinition, alphaPerSecond: number): number {
+  if (alphaPerSecond === 0) return -Infinity;
+  const orders = definition.thermalOrders;
+  const productOfSquares = orders.reduce((product, k) => product * k * k, 1);
+  return definition.log10Coefficient + Math.log10(productOfSquares) + (2 * orders.length + 1) * Math.log10(alphaPerSecond);
+}

@@ -1,0 +1,163 @@
+/**
+ * Validity flags, on every result: each check is always present, with status ok, note, caution, invalid or
+ * not-applicable, so a reader sees what was checked as well as what failed.
+ * Thresholds for "≪" are common practice: a ratio below 0.01 is ok, below 0.1 a caution, above it invalid.
+ */
+import type { Background } from "./backgrounds";
+import { c } from "./constants";
+import type { SeparationHistory } from "./protocols/types";
+import { CONVERGENCE_TARGET } from "./estimators/ramp-quanta";
+import { isOutsideDoubleRange } from "./estimators/quantity";
+import type { ChannelResult, FlagStatus, ValidityFlag } from "./result";
+import type { ScenarioDocument } from "./scenario/schema";
+
+const OK_RATIO = 0.01;
+const CAUTION_RATIO = 0.1;
+
+function ratioStatus(ratio: number): FlagStatus {
+  return ratio <= OK_RATIO ? "ok" : ratio <= CAUTION_RATIO ? "caution" : "invalid";
+}
+
+export interface FlagInputs {
+  document: ScenarioDocument;
+  history: SeparationHistory;
+  background: Background;
+  peakBranchSpeedMetresPerSecond: number;
+  electromagnetic: ChannelResult;
+  gravitational: ChannelResult;
+  /** Every reported quantity, for the double-range check. */
+  reported: { name: string; quantity: ChannelResult["totalQuanta"] | null }[];
+}
+
+function slowMotion(speed: number): ValidityFlag {
+  const ratio = speed / c;
+  return {
+    code: "slow-motion",
+    status: ratioStatus(ratio),
+    message: `peak branch speed is ${ratio.toExponential(2)} c; the dipole and quadrupole formulas assume speeds ≪ c`,
+    measure: ratio,
+  };
+}
+
+function separationVsHorizon(d: number, background: Background): ValidityFlag {
+  const distance = background.labProperDistanceToHorizonMetres;
+  if (distance === null) return { code: "separation-vs-horizon", status: "not-applicable", message: "no horizon" };
+  const ratio = d / distance;
+  return {
+    code: "separation-vs-horizon",
+    status: ratioStatus(ratio),
+    message: `separation is ${ratio.toExponential(2)} of the proper distance to the horizon; the estimates sample the field on one worldline and need ≪ 1`,
+    measure: ratio,
+  };
+}
+
+function samplingConverged(channels: ChannelResult[]): ValidityFlag {
+  const active = channels.filter((ch) => ch.exactZeroReason === null && ch.convergence.mode !== "none");
+  if (active.length === 0) return { code: "sampling-converged", status: "not-applicable", message: "no channel needed a transform" };
+  const worst = Math.max(...active.map((ch) => ch.convergence.relativeChange));
+  const converged = worst <= CONVERGENCE_TARGET;
+  return {
+    code: "sampling-converged",
+    status: converged ? "ok" : "caution",
+    message: converged
+      ? `ramp-driven counts changed by at most ${worst.toExponential(2)} at the last doubling of the samples (target ${CONVERGENCE_TARGET})`
+      : `ramp-driven counts still changed by ${worst.toExponential(2)} at the last doubling of the samples: not converged to ${CONVERGENCE_TARGET}`,
+    measure: worst,
+  };
+}
+
+function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): ValidityFlag[] {
+  const kinks = history.kinks.filter((k) => k.kind === "kink");
+  const jumps = history.kinks.filter((k) => k.kind === "jump");
+  const step = Math.min(...channels.map((ch) => (ch.convergence.timeStepSeconds > 0 ? ch.convergence.timeStepSeconds : Infinity)));
+  const at = (list: typeof kinks) => list.slice(0, 5).map((k) => `${k.timeSeconds.toPrecision(4)} s`).join(", ") + (list.length > 5 ? ", …" : "");
+  return [
+    kinks.length === 0
+      ? { code: "kink", status: "ok", message: "the branch velocity is continuous" }
+      : {
+          code: "kink",
+          status: "caution",
+          message:
+            `the branch velocity jumps at ${at(kinks)}: the far-field count grows without bound as the time resolution shrinks; ` +
+            `reported at a time step of ${Number.isFinite(step) ? step.toPrecision(3) : "?"} s. Use smooth ramps (minimum-jerk) for a resolution-free number`,
+        },
+    jumps.length === 0
+      ? { code: "separation-jump", status: "ok", message: "the separation is continuous and starts and ends at zero" }
+      : {
+          code: "separation-jump",
+          status: "invalid",
+          message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or teleport): the counts omit the jump, which would make them diverge`,
+        },
+  ];
+}
+
+function schwarzschildRegime(document: ScenarioDocument, channels: ChannelResult[]): ValidityFlag {
+  if (document.background.kind !== "schwarzschild") return { code: "schwarzschild-regime", status: "not-applicable", message: "not a Schwarzschild background" };
+  const regime = channels[0].regime;
+  const text = {
+    far: "far from the hole (b ≥ 10 r_s): the published order-of-magnitude estimate, coefficient not established",
+    "near-horizon": "near the horizon (b ≤ 1.01 r_s): the Rindler limit with the lab's local acceleration, an estimate",
+    interpolated: "between near and far: the two estimates interpolated in ln b, marked as an interpolation, not a computation",
+  }[regime as "far" | "near-horizon" | "interpolated"];
+  return { code: "schwarzschild-regime", status: regime === "interpolated" ? "caution" : "note", message: `horizon rate estimated ${text}` };
+}
+
+function modelNotes(document: ScenarioDocument, background: Background, gravitational: ChannelResult): ValidityFlag[] {
+  const kind = document.background.kind;
+  const notes: ValidityFlag[] = [];
+  const thermal = kind === "rindler" || kind === "de-sitter";
+  const gravityActive = gravitational.exactZeroReason === null;
+  const offCentre = kind === "de-sitter" && background.labProperAccelerationMetresPerSecondSquared > 0;
+  notes.push(
+    thermal && (gravityActive || offCentre)
+      ? {
+          code: "thermal-form-assumed",
+          status: "note",
+          message: [
+            gravityActive ? "the gravitational spectrum uses the thermal spin-2 form, assumed (to confirm)" : null,
+            offCentre ? "off the de Sitter centre the electromagnetic spectrum is taken thermal at the local temperature (exact only at the centre)" : null,
+          ].filter(Boolean).join("; "),
+        }
+      : { code: "thermal-form-assumed", status: "not-applicable", message: "no assumed spectrum in use" },
+  );
+  notes.push(
+    kind === "schwarzschild"
+      ? { code: "far-field-flat-approximation", status: "note", message: "the ramps' quanta to null infinity are counted in the lab's local flat approximation (no redshift or back-scattering)" }
+      : { code: "far-field-flat-approximation", status: "not-applicable", message: "not needed in this background" },
+  );
+  const split = document.separation.split;
+  notes.push(
+    split === "symmetric"
+      ? { code: "symmetric-split-quadrupole", status: "note", message: "symmetric split: the branches' mass quadrupoles are equal, so the gravitational count is exactly zero at leading order" }
+      : { code: "symmetric-split-quadrupole", status: "not-applicable", message: "one branch stays: the quadrupole difference is m d²" },
+  );
+  notes.push(
+    split !== "symmetric" && document.source.massKg > 0
+      ? document.source.labMassKg
+        ? { code: "lab-recoil", status: "ok", message: "the lab's recoil is included through m_eff = m(1 + m/M_lab)" }
+        : { code: "lab-recoil", status: "note", message: "no lab mass given: the lab is taken as immovable (m_eff = m)" }
+      : { code: "lab-recoil", status: "not-applicable", message: "no quadrupole difference to correct" },
+  );
+  return notes;
+}
+
+function doubleRange(reported: FlagInputs["reported"]): ValidityFlag {
+  const outside = reported.filter((r) => isOutsideDoubleRange(r.quantity)).map((r) => r.name);
+  return outside.length === 0
+    ? { code: "double-range", status: "ok", message: "every value fits a double" }
+    : { code: "double-range", status: "note", message: `outside the range of a double, reported by log10 only: ${outside.join(", ")}` };
+}
+
+export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
+  const channels = [inputs.electromagnetic, inputs.gravitational];
+  return [
+    slowMotion(inputs.peakBranchSpeedMetresPerSecond),
+    separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
+    samplingConverged(channels),
+    ...kinkFlags(inputs.history, channels),
+    schwarzschildRegime(inputs.document, channels),
+    ...modelNotes(inputs.document, inputs.background, inputs.gravitational),
+    doubleRange(inputs.reported),
+    ...inputs.background.flags.map((f) => ({ code: `background:${f.code}`, status: f.severity, message: f.message }) satisfies ValidityFlag),
+  ];
+}

@@ -171,6 +171,13 @@ describe("de Sitter static lab", () => {
     );
   });
 
+  it("flags a lab whose 1 − H²r²/c² is below 1e-12 (common practice, as for Schwarzschild); lapse = sin(Hℓ/c) at proper distance ℓ", () => {
+    const close = makeBackground(deSitter, atProperDistance(1e-7 * (c / H)));
+    expect(close.flags.map((f) => f.code)).toContain("lab-too-close-to-horizon-for-double");
+    expect(relative(close.labRedshiftFactor, Math.sin(1e-7))).toBeLessThan(1e-15);
+    expect(makeBackground(deSitter, atProperDistance(1e-5 * (c / H))).flags).toHaveLength(0);
+  });
+
   it("the inertial lab sits at the centre, unaccelerated, πc/2H from the horizon", () => {
     const centre = makeBackground(deSitter, { placement: "inertial" });
     expect(centre.labProperAccelerationMetresPerSecondSquared).toBe(0);

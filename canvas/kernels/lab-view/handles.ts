@@ -1,0 +1,55 @@
+/** The Lab view's handles: which there are, what each one moves, and where each sits on screen. */
+import type { SeparationSpec } from "@/physics/scenario/schema";
+import { branchAOffsetPerSeparation, segmentTimes, type SegmentsProtocol, type SegmentTimes } from "../timeline";
+import { metresToPx, timeToPx, type LabViewport } from "./viewport";
+
+export type TimeHandleId = "separation-start" | "separation-end" | "hold-end" | "recombination-end";
+export type HandleId = TimeHandleId | "separation-size";
+
+export const HANDLE_IDS: readonly HandleId[] = ["separation-start", "separation-end", "hold-end", "recombination-end", "separation-size"];
+
+export const HANDLE_WORDS: Record<HandleId, string> = {
+  "separation-start": "Start of separation",
+  "separation-end": "End of separation",
+  "hold-end": "End of hold",
+  "recombination-end": "End of recombination",
+  "separation-size": "Separation",
+};
+
+export function isTimeHandle(handle: HandleId): handle is TimeHandleId {
+  return handle !== "separation-size";
+}
+
+export function handleTimeSeconds(handle: TimeHandleId, times: SegmentTimes): number {
+  switch (handle) {
+    case "separation-start":
+      return times.separationStart;
+    case "separation-end":
+      return times.separationEnd;
+    case "hold-end":
+      return times.holdEnd;
+    case "recombination-end":
+      return times.recombinationEnd;
+  }
+}
+
+export type HandlePlacement =
+  | { id: TimeHandleId; axis: "time"; x: number; tSeconds: number }
+  | { id: "separation-size"; axis: "distance"; x: number; y: number; offsetMetres: number };
+
+/** Where each handle sits: time handles as vertical rules across the plot, the separation handle on branch A's plateau. */
+export function handlePlacements(
+  viewport: LabViewport,
+  protocol: SegmentsProtocol,
+  separation: SeparationSpec,
+  originSeconds = 0,
+): HandlePlacement[] {
+  const times = segmentTimes(protocol, originSeconds);
+  const timeHandles = (["separation-start", "separation-end", "hold-end", "recombination-end"] as const).map((id) => {
+    const tSeconds = handleTimeSeconds(id, times);
+    return { id, axis: "time" as const, x: timeToPx(viewport, tSeconds), tSeconds };
+  });
+  const offsetMetres = branchAOffsetPerSeparation(separation) * separation.distanceMetres;
+  const holdMiddlePx = (timeToPx(viewport, times.separationEnd) + timeToPx(viewport, times.holdEnd)) / 2;
+  return [...timeHandles, { id: "separation-size", axis: "distance", x: holdMiddlePx, y: metresToPx(viewport, offsetMetres), offsetMetres }];
+}

@@ -1,0 +1,70 @@
+/**
+ * Derived values for components, memoised on the references they come from so `useStore(store, selector)` sees a
+ * stable value until something it depends on changes.
+ */
+import { handlePlacements, type HandlePlacement } from "../kernels/lab-view/handles";
+import { fitLabViewport, type LabViewport } from "../kernels/lab-view/viewport";
+import { segmentTimes, segmentsProtocolOf, type SegmentsProtocol } from "../kernels/timeline";
+import type { ScenarioDocument, SeparationSpec } from "@/physics/scenario/schema";
+import { sameData } from "./patches";
+import type { EditorData } from "./state";
+
+/** Remembers the last result and recomputes only when one of the arguments is a different reference. */
+export function memoizeLast<A extends unknown[], R>(fn: (...args: A) => R): (...args: A) => R {
+  let lastArgs: A | null = null;
+  let lastResult: R;
+  return (...args: A) => {
+    if (lastArgs && lastArgs.length === args.length && lastArgs.every((a, i) => Object.is(a, args[i]))) return lastResult;
+    lastArgs = args;
+    lastResult = fn(...args);
+    return lastResult;
+  };
+}
+
+export interface LabViewSelectors {
+  viewport(state: EditorData): LabViewport | null;
+  originSeconds(state: EditorData): number;
+  handles(state: EditorData): HandlePlacement[];
+}
+
+/** One set per store (memoised values must not be shared between editors). */
+export function createLabViewSelectors(): LabViewSelectors {
+  const fitted = memoizeLast((protocol: SegmentsProtocol, separation: SeparationSpec, width: number, height: number) =>
+    fitLabViewport(segmentTimes(protocol), separation, { width, height }),
+  );
+  const placed = memoizeLast((viewport: LabViewport, protocol: SegmentsProtocol, separation: SeparationSpec, origin: number, readOnly: boolean) =>
+    readOnly ? [] : handlePlacements(viewport, protocol, separation, origin),
+  );
+  const selectors: LabViewSelectors = {
+    viewport(state) {
+      if (state.labTool.name === "dragging") return state.labTool.start.viewport;
+      const protocol = segmentsProtocolOf(state.document);
+      return protocol ? fitted(protocol, state.document.separation, state.labViewSize.width, state.labViewSize.height) : null;
+    },
+    originSeconds(state) {
+      return state.labTool.name === "dragging" ? (state.labTool.plan?.originSeconds ?? 0) : 0;
+    },
+    handles(state) {
+      const viewport = selectors.viewport(state);
+      const protocol = segmentsProtocolOf(state.document);
+      if (!viewport || !protocol) return [];
+      return placed(viewport, protocol, state.document.separation, selectors.originSeconds(state), state.readOnly);
+    },
+  };
+  return selectors;
+}
+
+const dirtyCheck = memoizeLast((document: ScenarioDocument, saved: ScenarioDocument) => !sameData(document, saved));
+
+/** True when the document differs from what the server has. */
+export function hasUnsavedChanges(state: EditorData): boolean {
+  return dirtyCheck(state.document, state.save.savedDocument);
+}
+
+/** True while the budget shown belongs to an older revision of the document than the one on screen. */
+export function budgetIsStale(state: EditorData): boolean {
+  return state.budget.resultRevision !== null && state.budget.resultRevision !== state.revision;
+}
+
+export const canUndo = (state: EditorData) => !state.readOnly && state.transaction === null && state.history.past.length > 0;
+export const canRedo = (state: EditorData) => !state.readOnly && state.transaction === null && state.history.future.length > 0;

@@ -1,0 +1,42 @@
+/**
+ * Drag-handle tool, dragging: every move asks the drag kernel for a plan from the document at pointer-down and
+ * previews it; release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
+ */
+import { withProtocolPlan } from "../../kernels/document-edits";
+import { planHandleDrag } from "../../kernels/lab-view/drag-plan";
+import type { LabToolState } from "../../store/state";
+import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
+
+type Dragging = Extract<LabToolState, { name: "dragging" }>;
+
+function follow(ctx: ToolContext, state: Dragging, event: LabPointerEvent): void {
+  const plan = planHandleDrag(state.start, event, { snap: event.shiftKey });
+  ctx.get().preview((mark) => withProtocolPlan(mark, plan));
+  ctx.transition({ ...state, plan });
+}
+
+function stop(ctx: ToolContext, outcome: "commit" | "cancel"): void {
+  const store = ctx.get();
+  if (outcome === "commit") store.commit();
+  else store.cancel();
+  ctx.transition({ name: "idle" });
+}
+
+export const Dragging: ToolStateHandlers<Dragging> = {
+  onPointerMove: follow,
+
+  onPointerUp(ctx, state, event) {
+    follow(ctx, state, event);
+    stop(ctx, "commit");
+  },
+
+  onCancel(ctx) {
+    stop(ctx, "cancel");
+  },
+
+  onKeyDown(ctx, _state, event) {
+    if (event.key !== "Escape") return false;
+    stop(ctx, "cancel");
+    return true;
+  },
+};

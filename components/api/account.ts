@@ -1,0 +1,22 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import type { UserDto } from "@/db/users";
+import { apiFetch } from "./client";
+
+export type { UserDto };
+
+export const accountKeys = { me: ["account"] as const };
+
+export function useAccount() {
+  return useQuery({
+    queryKey: accountKeys.me,
+    queryFn: () => apiFetch<{ user: UserDto }>("/api/account").then((r) => r.user),
+  });
+}
+
+export function useUpdateAccount() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { name: string }) => apiFetch<{ user: UserDto }>("/api/account", { method: "PATCH", json: input }).then((r) => r.user),
+    onSuccess: (user) => queryClient.setQueryData(accountKeys.me, user),
+  });
+}

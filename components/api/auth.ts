@@ -1,0 +1,23 @@
+import { useMutation } from "@tanstack/react-query";
+import type { UserDto } from "@/db/users";
+import { apiFetch } from "./client";
+
+export function useSignUp() {
+  return useMutation({
+    mutationFn: (input: { email: string; name: string; password: string }) =>
+      apiFetch<{ user: UserDto }>("/api/users", { method: "POST", json: input }).then((r) => r.user),
+  });
+}
+
+export function useRequestPasswordReset() {
+  return useMutation({
+    mutationFn: (input: { email: string }) => apiFetch<{ message: string }>("/api/password-reset", { method: "POST", json: input }),
+  });
+}
+
+export function useConfirmPasswordReset() {
+  return useMutation({
+    mutationFn: (input: { token: string; password: string }) =>
+      apiFetch<{ message: string }>("/api/password-reset/confirm", { method: "POST", json: input }),
+  });
+}

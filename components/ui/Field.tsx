@@ -1,0 +1,78 @@
+"use client";
+
+import { useId, type ComponentProps, type ReactNode } from "react";
+import { fieldStyles } from "./styles";
+
+/** A message under a field or form: words and an icon, never colour alone. */
+export function FieldMessage({ id, children }: { id?: string; children: ReactNode }) {
+  return (
+    <p id={id} className="mt-1 flex gap-1.5 text-sm text-invalid">
+      <span aria-hidden="true">⚠</span>
+      <span>{children}</span>
+    </p>
+  );
+}
+
+interface FieldFrameProps {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  className?: string;
+  /** Renders the control with the id and aria attributes that tie it to its label and messages. */
+  children: (control: { id: string; "aria-invalid": boolean; "aria-describedby"?: string }) => ReactNode;
+}
+
+export function FieldFrame({ label, hint, error, className, children }: FieldFrameProps) {
+  const id = useId();
+  const hintId = hint ? `${id}-hint` : undefined;
+  const errorId = error ? `${id}-error` : undefined;
+  const describedBy = [hintId, errorId].filter(Boolean).join(" ") || undefined;
+  return (
+    <div className={className}>
+      <label htmlFor={id} className={fieldStyles.label}>
+        {label}
+      </label>
+      {children({ id, "aria-invalid": Boolean(error), "aria-describedby": describedBy })}
+      {hint && !error && (
+        <p id={hintId} className={fieldStyles.hint}>
+          {hint}
+        </p>
+      )}
+      {error && <FieldMessage id={errorId}>{error}</FieldMessage>}
+    </div>
+  );
+}
+
+type TextFieldProps = Omit<ComponentProps<"input">, "id" | "className"> & { label: string; hint?: ReactNode; error?: string; className?: string };
+
+export function TextField({ label, hint, error, className, ...input }: TextFieldProps) {
+  return (
+    <FieldFrame label={label} hint={hint} error={error} className={className}>
+      {(control) => <input {...input} {...control} className={fieldStyles.control} />}
+    </FieldFrame>
+  );
+}
+
+type TextAreaFieldProps = Omit<ComponentProps<"textarea">, "id" | "className"> & { label: string; hint?: ReactNode; error?: string; className?: string };
+
+export function TextAreaField({ label, hint, error, className, ...textarea }: TextAreaFieldProps) {
+  return (
+    <FieldFrame label={label} hint={hint} error={error} className={className}>
+      {(control) => <textarea rows={3} {...textarea} {...control} className={fieldStyles.control} />}
+    </FieldFrame>
+  );
+}
+
+type SelectFieldProps = Omit<ComponentProps<"select">, "id" | "className"> & { label: string; hint?: ReactNode; error?: string; className?: string };
+
+export function SelectField({ label, hint, error, className, children, ...select }: SelectFieldProps) {
+  return (
+    <FieldFrame label={label} hint={hint} error={error} className={className}>
+      {(control) => (
+        <select {...select} {...control} className={fieldStyles.control}>
+          {children}
+        </select>
+      )}
+    </FieldFrame>
+  );
+}

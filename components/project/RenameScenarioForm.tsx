@@ -1,0 +1,99 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
+import { ApiError } from "@/components/api/client";
+import { scenarioKeys, useRenameScenario, type ScenarioSummaryDto } from "@/components/api/scenarios";
+import { sentence } from "@/components/format/text";
+import { applyServerErrors } from "@/components/forms/serverErrors";
+import { FieldMessage } from "@/components/ui/Field";
+import { buttonStyles, fieldStyles } from "@/components/ui/styles";
+import { scenarioTitleSchema } from "@/lib/contracts";
+
+const renameSchema = z.object({ title: scenarioTitleSchema });
+type RenameInput = z.input<typeof renameSchema>;
+
+/**
+ * Renames in place, sending the version the row shows. When someone saved in between, the server answers 409
+ * and nothing is overwritten; "Reload" fetches the current row and keeps what was typed.
+ */
+export function RenameScenarioForm({ scenario, onDone }: { scenario: ScenarioSummaryDto; onDone: () => void }) {
+  const queryClient = useQueryClient();
+  const rename = useRenameScenario(scenario.projectId);
+  const [stale, setStale] = useState(false);
+  const [problem, setProblem] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<RenameInput, unknown, z.output<typeof renameSchema>>({
+    resolver: zodResolver(renameSchema),
+    defaultValues: { title: scenario.title },
+  });
+
+  const onSubmit = handleSubmit(async ({ title }) => {
+    setProblem(null);
+    if (title === scenario.title) return onDone();
+    try {
+      await rename.mutateAsync({ scenarioId: scenario.id, version: scenario.version, title });
+      onDone();
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 409) setStale(true);
+      else setProblem(applyServerErrors(error, setError, ["title"]));
+    }
+  });
+
+  const reload = async () => {
+    await queryClient.invalidateQueries({ queryKey: scenarioKeys.all(scenario.projectId) });
+    setStale(false);
+  };
+
+  const titleError = errors.title?.message;
+  const messageId = `rename-${scenario.id}-message`;
+
+  return (
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={`Rename ${scenario.title}`}
+      onKeyDown={(event) => {
+        if (event.key === "Escape") onDone();
+      }}
+    >
+      <div className="flex flex-wrap items-center gap-2">
+        <input
+          aria-label="New title"
+          autoFocus
+          autoComplete="off"
+          aria-invalid={Boolean(titleError)}
+          aria-describedby={titleError || stale || problem ? messageId : undefined}
+          className={`${fieldStyles.control} mt-0 min-w-48 flex-1 py-1`}
+          {...register("title")}
+        />
+        <button type="submit" disabled={isSubmitting || stale} className={`${buttonStyles.primary} py-1`}>
+          Save
+        </button>
+        <button type="button" onClick={onDone} className={`${buttonStyles.secondary} py-1`}>
+          Cancel
+        </button>
+      </div>
+      <div id={messageId}>
+        {titleError && <FieldMessage>{titleError}</FieldMessage>}
+        {problem && <FieldMessage>{sentence(problem)}</FieldMessage>}
+        {stale && (
+          <p role="alert" className="mt-2 flex flex-wrap items-center gap-2 text-sm text-caution">
+            <span aria-hidden="true">⚠</span>
+            <span>Someone changed it — reload to get the current version, then save again.</span>
+            <button type="button" onClick={reload} className={`${buttonStyles.secondary} py-0.5`}>
+              Reload
+            </button>
+          </p>
+        )}
+      </div>
+    </form>
+  );
+}

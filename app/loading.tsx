@@ -1,0 +1,5 @@
+import { RouteLoading } from "@/components/ui/RouteLoading";
+
+export default function Loading() {
+  return <RouteLoading />;
+}

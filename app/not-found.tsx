@@ -1,0 +1,5 @@
+import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
+
+export default function NotFound() {
+  return <NotFoundNotice />;
+}

@@ -47,7 +47,12 @@ function legendrePAndDerivative(l: number, x: number): { p: number; dp: number }
 //   d/dr(r² R') = ℓ(ℓ+1) R / f,   f = (x − 1)/(x + 1),
 // solved by R_in = (x − 1) P_ℓ'(x) (regular on the horizon) and R_out = (x − 1) Q_ℓ'(x) (decaying as r^{−ℓ−1}).
 // Legendre's equation (1 − x²)Q'' = 2xQ' − ℓ(ℓ+1)Q gives dR_out/dx = [ℓ(ℓ+1)Q − (x − 1)Q'] / (x + 1).
+// The same equation for P gives dR_in/dx = [ℓ(ℓ+1)P − (x − 1)P'] / (x + 1).
 const rIn = (l: number, x: number) => (x - 1) * legendrePAndDerivative(l, x).dp;
+function rInDerivative(l: number, x: number): number {
+  const { p, dp } = legendrePAndDerivative(l, x);
+  return (l * (l + 1) * p - (x - 1) * dp) / (x + 1);
+}
 const rOut = (l: number, x: number) => (x - 1) * heine(l, x).dq;
 function rOutDerivative(l: number, x: number): number {
   const { q, dq } = heine(l, x);
@@ -75,9 +80,8 @@ describe("ℓ-mode solutions (Hanni–Ruffini, Cohen–Wald)", () => {
           const rhs = (l * (l + 1) * radial(x) * (x + 1)) / (x - 1);
           expect(lhs / rhs).toBeCloseTo(1, 4); // nested second differences: O(h²) truncation
         }
-        const derivativeIn = (rIn(l, x + h) - rIn(l, x - h)) / (2 * h);
-        const wronskian = (x + 1) ** 2 * (rIn(l, x) * rOutDerivative(l, x) - derivativeIn * rOut(l, x));
-        expect(wronskian / (l * (l + 1))).toBeCloseTo(1, 6);
+        const wronskian = (x + 1) ** 2 * (rIn(l, x) * rOutDerivative(l, x) - rInDerivative(l, x) * rOut(l, x));
+        expect(wronskian / (l * (l + 1))).toBeCloseTo(1, 11);
       }
     }
   });

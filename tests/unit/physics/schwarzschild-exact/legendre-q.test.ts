@@ -5,19 +5,19 @@
  * recurrence amplifies rounding by up to (x + √(x²−1))^{2ℓ}; with 300 digits that is harmless for the cases below.
  */
 import { describe, expect, it } from "vitest";
-import { all, create } from "mathjs";
+import { all, create, type BigNumber } from "mathjs";
 import { legendreQ } from "@/physics/horizon/schwarzschild-exact";
 
 const big = create(all, { number: "BigNumber", precision: 300 });
 
 function referenceQ(eps: string, lMax: number): number[] {
   const e = big.bignumber(eps);
-  const x = big.add(1, e);
-  const q = [big.multiply(0.5, big.log(big.divide(big.add(x, 1), e)))];
-  q.push(big.subtract(big.multiply(x, q[0]), 1));
+  const x = big.add(e, 1) as BigNumber;
+  const q: BigNumber[] = [big.multiply(0.5, big.log(big.divide(big.add(x, 1), e) as BigNumber)) as BigNumber];
+  q.push(big.subtract(big.multiply(x, q[0]), 1) as BigNumber);
   for (let l = 1; l < lMax; l++) {
-    const next = big.divide(big.subtract(big.multiply(big.multiply(2 * l + 1, x), q[l]), big.multiply(l, q[l - 1])), l + 1);
-    q.push(next);
+    const recurrence = big.subtract(big.multiply(big.multiply(x, 2 * l + 1), q[l]), big.multiply(q[l - 1], l));
+    q.push(big.divide(recurrence, l + 1) as BigNumber);
   }
   return q.map((value) => Number(value));
 }

@@ -51,7 +51,7 @@ export interface SchwarzschildHorizonRateInput {
   multipoleTolerance?: number;
   /**
    * The Legendre sum that checks the closed form: "auto" (default) runs it when it costs at most
-   * MULTIPOLE_AUTO_BUDGET recurrence steps (all labs farther than b/M ≈ 2 + 10⁻⁵), "always", or "never".
+   * MULTIPOLE_AUTO_BUDGET recurrence steps (labs farther than b/M ≈ 2 + 2·10⁻⁶), "always", or "never".
    */
   multipoleCheck?: "auto" | "always" | "never";
 }
@@ -100,8 +100,8 @@ export interface SchwarzschildHorizonRate {
   flags: SchwarzschildRateFlag[];
 }
 
-/** Recurrence steps the "auto" multipole check may spend per axis (≈ 1 ms of work at most). */
-export const MULTIPOLE_AUTO_BUDGET = 60_000;
+/** Recurrence steps the "auto" multipole check may spend per axis (about 0.5 ms of work). */
+export const MULTIPOLE_AUTO_BUDGET = 20_000;
 
 /** Regime boundaries: the radial rate within this fraction of the Rindler rate, or of its far-zone law. */
 const REGIME_FRACTION = 0.01;

@@ -45,7 +45,7 @@ export interface GravityFarZoneInput {
   bodyMassKg: number;
   /** Mass of the rest of the lab, which recoils; default Infinity (μ = m). */
   labMassKg?: number;
-  /** Full branch separation d, proper length in the lab frame, metres. */
+  /** Full branch separation d: the body's displacement relative to the rest of the lab, proper length, metres. */
   separationMetres: number;
   axis: MemoryAxis;
   /** "one-sided" (default): one branch at the centre of mass; "symmetric": ±d/2 about it (ΔI = 0). */

@@ -31,6 +31,7 @@ const owners = (status: number): Record<Role, number> => ({ anonymous: 401, stra
 let unique = 0;
 
 const cases: Case[] = [
+  { file: "compute/route.ts", method: "POST", path: () => "/api/compute", body: () => defaultScenarioDocument(), expected: everyone(200) },
   { file: "users/route.ts", method: "POST", path: () => "/api/users", body: () => ({ email: `new-${++unique}-${Date.now()}@example.test`, name: "New Person", password: "a long enough password" }), expected: everyone(201) },
   { file: "password-reset/route.ts", method: "POST", path: () => "/api/password-reset", body: () => ({ email: "nobody@example.test" }), expected: everyone(202) },
   { file: "password-reset/confirm/route.ts", method: "POST", path: () => "/api/password-reset/confirm", body: () => ({ token: "not-a-real-token-at-all", password: "a long enough password" }), expected: everyone(422) },

@@ -61,6 +61,12 @@ function estimateChannel(
   }
 }
 
+function smoothnessOf(history: SeparationHistory): ScenarioResult["protocol"]["smoothness"] {
+  if (history.kinks.some((k) => k.kind === "jump")) return "discontinuous";
+  if (history.kinks.length > 0) return "kinked";
+  return history.windows.some((w) => w.smoothness < 2) ? "acceleration-jumps" : "smooth";
+}
+
 function combine(electromagnetic: ChannelResult, gravitational: ChannelResult): ScenarioResult["combined"] {
   const log10Of = (q: ChannelResult["totalQuanta"]) => (q.log10 === null ? -Infinity : q.log10);
   const total = log10Sum(log10Of(electromagnetic.totalQuanta), log10Of(gravitational.totalQuanta));
@@ -100,7 +106,7 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
       totalDuration: quantityFromValue(history.totalDurationSeconds, "s", "protocol-kinematics"),
       peakSeparation: quantityFromValue(history.peakSeparationMetres, "m", "protocol-kinematics"),
       peakBranchSpeed: quantityFromValue(speed, "m s^-1", "protocol-kinematics"),
-      smoothness: history.kinks.some((k) => k.kind === "jump") ? "discontinuous" : history.kinks.length > 0 ? "kinked" : "smooth",
+      smoothness: smoothnessOf(history),
       kinks: history.kinks,
       interpolation: history.interpolation,
     },

@@ -81,6 +81,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
             `the branch velocity jumps at ${at(kinks)}: the far-field count grows without bound as the time resolution shrinks; ` +
             `reported at a time step of ${Number.isFinite(step) ? step.toPrecision(3) : "?"} s. Use smooth ramps (minimum-jerk) for a resolution-free number`,
         },
+    accelerationJumpFlag(history, channels),
     jumps.length === 0
       ? { code: "separation-jump", status: "ok", message: "the separation is continuous and starts and ends at zero" }
       : {
@@ -89,6 +90,21 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
           message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or teleport): the counts omit the jump, which would make them diverge`,
         },
   ];
+}
+
+function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResult[]): ValidityFlag {
+  const gravity = channels.find((ch) => ch.channel === "gravitational");
+  if (!gravity || gravity.exactZeroReason !== null) {
+    return { code: "acceleration-jump", status: "not-applicable", message: "no gravitational count to affect" };
+  }
+  if (!history.windows.some((w) => w.smoothness === 1)) return { code: "acceleration-jump", status: "ok", message: "the branch acceleration is continuous" };
+  return {
+    code: "acceleration-jump",
+    status: "caution",
+    message:
+      "the branch acceleration jumps (smoothstep or cosine ramps): the gravitational far-field count grows like the logarithm " +
+      `of the bandwidth and is reported at a time step of ${gravity.convergence.timeStepSeconds.toPrecision(3)} s; use minimum-jerk ramps for a resolution-free number`,
+  };
 }
 
 function schwarzschildRegime(document: ScenarioDocument, channels: ChannelResult[]): ValidityFlag {

@@ -86,7 +86,8 @@ export interface ProtocolSummary {
   totalDuration: Quantity;
   peakSeparation: Quantity;
   peakBranchSpeed: Quantity;
-  smoothness: "smooth" | "kinked" | "discontinuous";
+  /** "smooth": acceleration continuous; "acceleration-jumps": velocity continuous only; "kinked": velocity jumps; "discontinuous": the separation jumps. */
+  smoothness: "smooth" | "acceleration-jumps" | "kinked" | "discontinuous";
   kinks: KinkReport[];
   /** Interpolation used for a sampled profile; null otherwise. */
   interpolation: string | null;

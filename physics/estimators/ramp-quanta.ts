@@ -4,6 +4,7 @@
  *
  * Per window group (physics/spectra/window-groups.ts) of duration τ_g, with τ₀ the longest and r = τ₀/τ_g:
  *   J_g = r ∫₀^∞ w̄(rΩ, ᾱ) |ĝ_g(Ω)|² dΩ,  ⟨N⟩_ramp/A² = K τ₀^{−p−1} [Σ_g J_g + 2 Σ_{g<h} X_gh].
+ * Each level compares all n samples with every other sample, both from one transform (window-spectrum.ts).
  * The Ω integral runs on the FFT grid (trapezoid, step π/2, to the Nyquist frequency πn) after subtracting a
  * reference R(Ω) = (c₀ + c₂Ω²) e^{−s²Ω²} (s = ¼) that matches |ĝ|² to O(Ω⁴) at Ω = 0; R's own integral is done in
  * closed form (inertial part: ∫Ω^p e^{−s²Ω²} = Γ((p+1)/2)/(2s^{p+1})) plus Gauss–Legendre for the thermal part.
@@ -11,9 +12,10 @@
  * trapezoid would err by (π/2)²/12 relative to the O(1) integral; after the subtraction the error is O(Ω⁶) terms.
  * X_gh, the interference of well-separated groups, is computed in the time domain (physics/spectra/cross-term.ts).
  *
- * A kinked profile has no limit (the count grows like the logarithm of the bandwidth): it is evaluated at the time
- * step the document states, or the shortest moving window / 1024, and the change against half that resolution is
- * reported, unconverged.
+ * A profile less smooth than the channel needs (ChannelDefinition.smoothnessNeeded: a kink for the dipole, an
+ * acceleration jump for the quadrupole) has no limit (the count grows like the logarithm of the bandwidth): it is
+ * evaluated at the time step the document states, or the shortest moving window / 1024, and the change against
+ * half that resolution is reported, unconverged.
  */
 import type { MotionWindow, SeparationHistory } from "../protocols/types";
 import type { Convergence } from "../result";
@@ -21,16 +23,16 @@ import { rampKernel, rampWeight, thermalCorrectionWeight, type ChannelDefinition
 import { crossTerm } from "../spectra/cross-term";
 import { integrateGaussLegendre } from "../spectra/gauss-legendre";
 import { groupWindows, type WindowGroup } from "../spectra/window-groups";
-import { PADDING_FACTOR, windowSpectrum } from "../spectra/window-spectrum";
+import { PADDING_FACTOR, windowSpectrum, type SpectrumLevel } from "../spectra/window-spectrum";
 
 export const CONVERGENCE_TARGET = 1e-3;
-const BASE_SAMPLES_PER_SHORTEST_WINDOW = 256;
+const BASE_SAMPLES_PER_SHORTEST_WINDOW = 512;
 const MAX_SAMPLES = 1 << 18;
 const MIN_SAMPLES = 64;
 const MAX_LEVELS = 8;
 const DEFAULT_KINK_SAMPLES = 1024;
 const REFERENCE_WIDTH = 0.25;
-const CROSS_ORDER = 24;
+const CROSS_ORDER = { fine: 24, coarse: 16 } as const;
 
 export interface RampIntegral {
   /** log10 of ⟨N⟩_ramp / A², A the source amplitude in SI; −Infinity when there is no motion. */
@@ -75,20 +77,28 @@ function thermalReferenceIntegral(correction: (omega: number) => number, scale: 
   return sum + integrateGaussLegendre(reference, 0, hi, 12);
 }
 
-function groupIntegral(window: MotionWindow, definition: ChannelDefinition, samples: number, scale: number, alphaBar: number): number {
-  const spectrum = windowSpectrum(window, definition, samples);
+/** w̄(rΩ_j, ᾱ) on the FFT grid, shared by the fine and the coarse level. */
+function weightsOnGrid(definition: ChannelDefinition, alphaBar: number, scale: number, step: number, length: number): Float64Array {
   const weight = rampWeight(definition, alphaBar);
-  const [mu0, mu1, mu2] = spectrum.moments;
+  const weights = new Float64Array(length);
+  for (let j = 0; j < length; j++) weights[j] = weight(scale * j * step);
+  return weights;
+}
+
+function groupIntegral(level: SpectrumLevel, weights: Float64Array, step: number, definition: ChannelDefinition, scale: number, alphaBar: number): number {
+  const [mu0, mu1, mu2] = level.moments;
   const c0 = mu0 * mu0;
   const c2 = mu1 * mu1 - mu0 * mu2 + c0 * REFERENCE_WIDTH * REFERENCE_WIDTH;
   const s2 = REFERENCE_WIDTH * REFERENCE_WIDTH;
-  const step = spectrum.frequencyStep;
-  const last = spectrum.power.length - 1;
+  const power = level.power;
+  const last = power.length - 1;
+  // Beyond Ω = 7/s the reference is below e⁻⁴⁹ of its peak: not worth an exp per bin.
+  const referenceBins = Math.min(last, Math.ceil(7 / (REFERENCE_WIDTH * step)));
   let trapezoid = 0;
   for (let j = 0; j <= last; j++) {
     const omega = j * step;
-    const residual = spectrum.power[j] - (c0 + c2 * omega * omega) * Math.exp(-s2 * omega * omega);
-    const term = weight(scale * omega) * residual;
+    const reference = j <= referenceBins ? (c0 + c2 * omega * omega) * Math.exp(-s2 * omega * omega) : 0;
+    const term = weights[j] * (power[j] - reference);
     trapezoid += j === 0 || j === last ? 0.5 * term : term;
   }
   trapezoid *= step;
@@ -98,28 +108,36 @@ function groupIntegral(window: MotionWindow, definition: ChannelDefinition, samp
 }
 
 interface LevelResult {
-  total: number;
+  /** Σ J + 2 Σ X from all samples, and from every other sample (half the resolution). */
+  fine: number;
+  coarse: number;
   samplesPerWindow: number;
   timeStepSeconds: number;
 }
 
 function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, referenceSeconds: number, alphaBar: number, perShortest: number): LevelResult {
-  let total = 0;
+  let fine = 0;
+  let coarse = 0;
   let samplesPerWindow = 0;
   let timeStepSeconds = Infinity;
   for (const group of groups) {
     const n = samplesFor(group, perShortest);
     samplesPerWindow = Math.max(samplesPerWindow, n);
     timeStepSeconds = Math.min(timeStepSeconds, group.window.durationSeconds / n);
-    total += groupIntegral(group.window, definition, n, referenceSeconds / group.window.durationSeconds, alphaBar);
+    const spectrum = windowSpectrum(group.window, definition, n);
+    const scale = referenceSeconds / group.window.durationSeconds;
+    const weights = weightsOnGrid(definition, alphaBar, scale, spectrum.frequencyStep, spectrum.fine.power.length);
+    fine += groupIntegral(spectrum.fine, weights, spectrum.frequencyStep, definition, scale, alphaBar);
+    coarse += groupIntegral(spectrum.coarse, weights, spectrum.frequencyStep, definition, scale, alphaBar);
   }
   const kernel = rampKernel(definition, alphaBar);
   for (let g = 0; g < groups.length; g++) {
     for (let h = g + 1; h < groups.length; h++) {
-      total += 2 * crossTerm(groups[g].window, groups[h].window, definition, kernel, referenceSeconds, CROSS_ORDER);
+      fine += 2 * crossTerm(groups[g].window, groups[h].window, definition, kernel, referenceSeconds, CROSS_ORDER.fine);
+      coarse += 2 * crossTerm(groups[g].window, groups[h].window, definition, kernel, referenceSeconds, CROSS_ORDER.coarse);
     }
   }
-  return { total, samplesPerWindow, timeStepSeconds };
+  return { fine, coarse, samplesPerWindow, timeStepSeconds };
 }
 
 function relativeChange(coarse: number, fine: number): number {
@@ -145,34 +163,29 @@ export function rampQuantaPerSquaredSource(
   const referenceSeconds = Math.max(...groups.map((g) => g.window.durationSeconds));
   const alphaBar = alphaPerSecond * referenceSeconds;
   const shortest = Math.min(...groups.map((g) => g.shortestMovingSeconds));
-  const kinked = groups.some((g) => g.window.kinked);
+  const kinked = groups.some((g) => g.window.smoothness < definition.smoothnessNeeded);
 
-  let coarse: LevelResult;
-  let fine: LevelResult;
+  let level: LevelResult;
   if (kinked) {
     const perShortest = kinkTimeResolutionSeconds === null ? DEFAULT_KINK_SAMPLES : Math.max(2, shortest / kinkTimeResolutionSeconds);
-    coarse = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest / 2);
-    fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
+    level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
   } else {
     let perShortest = BASE_SAMPLES_PER_SHORTEST_WINDOW;
-    coarse = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
-    fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, 2 * perShortest);
-    for (let level = 1; level < MAX_LEVELS && relativeChange(coarse.total, fine.total) > CONVERGENCE_TARGET; level++) {
-      if (fine.samplesPerWindow >= MAX_SAMPLES) break;
+    level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
+    for (let step = 1; step < MAX_LEVELS && relativeChange(level.coarse, level.fine) > CONVERGENCE_TARGET && level.samplesPerWindow < MAX_SAMPLES; step++) {
       perShortest *= 2;
-      coarse = fine;
-      fine = evaluateLevel(groups, definition, referenceSeconds, alphaBar, 2 * perShortest);
+      level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
     }
   }
-  const change = relativeChange(coarse.total, fine.total);
+  const change = relativeChange(level.coarse, level.fine);
   const convergence: Convergence = {
     relativeChange: change,
     converged: change <= CONVERGENCE_TARGET,
-    samplesPerWindow: fine.samplesPerWindow,
-    transformLength: PADDING_FACTOR * fine.samplesPerWindow,
+    samplesPerWindow: level.samplesPerWindow,
+    transformLength: PADDING_FACTOR * level.samplesPerWindow,
     mode,
-    timeStepSeconds: fine.timeStepSeconds,
+    timeStepSeconds: level.timeStepSeconds,
   };
-  const log10 = fine.total > 0 ? definition.log10Coefficient - (definition.power + 1) * Math.log10(referenceSeconds) + Math.log10(fine.total) : -Infinity;
+  const log10 = level.fine > 0 ? definition.log10Coefficient - (definition.power + 1) * Math.log10(referenceSeconds) + Math.log10(level.fine) : -Infinity;
   return { log10PerSquaredSource: log10, convergence };
 }

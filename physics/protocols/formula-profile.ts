@@ -26,7 +26,7 @@ export function formulaHistory(protocol: FormulaProtocol, distanceMetres: number
         fraction,
         rate: null,
         cacheKey: null,
-        kinked: features.length > 0,
+        smoothness: features.length > 0 ? 0 : 2,
       },
     ],
     peakRatePerSecond: peakRate / durationSeconds,

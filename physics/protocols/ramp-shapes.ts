@@ -14,8 +14,8 @@ export interface RampShapeDefinition {
   rate(u: number): number;
   /** Largest |dσ/du| over the ramp. */
   peakRate: number;
-  /** True when the velocity jumps at the ends of the ramp. */
-  kinked: boolean;
+  /** Continuous derivatives of σ across the ramp and its ends: 0 (velocity jumps), 1 (acceleration jumps), 2. */
+  smoothness: 0 | 1 | 2;
 }
 
 export const rampShapes: Readonly<Record<RampShape, RampShapeDefinition>> = {
@@ -23,24 +23,24 @@ export const rampShapes: Readonly<Record<RampShape, RampShapeDefinition>> = {
     fraction: (u) => u * u * (3 - 2 * u),
     rate: (u) => 6 * u * (1 - u),
     peakRate: 1.5,
-    kinked: false,
+    smoothness: 1,
   },
   cosine: {
     fraction: (u) => 0.5 * (1 - Math.cos(Math.PI * u)),
     rate: (u) => 0.5 * Math.PI * Math.sin(Math.PI * u),
     peakRate: Math.PI / 2,
-    kinked: false,
+    smoothness: 1,
   },
   "minimum-jerk": {
     fraction: (u) => u * u * u * (10 + u * (-15 + 6 * u)),
     rate: (u) => 30 * u * u * (1 - u) * (1 - u),
     peakRate: 30 / 16,
-    kinked: false,
+    smoothness: 2,
   },
   linear: {
     fraction: (u) => u,
     rate: () => 1,
     peakRate: 1,
-    kinked: true,
+    smoothness: 0,
   },
 };

@@ -138,7 +138,7 @@ export function sampledHistory(protocol: SampledProtocol): SeparationHistory {
         fraction: (u) => interpolant.value(u * durationSeconds),
         rate: (u) => interpolant.slope(u * durationSeconds) * durationSeconds,
         cacheKey: null,
-        kinked: kinkCount > 0,
+        smoothness: kinkCount > 0 ? 0 : 2,
       },
     ],
     peakRatePerSecond: peakRate,

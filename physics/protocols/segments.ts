@@ -24,7 +24,7 @@ export function segmentsHistory(protocol: SegmentsProtocol, distanceMetres: numb
     fraction: up.fraction,
     rate: up.rate,
     cacheKey: `segment:${protocol.separation.shape}:up`,
-    kinked: up.kinked,
+    smoothness: up.smoothness,
   };
   const recombination: MotionWindow = {
     startSeconds: recombinationStart,
@@ -32,12 +32,12 @@ export function segmentsHistory(protocol: SegmentsProtocol, distanceMetres: numb
     fraction: (u) => 1 - down.fraction(u),
     rate: (u) => -down.rate(u),
     cacheKey: `segment:${protocol.recombination.shape}:down`,
-    kinked: down.kinked,
+    smoothness: down.smoothness,
   };
 
   const kinkTimes = new Set<number>();
-  if (up.kinked) [0, separationSeconds].forEach((t) => kinkTimes.add(t));
-  if (down.kinked) [recombinationStart, totalDurationSeconds].forEach((t) => kinkTimes.add(t));
+  if (up.smoothness === 0) [0, separationSeconds].forEach((t) => kinkTimes.add(t));
+  if (down.smoothness === 0) [recombinationStart, totalDurationSeconds].forEach((t) => kinkTimes.add(t));
   const kinks: KinkReport[] = [...kinkTimes].sort((a, b) => a - b).map((timeSeconds) => ({ timeSeconds, kind: "kink" }));
 
   return {

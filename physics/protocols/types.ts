@@ -13,8 +13,11 @@ export interface MotionWindow {
   rate: ((u: number) => number) | null;
   /** Equal keys promise equal σ(u): spectra computed for one may be reused for the other. Null: never reuse. */
   cacheKey: string | null;
-  /** True when the velocity jumps somewhere in or at the ends of the window. */
-  kinked: boolean;
+  /**
+   * Derivatives of σ(t) known to be continuous, ends included (σ is constant outside): 0 where the velocity
+   * jumps (a kink), 1 where only the acceleration jumps, 2 for acceleration continuous or not known to jump.
+   */
+  smoothness: 0 | 1 | 2;
 }
 
 export interface SeparationHistory {

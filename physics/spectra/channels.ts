@@ -32,6 +32,12 @@ export interface ChannelDefinition {
   power: number;
   /** The k of the thermal factors ω² + k²α². */
   thermalOrders: readonly number[];
+  /**
+   * Continuous derivatives of σ the count needs to be finite: the velocity (1) for the dipole, whose weight ω
+   * meets |ṽ|² ~ ω⁻² at a kink; the acceleration (2) for the quadrupole, whose weight ω³ meets |ṽ|² ~ ω⁻⁴ where
+   * the acceleration jumps at nonzero separation. Below it the count grows like the logarithm of the bandwidth.
+   */
+  smoothnessNeeded: 1 | 2;
   /** The channel's source profile f(σ) and df/du from σ and dσ/du. */
   profile(sigma: number): number;
   profileRate(sigma: number, sigmaRate: number): number;
@@ -42,6 +48,7 @@ export const electromagneticChannel: ChannelDefinition = {
   log10Coefficient: -Math.log10(6 * Math.PI * Math.PI * epsilon0 * hbar * c ** 3),
   power: 1,
   thermalOrders: [1],
+  smoothnessNeeded: 1,
   profile: (sigma) => sigma,
   profileRate: (_sigma, sigmaRate) => sigmaRate,
 };
@@ -51,6 +58,7 @@ export const gravitationalChannel: ChannelDefinition = {
   log10Coefficient: Math.log10((2 / 3) * (G / (5 * Math.PI * hbar))) - 5 * Math.log10(c),
   power: 3,
   thermalOrders: [1, 2],
+  smoothnessNeeded: 2,
   profile: (sigma) => sigma * sigma,
   profileRate: (sigma, sigmaRate) => 2 * sigma * sigmaRate,
 };
@@ -86,13 +94,14 @@ function xCothXMinusOne(x: number): number {
  */
 export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
   const p = definition.power;
-  if (alphaBar === 0) return (omega) => omega ** p;
+  if (alphaBar === 0) return p === 1 ? (omega) => omega : (omega) => omega ** p;
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
-  const minusZero = (omega2: number) => {
-    let sum = 0;
-    for (let i = coefficients.length - 1; i >= 1; i--) sum = (sum + coefficients[i]) * omega2;
-    return sum;
-  };
+  // P − P₀ as a polynomial in Ω² without constant term (degree 1 for EM, 2 for gravity), by Horner's rule.
+  const c1 = coefficients[1];
+  const c2 = coefficients[2] ?? 0;
+  const c3 = coefficients[3] ?? 0;
+  if (coefficients.length > 4) throw new RangeError("thermal polynomials of degree above 3 are not implemented");
+  const minusZero = (omega2: number) => omega2 * (c1 + omega2 * (c2 + omega2 * c3));
   return (omega) => {
     const omega2 = omega * omega;
     const x = (Math.PI * omega) / alphaBar;
@@ -106,6 +115,7 @@ export function rampWeight(definition: ChannelDefinition, alphaBar: number): (om
     return polynomial / omega + (alphaBar / (Math.PI * omega2)) * (polynomial * boseTail - atZero);
   };
 }
+
 
 /** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */
 export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {

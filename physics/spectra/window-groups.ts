@@ -8,43 +8,65 @@ import type { MotionWindow } from "../protocols/types";
 /** Windows closer than this many times the sum of their durations are transformed together. */
 export const SEPARATE_WHEN_GAP_EXCEEDS = 2;
 
+/** A window made of several moving windows and the plateaus between them. */
+export interface CompositeWindow extends MotionWindow {
+  parts: readonly MotionWindow[];
+}
+
+export function isComposite(window: MotionWindow): window is CompositeWindow {
+  return "parts" in window;
+}
+
 export interface WindowGroup {
   window: MotionWindow;
   /** Duration of the shortest window inside the group, which sets the time step. */
   shortestMovingSeconds: number;
 }
 
-function combine(parts: MotionWindow[]): MotionWindow {
+function combine(parts: MotionWindow[]): CompositeWindow {
   const start = parts[0].startSeconds;
   const last = parts[parts.length - 1];
   const duration = last.startSeconds + last.durationSeconds - start;
-  const locate = (u: number) => {
-    const t = start + u * duration;
-    let plateau = 0;
-    for (const w of parts) {
-      if (t < w.startSeconds) return { window: null, local: 0, plateau };
-      if (t <= w.startSeconds + w.durationSeconds) return { window: w, local: (t - w.startSeconds) / w.durationSeconds, plateau };
-      plateau = w.fraction(1);
+  const ends = parts.map((w) => w.startSeconds + w.durationSeconds);
+  const plateaus = parts.map((w) => w.fraction(1));
+  /** Index of the part containing time t, or −(index of the next part) − 1 on the plateau before it. */
+  const partAt = (t: number) => {
+    for (let i = 0; i < parts.length; i++) {
+      if (t < parts[i].startSeconds) return -i - 1;
+      if (t <= ends[i]) return i;
     }
-    return { window: null, local: 0, plateau };
+    return parts.length - 1;
   };
   const everyRateKnown = parts.every((w) => w.rate !== null);
   return {
     startSeconds: start,
     durationSeconds: duration,
     fraction(u) {
-      const at = locate(u);
-      return at.window ? at.window.fraction(at.local) : at.plateau;
+      const t = start + u * duration;
+      const i = partAt(t);
+      if (i < 0) return plateaus[-i - 2];
+      const w = parts[i];
+      return w.fraction(Math.min(1, (t - w.startSeconds) / w.durationSeconds));
     },
     rate: everyRateKnown
       ? (u) => {
-          const at = locate(u);
-          return at.window ? at.window.rate!(at.local) * (duration / at.window.durationSeconds) : 0;
+          const t = start + u * duration;
+          const i = partAt(t);
+          if (i < 0) return 0;
+          const w = parts[i];
+          return w.rate!(Math.min(1, (t - w.startSeconds) / w.durationSeconds)) * (duration / w.durationSeconds);
         }
       : null,
-    cacheKey: null,
-    kinked: parts.some((w) => w.kinked),
+    cacheKey: compositeKey(parts, start, duration),
+    smoothness: Math.min(...parts.map((w) => w.smoothness)) as MotionWindow["smoothness"],
+    parts,
   };
+}
+
+/** Equal when every part has the same key and sits at the same place relative to the composite's span. */
+function compositeKey(parts: MotionWindow[], start: number, duration: number): string | null {
+  if (parts.some((w) => w.cacheKey === null)) return null;
+  return parts.map((w) => `${w.cacheKey}@${(w.startSeconds - start) / duration}/${w.durationSeconds / duration}`).join("+");
 }
 
 export function groupWindows(windows: MotionWindow[]): WindowGroup[] {

@@ -5,22 +5,32 @@
  * cell averages n[f(u_{m+1}) − f(u_m)]) and zero-padded to M = 4n, so that ĝ(Ω) ≈ (1/n) Σ g_m e^{iΩu_m} on the
  * grid Ω_j = 2πjn/M = jπ/2 up to the Nyquist frequency πn; padding by 4 keeps the autocorrelation (support
  * [−1, 1]) clear of its periodic images. Also returned: the moments μ_k = (1/n) Σ g_m (u_m − ½)^k, k ≤ 2, which
- * give |ĝ|² = μ₀² + (μ₁² − μ₀μ₂)Ω² + O(Ω⁴) at small Ω exactly for the sampled g.
+ * give |ĝ|² = μ₀² + (μ₁² − μ₀μ₂)Ω² + O(Ω⁴) at small Ω exactly for the sampled g; and the same from every other
+ * sample, the half-resolution level that the convergence check compares against, at no second transform.
  */
 import FFT from "fft.js";
 import type { MotionWindow } from "../protocols/types";
 import type { ChannelDefinition } from "./channels";
+import { isComposite } from "./window-groups";
 
 export const PADDING_FACTOR = 4;
+
+/** |ĝ|² on the Ω grid and the moments of the samples it came from. */
+export interface SpectrumLevel {
+  /** |ĝ(Ω_j)|², j = 0 … (length − 1), Ω_j = j·frequencyStep. */
+  power: Float64Array;
+  moments: [number, number, number];
+}
 
 export interface WindowSpectrum {
   samples: number;
   transformLength: number;
-  /** |ĝ(Ω_j)|², j = 0 … M/2. */
-  power: Float64Array;
-  /** Spacing of the Ω grid, π/2. */
+  /** Spacing of the Ω grid, π/2, the same at both levels. */
   frequencyStep: number;
-  moments: [number, number, number];
+  /** From all n samples. */
+  fine: SpectrumLevel;
+  /** From the n/2 even-indexed samples alone (a grid of half the resolution), read off the same transform. */
+  coarse: SpectrumLevel;
 }
 
 const transforms = new Map<number, { fft: FFT; input: Float64Array; output: number[] }>();
@@ -43,6 +53,62 @@ export function clearSpectrumCache(): void {
   cache.clear();
 }
 
+/** A composite of closed-form windows: each part fills its own run of samples, zero on the plateaus. */
+function fillCompositeSamples(window: MotionWindow & { parts: readonly MotionWindow[] }, definition: ChannelDefinition, samples: number, input: Float64Array): void {
+  for (const part of window.parts) {
+    const rate = part.rate!;
+    const scale = window.durationSeconds / part.durationSeconds;
+    const from = (part.startSeconds - window.startSeconds) / window.durationSeconds;
+    const to = from + 1 / scale;
+    const first = Math.max(0, Math.ceil(from * samples - 0.5));
+    const last = Math.min(samples - 1, Math.floor(to * samples - 0.5));
+    for (let m = first; m <= last; m++) {
+      const local = Math.min(1, Math.max(0, ((m + 0.5) / samples - from) * scale));
+      input[m] = definition.profileRate(part.fraction(local), rate(local)) * scale;
+    }
+  }
+}
+
+function fillSamples(window: MotionWindow, definition: ChannelDefinition, samples: number, input: Float64Array): void {
+  input.fill(0);
+  if (isComposite(window) && window.rate) {
+    fillCompositeSamples(window, definition, samples, input);
+    return;
+  }
+  if (window.rate) {
+    for (let m = 0; m < samples; m++) {
+      const u = (m + 0.5) / samples;
+      input[m] = definition.profileRate(window.fraction(u), window.rate(u));
+    }
+    return;
+  }
+  let previous = definition.profile(window.fraction(0));
+  for (let m = 0; m < samples; m++) {
+    const next = definition.profile(window.fraction((m + 1) / samples));
+    input[m] = samples * (next - previous);
+    previous = next;
+  }
+}
+
+function moments(input: Float64Array, samples: number, stride: number): [number, number, number] {
+  let mu0 = 0;
+  let mu1 = 0;
+  let mu2 = 0;
+  for (let m = 0; m < samples; m += stride) {
+    const x = (m + 0.5) / samples - 0.5;
+    mu0 += input[m];
+    mu1 += input[m] * x;
+    mu2 += input[m] * x * x;
+  }
+  const weight = stride / samples;
+  return [mu0 * weight, mu1 * weight, mu2 * weight];
+}
+
+/**
+ * The fine level is |X_j|²/n². The coarse level uses that the transform of the even-indexed samples, padded to
+ * M/2, is Y_j = (X_j + X_{j+M/2})/2 with X_{j+M/2} = conj(X_{M/2−j}) for real input: its power is
+ * |X_j + conj(X_{M/2−j})|²/n², j = 0 … M/4, on the same Ω grid.
+ */
 export function windowSpectrum(window: MotionWindow, definition: ChannelDefinition, samples: number): WindowSpectrum {
   const key = window.cacheKey === null ? null : `${window.cacheKey}|${definition.channel}|${samples}`;
   const cached = key === null ? undefined : cache.get(key);
@@ -50,41 +116,28 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
 
   const length = PADDING_FACTOR * samples;
   const { fft, input, output } = transformOfSize(length);
-  input.fill(0);
-  if (window.rate) {
-    for (let m = 0; m < samples; m++) {
-      const u = (m + 0.5) / samples;
-      input[m] = definition.profileRate(window.fraction(u), window.rate(u));
-    }
-  } else {
-    let previous = definition.profile(window.fraction(0));
-    for (let m = 0; m < samples; m++) {
-      const next = definition.profile(window.fraction((m + 1) / samples));
-      input[m] = samples * (next - previous);
-      previous = next;
-    }
-  }
-  let mu0 = 0;
-  let mu1 = 0;
-  let mu2 = 0;
-  for (let m = 0; m < samples; m++) {
-    const x = (m + 0.5) / samples - 0.5;
-    mu0 += input[m];
-    mu1 += input[m] * x;
-    mu2 += input[m] * x * x;
-  }
+  fillSamples(window, definition, samples, input);
+  const fineMoments = moments(input, samples, 1);
+  const coarseMoments = moments(input, samples, 2);
   fft.realTransform(output, input);
   const half = length / 2;
-  const power = new Float64Array(half + 1);
   const norm = 1 / (samples * samples);
-  for (let j = 0; j <= half; j++) power[j] = (output[2 * j] ** 2 + output[2 * j + 1] ** 2) * norm;
+  const fine = new Float64Array(half + 1);
+  for (let j = 0; j <= half; j++) fine[j] = (output[2 * j] ** 2 + output[2 * j + 1] ** 2) * norm;
+  const quarter = length / 4;
+  const coarse = new Float64Array(quarter + 1);
+  for (let j = 0; j <= quarter; j++) {
+    const re = output[2 * j] + output[2 * (half - j)];
+    const im = output[2 * j + 1] - output[2 * (half - j) + 1];
+    coarse[j] = (re * re + im * im) * norm;
+  }
 
   const spectrum: WindowSpectrum = {
     samples,
     transformLength: length,
-    power,
     frequencyStep: (2 * Math.PI * samples) / length,
-    moments: [mu0 / samples, mu1 / samples, mu2 / samples],
+    fine: { power: fine, moments: fineMoments },
+    coarse: { power: coarse, moments: coarseMoments },
   };
   if (key !== null) {
     if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);

@@ -147,13 +147,15 @@ function relativeChange(coarse: number, fine: number): number {
 
 /**
  * ⟨N⟩_ramp / A² for a separation history in a channel whose field is thermal at α (s⁻¹) along the lab's worldline
- * (α = 0: the inertial vacuum). `kinkTimeResolutionSeconds` is the stated resolution for kinked profiles.
+ * (α = 0: the inertial vacuum). `kinkTimeResolutionSeconds` is the stated resolution for kinked profiles;
+ * `startSamplesPerShortestWindow` the first level of the doubling (tests raise it to check convergence).
  */
 export function rampQuantaPerSquaredSource(
   history: SeparationHistory,
   definition: ChannelDefinition,
   alphaPerSecond: number,
   kinkTimeResolutionSeconds: number | null,
+  startSamplesPerShortestWindow = BASE_SAMPLES_PER_SHORTEST_WINDOW,
 ): RampIntegral {
   const groups = groupWindows(history.windows);
   const mode = groups.length === 0 ? "none" : groups.length === 1 && history.windows.length > 1 ? "whole-protocol" : "separate-ramps";
@@ -170,7 +172,7 @@ export function rampQuantaPerSquaredSource(
     const perShortest = kinkTimeResolutionSeconds === null ? DEFAULT_KINK_SAMPLES : Math.max(2, shortest / kinkTimeResolutionSeconds);
     level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
   } else {
-    let perShortest = BASE_SAMPLES_PER_SHORTEST_WINDOW;
+    let perShortest = startSamplesPerShortestWindow;
     level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
     for (let step = 1; step < MAX_LEVELS && relativeChange(level.coarse, level.fine) > CONVERGENCE_TARGET && level.samplesPerWindow < MAX_SAMPLES; step++) {
       perShortest *= 2;

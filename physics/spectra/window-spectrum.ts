@@ -2,7 +2,7 @@
  * The power spectrum |ĝ(Ω)|² of one moving window's source rate g(u) = df/du (u = t/τ ∈ [0, 1]), by fft.js.
  *
  * g is sampled at the n cell midpoints u_m = (m + ½)/n (in closed form where the window knows its rate, else as
- * cell averages n[f(u_{m+1}) − f(u_m)]) and zero-padded to M = 4n, so that ĝ(Ω) ≈ (1/n) Σ g_m e^{iΩu_m} on the
+ * cell averages n[f(u_{m+1}) − f(u_m)], whose transform is the true one times sinc(Ω/2n), divided out) and zero-padded to M = 4n, so that ĝ(Ω) ≈ (1/n) Σ g_m e^{iΩu_m} on the
  * grid Ω_j = 2πjn/M = jπ/2 up to the Nyquist frequency πn; padding by 4 keeps the autocorrelation (support
  * [−1, 1]) clear of its periodic images. Also returned: the moments μ_k = (1/n) Σ g_m (u_m − ½)^k, k ≤ 2, which
  * give |ĝ|² = μ₀² + (μ₁² − μ₀μ₂)Ω² + O(Ω⁴) at small Ω exactly for the sampled g; and the same from every other
@@ -130,6 +130,15 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
     const re = output[2 * j] + output[2 * (half - j)];
     const im = output[2 * j + 1] - output[2 * (half - j) + 1];
     coarse[j] = (re * re + im * im) * norm;
+  }
+  if (!window.rate) {
+    // Cell averages over cells of width 1/n: divide by sinc²(Ω/2n) = sinc²(πj/M) at both levels.
+    for (let j = 1; j <= half; j++) {
+      const x = (Math.PI * j) / length;
+      const box = (Math.sin(x) / x) ** 2;
+      fine[j] /= box;
+      if (j <= quarter) coarse[j] /= box;
+    }
   }
 
   const spectrum: WindowSpectrum = {

@@ -43,7 +43,7 @@ export function quantityFromLog10(log10: number, unit: string, sourceKey: Source
   if (Number.isNaN(log10)) throw new RangeError(`a ${sourceKey} quantity came out as NaN`);
   return {
     value: valueFromLog10(log10),
-    log10: log10 === -Infinity ? null : Number.isFinite(log10) ? log10 : null,
+    log10: log10 === -Infinity ? null : Number.isFinite(log10) ? log10 + 0 : null, // + 0 turns −0 into 0
     unit,
     sourceKey,
   };

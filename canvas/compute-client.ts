@@ -1,91 +1,28 @@
 /**
- * The editor's side of the compute worker: the shapes it sends and receives, and a scheduler that keeps the UI
- * free. The worker runs one computation at a time; while it works, only the newest document waits (older ones are
- * dropped), so a drag sends a computation per frame without ever queueing stale work.
+ * The editor's side of the compute workers: the messages they exchange, a scheduler for the live budget that keeps
+ * the UI free, and a runner for sweeps. The budget worker runs one computation at a time; while it works, only the
+ * newest document waits (older ones are dropped), so a drag asks for a budget every frame without queueing stale
+ * work. Sweeps run on a worker of their own so the live budget never waits behind them.
  */
+import type { ComputeIssue, ComputeOutcome, ScenarioResult } from "@/physics/result";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
+import type { RecombinationOptimum, RecombinationOptimumRequest, SweepParameter, SweepRequest, SweepResult } from "@/physics/sweeps";
 
-/** A reported number: its value (null when it only fits as a logarithm), log10, unit and formula key (/methods#key). */
-export interface BudgetQuantity {
-  value: number | null;
-  log10: number | null;
-  unit: string;
-  sourceKey: string;
-}
+export type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepRequest, SweepResult };
 
-export type BudgetFlagStatus = "ok" | "note" | "caution" | "invalid" | "not-applicable";
+/** A job for the sweep worker: a sweep of one parameter, or the recombination time that minimises ⟨N⟩. */
+export type SweepJob =
+  | { kind: "sweep"; document: ScenarioDocument; sweep: SweepRequest }
+  | { kind: "optimise"; document: ScenarioDocument; request: RecombinationOptimumRequest };
 
-export interface BudgetFlag {
-  code: string;
-  status: BudgetFlagStatus;
-  message: string;
-}
-
-export interface BudgetChannel {
-  channel: "electromagnetic" | "gravitational";
-  /** Quanta reaching null infinity, where that count is distinct from the horizon's; else null. */
-  farField: BudgetQuantity | null;
-  /** Quanta into the horizon, where distinct from the far-field count; else null. */
-  horizon: BudgetQuantity | null;
-  rampDriven: BudgetQuantity;
-  holdDriven: BudgetQuantity;
-  total: BudgetQuantity;
-  decoherence: BudgetQuantity;
-  decoherenceTime: BudgetQuantity | null;
-  /** Why the channel is exactly zero, or null. */
-  exactZeroReason: string | null;
-}
-
-export interface Budget {
-  channels: BudgetChannel[];
-  combined: { total: BudgetQuantity; decoherence: BudgetQuantity; decoherenceTime: BudgetQuantity | null };
-  flags: BudgetFlag[];
-}
-
-export interface ComputeIssue {
-  path: string;
-  message: string;
-}
-
-export type BudgetOutcome = { ok: true; budget: Budget } | { ok: false; issues: ComputeIssue[] };
-
-/** What a sweep varies. */
-export type SweepVariable = "recombination-duration" | "hold-duration" | "lab-distance";
-
-export interface SweepRequest {
-  document: ScenarioDocument;
-  variable: SweepVariable;
-  /** Inclusive range of the swept value (SI: seconds, or metres above the horizon), sampled evenly in its logarithm. */
-  fromSI: number;
-  toSI: number;
-  points: number;
-}
-
-export interface SweepPoint {
-  valueSI: number;
-  /** Combined decoherence 1 − |⟨A|B⟩|; null where the computation failed at that point. */
-  decoherence: number | null;
-  totalQuanta: number | null;
-}
-
-export interface SweepResult {
-  variable: SweepVariable;
-  points: SweepPoint[];
-  /** Where the decoherence is smallest over the swept range (recombination duration only), or null. */
-  optimum: SweepPoint | null;
-  /** Issues at the points that failed, at most a few. */
-  issues: ComputeIssue[];
-}
-
-export type WorkerRequest =
-  | { type: "budget"; id: number; document: ScenarioDocument }
-  | { type: "sweep"; id: number; request: SweepRequest };
+export type WorkerRequest = { type: "budget"; id: number; document: ScenarioDocument } | { type: "job"; id: number; job: SweepJob };
 
 export type WorkerResponse =
-  | { type: "budget"; id: number; outcome: BudgetOutcome }
-  | { type: "sweep-progress"; id: number; done: number; total: number }
+  | { type: "budget"; id: number; outcome: ComputeOutcome }
+  | { type: "progress"; id: number; done: number; total: number }
   | { type: "sweep"; id: number; result: SweepResult }
-  | { type: "failed"; id: number; message: string };
+  | { type: "optimum"; id: number; optimum: RecombinationOptimum }
+  | { type: "failed"; id: number; issues: ComputeIssue[] };
 
 /** The part of a Worker the scheduler uses, so tests can stand a fake in its place. */
 export interface WorkerPort {
@@ -94,15 +31,15 @@ export interface WorkerPort {
   terminate(): void;
 }
 
+export interface BudgetListener {
+  started(revision: number): void;
+  finished(revision: number, outcome: ComputeOutcome): void;
+}
+
 export interface BudgetScheduler {
   /** Ask for the budget of `document`, tagged with the editor's revision of it. */
   request(document: ScenarioDocument, revision: number): void;
   dispose(): void;
-}
-
-export interface BudgetListener {
-  started(revision: number): void;
-  finished(revision: number, outcome: BudgetOutcome): void;
 }
 
 export function createBudgetScheduler(port: WorkerPort, listener: BudgetListener): BudgetScheduler {
@@ -121,7 +58,7 @@ export function createBudgetScheduler(port: WorkerPort, listener: BudgetListener
     const { revision } = inFlight;
     inFlight = null;
     if (data.type === "budget") listener.finished(revision, data.outcome);
-    else if (data.type === "failed") listener.finished(revision, { ok: false, issues: [{ path: "", message: data.message }] });
+    else if (data.type === "failed") listener.finished(revision, { ok: false, issues: data.issues });
     if (waiting) {
       const next = waiting;
       waiting = null;
@@ -141,40 +78,40 @@ export function createBudgetScheduler(port: WorkerPort, listener: BudgetListener
   };
 }
 
-export interface SweepListener {
-  progress(done: number, total: number): void;
-  finished(result: SweepResult): void;
-  failed(message: string): void;
+export interface JobListener {
+  progress?(done: number, total: number): void;
+  sweep?(result: SweepResult): void;
+  optimum?(optimum: RecombinationOptimum): void;
+  failed(issues: ComputeIssue[]): void;
 }
 
 /**
- * Runs one sweep at a time on its own worker (so the live budget never waits behind it). A new sweep replaces a
- * running one: the old worker is terminated, since a sweep's loop cannot be interrupted from outside.
+ * Runs one sweep job at a time. A new job replaces a running one: the old worker is terminated (a sweep's loop
+ * cannot be interrupted from outside) and a fresh one spawned.
  */
-export function createSweepRunner(spawn: () => WorkerPort) {
+export function createJobRunner(spawn: () => WorkerPort) {
   let port: WorkerPort | null = null;
   let nextId = 1;
+  const stop = () => {
+    port?.terminate();
+    port = null;
+  };
   return {
-    run(request: SweepRequest, listener: SweepListener) {
-      port?.terminate();
+    run(job: SweepJob, listener: JobListener) {
+      stop();
       const current = spawn();
       port = current;
       const id = nextId++;
       current.onmessage = ({ data }) => {
         if (data.id !== id) return;
-        if (data.type === "sweep-progress") listener.progress(data.done, data.total);
-        else if (data.type === "sweep") listener.finished(data.result);
-        else if (data.type === "failed") listener.failed(data.message);
+        if (data.type === "progress") listener.progress?.(data.done, data.total);
+        else if (data.type === "sweep") listener.sweep?.(data.result);
+        else if (data.type === "optimum") listener.optimum?.(data.optimum);
+        else if (data.type === "failed") listener.failed(data.issues);
       };
-      current.postMessage({ type: "sweep", id, request });
+      current.postMessage({ type: "job", id, job });
     },
-    cancel() {
-      port?.terminate();
-      port = null;
-    },
-    dispose() {
-      port?.terminate();
-      port = null;
-    },
+    cancel: stop,
+    dispose: stop,
   };
 }

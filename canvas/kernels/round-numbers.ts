@@ -57,8 +57,16 @@ export function roundTicks(from: number, to: number, count: number): number[] {
   return ticks;
 }
 
-/** A value rounded to one significant digit (3.7e-4 → 4e-4), keeping its sign; zero stays zero. */
-export function oneSignificantDigit(value: number): number {
+/** The 1–2–5 ladder value nearest to `value` in ratio (3.7e-4 → 5e-4, 1.3 → 1), keeping its sign; zero stays zero. */
+export function nearestLadderValue(value: number): number {
   if (value === 0) return 0;
-  return Number(value.toPrecision(1));
+  const magnitude = Math.abs(value);
+  const below = ladderStepAtMost(magnitude);
+  const above = ladderStepAtLeast(magnitude);
+  return Math.sign(value) * (magnitude / below <= above / magnitude ? below : above);
+}
+
+/** A value rounded to `digits` significant digits. */
+export function significantDigits(value: number, digits: number): number {
+  return value === 0 ? 0 : Number(value.toPrecision(digits));
 }

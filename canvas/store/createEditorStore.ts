@@ -37,8 +37,8 @@ function initialData({ document, version, readOnly }: EditorStoreOptions): Edito
     diagramPointer: null,
     refused: null,
     save: { baseVersion: version, savedDocument: document, status: "idle", message: null, conflictVersion: null },
-    budget: { status: "idle", budget: null, resultRevision: null, issues: [] },
-    sweep: { variable: "recombination-duration", status: "idle", progress: null, result: null, resultRevision: null, message: null },
+    budget: { status: "idle", result: null, resultRevision: null, issues: [] },
+    sweep: { parameter: "recombination-time", status: "idle", progress: null, result: null, optimum: null, requestRevision: null, issues: [] },
   };
 }
 
@@ -122,7 +122,7 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
         set((s) => ({
           ...initialData({ document, version, readOnly }),
           labViewSize,
-          sweep: { ...sweep, result: null, resultRevision: null, status: "idle", progress: null },
+          sweep: { ...initialData({ document, version, readOnly }).sweep, parameter: sweep.parameter },
           revision: s.revision + 1,
         }));
       },
@@ -136,18 +136,19 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
       budgetStarted: () => set((s) => ({ budget: { ...s.budget, status: "computing" } })),
       budgetFinished(revision, outcome) {
         set((s) => {
-          const current = revision === s.revision;
-          if (outcome.ok) return { budget: { status: current ? "ready" : "computing", budget: outcome.budget, resultRevision: revision, issues: [] } };
-          return { budget: { status: current ? "failed" : "computing", budget: s.budget.budget, resultRevision: revision, issues: outcome.issues } };
+          const status = revision !== s.revision ? "computing" : outcome.ok ? "ready" : "failed";
+          if (outcome.ok) return { budget: { status, result: outcome.result, resultRevision: revision, issues: [] } };
+          return { budget: { status, result: s.budget.result, resultRevision: revision, issues: outcome.issues } };
         });
       },
 
-      setSweepVariable: (variable) => set((s) => ({ sweep: { ...s.sweep, variable, result: null, resultRevision: null, status: "idle", progress: null } })),
-      sweepStarted: () => set((s) => ({ sweep: { ...s.sweep, status: "running", progress: null, message: null } })),
+      setSweepParameter: (parameter) =>
+        set((s) => ({ sweep: { ...s.sweep, parameter, status: "idle", progress: null, result: null, optimum: null, requestRevision: null, issues: [] } })),
+      sweepStarted: (revision) => set((s) => ({ sweep: { ...s.sweep, status: "running", progress: null, requestRevision: revision, issues: [] } })),
       sweepProgress: (done, total) => set((s) => ({ sweep: { ...s.sweep, progress: { done, total } } })),
-      sweepFinished: (result) =>
-        set((s) => ({ sweep: { ...s.sweep, status: "ready", result, resultRevision: s.revision, progress: null, message: null } })),
-      sweepFailed: (message) => set((s) => ({ sweep: { ...s.sweep, status: "failed", progress: null, message } })),
+      sweepFinished: (result) => set((s) => ({ sweep: { ...s.sweep, status: "ready", result, progress: null } })),
+      optimumFound: (optimum) => set((s) => ({ sweep: { ...s.sweep, status: "ready", optimum, progress: null } })),
+      sweepFailed: (issues) => set((s) => ({ sweep: { ...s.sweep, status: "failed", progress: null, issues } })),
     };
   });
 }

@@ -2,24 +2,13 @@
  * Derived values for components, memoised on the references they come from so `useStore(store, selector)` sees a
  * stable value until something it depends on changes.
  */
+import { memoizeLast } from "../kernels/memoize";
 import { handlePlacements, type HandlePlacement } from "../kernels/lab-view/handles";
 import { fitLabViewport, type LabViewport } from "../kernels/lab-view/viewport";
 import { segmentTimes, segmentsProtocolOf, type SegmentsProtocol } from "../kernels/timeline";
 import type { ScenarioDocument, SeparationSpec } from "@/physics/scenario/schema";
 import { sameData } from "./patches";
 import type { EditorData } from "./state";
-
-/** Remembers the last result and recomputes only when one of the arguments is a different reference. */
-export function memoizeLast<A extends unknown[], R>(fn: (...args: A) => R): (...args: A) => R {
-  let lastArgs: A | null = null;
-  let lastResult: R;
-  return (...args: A) => {
-    if (lastArgs && lastArgs.length === args.length && lastArgs.every((a, i) => Object.is(a, args[i]))) return lastResult;
-    lastArgs = args;
-    lastResult = fn(...args);
-    return lastResult;
-  };
-}
 
 export interface LabViewSelectors {
   viewport(state: EditorData): LabViewport | null;

@@ -1,7 +1,7 @@
 /** The editor's state and the names of its actions. */
 import type { DiagramPoint } from "@/physics/backgrounds";
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
-import type { Budget, BudgetOutcome, ComputeIssue, SweepRequest, SweepResult, SweepVariable } from "../compute-client";
+import type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepResult } from "../compute-client";
 import type { DragStart, ProtocolPlan } from "../kernels/lab-view/drag-plan";
 import type { HandleId } from "../kernels/lab-view/handles";
 import type { LabKeyEvent, LabPointerEvent } from "../tools/types";
@@ -24,20 +24,23 @@ export interface SaveState {
 
 export interface BudgetState {
   status: "idle" | "computing" | "ready" | "failed";
-  budget: Budget | null;
+  /** The latest result received (possibly for an older revision: see resultRevision). */
+  result: ScenarioResult | null;
   /** The document revision `budget` (or `issues`) belongs to. */
   resultRevision: number | null;
   issues: ComputeIssue[];
 }
 
 export interface SweepState {
-  variable: SweepVariable;
+  parameter: SweepParameter;
   status: "idle" | "running" | "ready" | "failed";
   progress: { done: number; total: number } | null;
   result: SweepResult | null;
-  /** The document revision the result was computed for. */
-  resultRevision: number | null;
-  message: string | null;
+  /** The best recombination time for the current total duration, when asked for. */
+  optimum: RecombinationOptimum | null;
+  /** The document revision the sweep (or optimum) was started for: a later edit makes it stale. */
+  requestRevision: number | null;
+  issues: ComputeIssue[];
 }
 
 export interface EditorData {
@@ -93,12 +96,13 @@ export interface EditorActions {
   saveFailed(message: string): void;
   saveConflicted(currentVersion: number): void;
   budgetStarted(revision: number): void;
-  budgetFinished(revision: number, outcome: BudgetOutcome): void;
-  setSweepVariable(variable: SweepVariable): void;
-  sweepStarted(request: SweepRequest): void;
+  budgetFinished(revision: number, outcome: ComputeOutcome): void;
+  setSweepParameter(parameter: SweepParameter): void;
+  sweepStarted(revision: number): void;
   sweepProgress(done: number, total: number): void;
   sweepFinished(result: SweepResult): void;
-  sweepFailed(message: string): void;
+  optimumFound(optimum: RecombinationOptimum): void;
+  sweepFailed(issues: ComputeIssue[]): void;
 }
 
 /** Memoised derived values of this store (one set per store, so editors never share a cache). */

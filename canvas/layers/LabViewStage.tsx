@@ -1,0 +1,171 @@
+"use client";
+
+/**
+ * The Lab view: both branches' offsets along the separation axis against the lab's proper time, at a scale where
+ * a micrometre reads, with the handles that set the protocol. Pointer events go to the store's drag-handle tool
+ * (captured, so a drag may leave the stage); arrow keys nudge the selected handle.
+ */
+import { useRef, type KeyboardEvent, type PointerEvent } from "react";
+import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
+import { formatQuantity } from "@/physics/units";
+import { useEditor, useEditorStore } from "../EditorProvider";
+import { compactQuantity } from "../kernels/diagram/labels";
+import { boundaryTicks, offsetTicks } from "../kernels/lab-view/axis-ticks";
+import type { HandlePlacement } from "../kernels/lab-view/handles";
+import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport } from "../kernels/lab-view/viewport";
+import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
+import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
+import { useFigureFonts } from "./useFigureFonts";
+
+function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separation: Parameters<typeof branchOffsetsMetres>[0], origin: number) {
+  const times = segmentTimes(protocol, origin);
+  const first = viewport.pieces[0];
+  const last = viewport.pieces[viewport.pieces.length - 1];
+  const from = Math.min(first.fromSeconds, pxToTime(viewport, viewport.plot.left));
+  const to = Math.max(last.toSeconds, pxToTime(viewport, viewport.plot.left + viewport.plot.width));
+  const a: number[] = [];
+  const b: number[] = [];
+  for (const t of pathSampleTimes(times, from, to, 64)) {
+    const x = timeToPx(viewport, t);
+    const offsets = branchOffsetsMetres(separation, separationFraction(protocol, times, t));
+    a.push(x, metresToPx(viewport, offsets.a));
+    b.push(x, metresToPx(viewport, offsets.b));
+  }
+  return { a, b, times };
+}
+
+function Handle({ handle, viewport, palette, state }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette; state: "plain" | "hover" | "selected" }) {
+  const colour = state === "selected" ? palette.focus : state === "hover" ? palette.ink : palette.inkSoft;
+  const { plot } = viewport;
+  if (handle.axis === "distance") {
+    return (
+      <Group>
+        <Circle x={handle.x} y={handle.y} radius={state === "plain" ? 5.5 : 7} fill={palette.paper} stroke={colour} strokeWidth={2} />
+        <Line points={[handle.x, handle.y - 13, handle.x - 3, handle.y - 9, handle.x + 3, handle.y - 9]} closed fill={colour} />
+        <Line points={[handle.x, handle.y + 13, handle.x - 3, handle.y + 9, handle.x + 3, handle.y + 9]} closed fill={colour} />
+      </Group>
+    );
+  }
+  const bottom = plot.top + plot.height;
+  return (
+    <Group>
+      <Line points={[handle.x, plot.top, handle.x, bottom]} stroke={colour} strokeWidth={state === "plain" ? 1 : 1.5} dash={state === "plain" ? [3, 3] : []} />
+      <Rect x={handle.x - 4.5} y={bottom - 7} width={9} height={14} cornerRadius={2} fill={palette.paper} stroke={colour} strokeWidth={state === "plain" ? 1.25 : 2} />
+    </Group>
+  );
+}
+
+export default function LabViewStage({ width, height }: { width: number; height: number }) {
+  const store = useEditorStore();
+  const document = useEditor((s) => s.document);
+  const viewport = useEditor((s) => s.labView.viewport(s));
+  const origin = useEditor((s) => s.labView.originSeconds(s));
+  const handles = useEditor((s) => s.labView.handles(s));
+  const hover = useEditor((s) => s.hover);
+  const selection = useEditor((s) => s.selection);
+  const dragging = useEditor((s) => s.labTool.name === "dragging");
+  const fonts = useFigureFonts();
+  const container = useRef<HTMLDivElement>(null);
+  const palette = FIGURE_PALETTES[document.display.theme];
+  const protocol = document.protocol.kind === "segments" ? document.protocol : null;
+
+  const local = (event: PointerEvent) => {
+    const box = container.current!.getBoundingClientRect();
+    return { x: event.clientX - box.left, y: event.clientY - box.top, shiftKey: event.shiftKey };
+  };
+  const onPointerDown = (event: PointerEvent<HTMLDivElement>) => {
+    if (event.button !== 0) return;
+    container.current?.focus();
+    event.currentTarget.setPointerCapture(event.pointerId);
+    store.getState().labPointerDown(local(event));
+  };
+  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (store.getState().labKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
+  };
+  const hovered = handles.find((h) => h.id === hover);
+  const cursor = dragging ? "grabbing" : hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
+
+  if (!protocol || !viewport) {
+    return (
+      <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">
+        The Lab view edits segment protocols (separation, hold, recombination); this scenario uses a {document.protocol.kind} profile.
+      </div>
+    );
+  }
+  const { a, b, times } = branchPaths(viewport, protocol, document.separation, origin);
+  const { plot } = viewport;
+  const bottom = plot.top + plot.height;
+  const zeroY = metresToPx(viewport, 0);
+  const bounds = boundaryTicks(viewport, times);
+  const axisWords = `offset along the ${document.separation.axis} axis`;
+
+  return (
+    <div
+      ref={container}
+      tabIndex={0}
+      role="application"
+      aria-label="Lab view: branch offsets against lab time; drag or use the arrow keys to move the selected handle"
+      data-testid="lab-view"
+      style={{ cursor, touchAction: "none", outline: "none" }}
+      onPointerDown={onPointerDown}
+      onPointerMove={(e) => store.getState().labPointerMove(local(e))}
+      onPointerUp={(e) => store.getState().labPointerUp(local(e))}
+      onPointerCancel={() => store.getState().labCancel()}
+      onLostPointerCapture={() => store.getState().labTool.name === "dragging" && store.getState().labCancel()}
+      onPointerLeave={() => store.getState().labTool.name === "idle" && store.getState().setHover(null)}
+      onKeyDown={onKeyDown}
+    >
+      <Stage width={width} height={height} listening={false}>
+        <Layer>
+          <Rect x={0} y={0} width={width} height={height} fill={palette.paper} />
+          {SEGMENT_NAMES.map((name, i) => {
+            const x0 = bounds[i].px;
+            const x1 = bounds[i + 1].px;
+            return (
+              <Group key={name}>
+                {name !== "hold" && <Rect x={x0} y={plot.top} width={Math.max(0, x1 - x0)} height={plot.height} fill={palette.contextPaper} />}
+                <Text x={x0} y={plot.top + 4} width={Math.max(0, x1 - x0)} align="center" text={x1 - x0 > 60 ? name : ""} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
+              </Group>
+            );
+          })}
+          {offsetTicks(viewport).map((t) => (
+            <Group key={t.valueSI}>
+              <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
+              <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} />
+            </Group>
+          ))}
+          <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
+          <Line points={[plot.left, plot.top, plot.left, bottom, plot.left + plot.width, bottom]} stroke={palette.ink} strokeWidth={1} />
+          {scaleBreaksPx(viewport).map((x) => (
+            <Group key={x}>
+              <Line points={[x - 4, bottom + 4, x, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
+              <Line points={[x, bottom + 4, x + 4, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
+            </Group>
+          ))}
+          {bounds.map((t, i) => (
+            <Text
+              key={i}
+              x={t.px - 50}
+              y={bottom + 10 + (i % 2) * 13}
+              width={100}
+              align="center"
+              text={formatQuantity(t.valueSI - origin, "time")}
+              fontSize={11}
+              fontFamily={fonts.mono}
+              fill={palette.inkSoft}
+            />
+          ))}
+          <Text x={plot.left + plot.width - 200} y={height - 13} width={200} align="right" text="lab proper time" fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
+          <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
+          <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
+          <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
+          <Text x={plot.left + 6} y={plot.top + 4} text="A" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchA} />
+          <Text x={plot.left + 20} y={plot.top + 4} text="B" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchB} />
+          {handles.map((h) => (
+            <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
+          ))}
+        </Layer>
+      </Stage>
+    </div>
+  );
+}

@@ -1,0 +1,47 @@
+/** The label candidates of a diagram scene, in stage pixels, for the label layout. */
+import type { DiagramScene } from "../kernels/diagram/scene";
+import type { LabelCandidate } from "../kernels/diagram/decorations";
+import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
+
+const BOUNDARY_OFFSET_PX = 13;
+
+export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramViewport): LabelCandidate[] {
+  const boundaryLabels = scene.boundaries.map((b, i): LabelCandidate => {
+    const at = toPx(viewport, b.labelAt);
+    // labelDirection is on the diagram (T up); on screen y runs down.
+    const dx = b.labelDirection.X;
+    const dy = -b.labelDirection.T;
+    return {
+      id: `boundary-${i}`,
+      text: b.label,
+      x: at.x + dx * BOUNDARY_OFFSET_PX,
+      y: at.y + dy * BOUNDARY_OFFSET_PX,
+      align: dx > 0.35 ? "left" : dx < -0.35 ? "right" : "center",
+      verticalAlign: dy > 0.35 ? "top" : dy < -0.35 ? "bottom" : "middle",
+      rotation: 0,
+      fontSize: b.kind === "singularity" ? 13 : 15,
+      priority: b.bordersLabRegion ? 100 : 90,
+      tone: b.bordersLabRegion ? "ink" : "soft",
+    };
+  });
+  const gridLabels = scene.grid.map((g, i): LabelCandidate => {
+    const at = toPx(viewport, g.labelAt);
+    const timeAtCentre = g.family === "time" && (scene.chart.background.kind === "minkowski" || scene.chart.background.kind === "de-sitter");
+    if (g.family === "radius") {
+      return { id: `grid-${i}`, text: g.label, x: at.x + 2, y: at.y - 4, align: "left", verticalAlign: "top", rotation: -90, fontSize: 10, priority: 10, tone: "faint" };
+    }
+    return {
+      id: `grid-${i}`,
+      text: g.label,
+      x: timeAtCentre ? at.x - 6 : at.x + 6,
+      y: at.y,
+      align: timeAtCentre ? "right" : "left",
+      verticalAlign: "middle",
+      rotation: 0,
+      fontSize: 10,
+      priority: g.valueSI === 0 ? 20 : 15,
+      tone: "faint",
+    };
+  });
+  return [...boundaryLabels, ...gridLabels];
+}

@@ -1,29 +1,31 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { useAccount, useUpdateAccount, type UserDto } from "@/components/api/account";
-import { sentence } from "@/components/format/text";
-import { applyServerErrors } from "@/components/forms/serverErrors";
+import { FormProblem } from "@/components/forms/FormProblem";
+import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
+import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
 import { displayNameSchema } from "@/lib/contracts";
 
 const nameSchema = z.object({ name: displayNameSchema });
-type NameInput = z.input<typeof nameSchema>;
 
 export function AccountPanel() {
   const account = useAccount();
-  if (account.isPending) return <Skeleton lines={4} label="Loading your account" />;
-  if (account.isError) return <LoadError error={account.error} onRetry={() => account.refetch()} what="your account" />;
-  const user = account.data;
+  return (
+    <QueryView query={account} what="your account">
+      {(user) => <AccountDetails user={user} />}
+    </QueryView>
+  );
+}
+
+function AccountDetails({ user }: { user: UserDto }) {
   return (
     <div className="grid max-w-3xl gap-12 md:grid-cols-2">
       <NameForm user={user} />
@@ -67,43 +69,30 @@ export function AccountPanel() {
 function NameForm({ user }: { user: UserDto }) {
   const router = useRouter();
   const update = useUpdateAccount();
-  const [problem, setProblem] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors, isSubmitting, isDirty },
-  } = useForm<NameInput, unknown, z.output<typeof nameSchema>>({ resolver: zodResolver(nameSchema), defaultValues: { name: user.name } });
+  const { form, problem, submit } = useApiForm(nameSchema, { defaultValues: { name: user.name } });
+  const { errors, isSubmitting, isDirty } = form.formState;
 
-  const onSubmit = handleSubmit(async (input) => {
-    setProblem(null);
+  const onSubmit = submit(async (input) => {
     setSaved(false);
-    try {
-      const updated = await update.mutateAsync(input);
-      reset({ name: updated.name });
-      setSaved(true);
-      // The header shows the name; it is drawn on the server.
-      router.refresh();
-    } catch (error) {
-      setProblem(applyServerErrors(error, setError, ["name"]));
-    }
+    const updated = await update.mutateAsync(input);
+    form.reset({ name: updated.name });
+    setSaved(true);
+    // The header shows the name; it is drawn on the server.
+    router.refresh();
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5" aria-labelledby="account-name-title">
-      <h2 id="account-name-title" className="font-serif text-xl font-semibold">
-        Your name
-      </h2>
-      {problem && <Notice tone="invalid">{sentence(problem)}</Notice>}
+    <form onSubmit={onSubmit} noValidate className="space-y-5">
+      <h2 className="font-serif text-xl font-semibold">Your name</h2>
+      <FormProblem problem={problem} />
       {saved && !isDirty && <Notice tone="success">Saved.</Notice>}
       <TextField
         label="Name"
         autoComplete="name"
         hint="Shown beside your changes and in member lists."
         error={errors.name?.message}
-        {...register("name")}
+        {...form.register("name")}
       />
       <button type="submit" disabled={isSubmitting || !isDirty} className={buttonStyles.primary}>
         {isSubmitting ? "Saving…" : "Save name"}

@@ -6,17 +6,14 @@ import { useState } from "react";
 import { messageOf } from "@/components/api/client";
 import { useChangeMemberRole, useMembers, useRemoveMember, type MemberDto, type ProjectRole } from "@/components/api/members";
 import { projectKeys, useProject } from "@/components/api/projects";
-import { roleNames } from "@/components/format/words";
 import { sentence } from "@/components/format/text";
 import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { Notice } from "@/components/ui/Notice";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
-import { TimeStamp } from "@/components/ui/TimeStamp";
-import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
+import { QueryView } from "@/components/ui/QueryStates";
 import { AddMemberForm } from "./AddMemberForm";
+import { MemberTable } from "./MemberTable";
 
-const roles = Object.keys(roleNames) as ProjectRole[];
-
+/** The members tab. The project itself is loaded (and its 404 handled) by the frame around it. */
 export function MembersPanel({ projectId, currentUserId }: { projectId: string; currentUserId: string }) {
   const router = useRouter();
   const queryClient = useQueryClient();
@@ -58,95 +55,23 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
           Members
         </h2>
         {problem && (
-          <Notice
-            tone="caution"
-            action={
-              <button type="button" onClick={() => setProblem(null)} className={`${buttonStyles.row} -my-1`}>
-                Dismiss
-              </button>
-            }
-          >
+          <Notice tone="caution" onDismiss={() => setProblem(null)}>
             {sentence(problem)}
           </Notice>
         )}
-        {members.isPending ? (
-          <Skeleton lines={4} label="Loading members" />
-        ) : members.isError ? (
-          <LoadError error={members.error} onRetry={() => members.refetch()} what="the members" />
-        ) : (
-          <table className={tableStyles.table}>
-            <caption className="sr-only">Members of {project.name}</caption>
-            <thead>
-              <tr>
-                <th scope="col" className={tableStyles.head}>
-                  Name
-                </th>
-                <th scope="col" className={tableStyles.head}>
-                  E-mail
-                </th>
-                <th scope="col" className={tableStyles.head}>
-                  Role
-                </th>
-                <th scope="col" className={tableStyles.head}>
-                  Joined
-                </th>
-                <th scope="col" className={tableStyles.head}>
-                  <span className="sr-only">Actions</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {members.data.map((member) => {
-                const isSelf = member.userId === currentUserId;
-                const pendingRole = changeRole.isPending && changeRole.variables?.userId === member.userId ? changeRole.variables.role : null;
-                return (
-                  <tr key={member.userId} className={tableStyles.row}>
-                    <td className={`${tableStyles.cell} font-semibold`}>
-                      {member.name}
-                      {isSelf && <span className="ml-2 font-normal text-ink-faint">(you)</span>}
-                    </td>
-                    <td className={`${tableStyles.cell} text-ink-soft`}>{member.email}</td>
-                    <td className={tableStyles.cell}>
-                      {manages ? (
-                        <select
-                          aria-label={`Role of ${member.name}`}
-                          value={pendingRole ?? member.role}
-                          disabled={pendingRole !== null}
-                          onChange={(e) => onRoleChange(member, e.target.value as ProjectRole)}
-                          className={`${fieldStyles.control} mt-0 w-32 py-1 text-sm`}
-                        >
-                          {roles.map((role) => (
-                            <option key={role} value={role}>
-                              {roleNames[role]}
-                            </option>
-                          ))}
-                        </select>
-                      ) : (
-                        roleNames[member.role]
-                      )}
-                    </td>
-                    <td className={tableStyles.cell}>
-                      <TimeStamp iso={member.joinedAt} />
-                    </td>
-                    <td className={`${tableStyles.cell} text-right`}>
-                      {isSelf ? (
-                        <button type="button" onClick={() => setRemoving(member)} className={buttonStyles.row}>
-                          Leave project
-                        </button>
-                      ) : (
-                        manages && (
-                          <button type="button" onClick={() => setRemoving(member)} className={buttonStyles.row}>
-                            Remove
-                          </button>
-                        )
-                      )}
-                    </td>
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-        )}
+        <QueryView query={members} what="the members">
+          {(list) => (
+            <MemberTable
+              projectName={project.name}
+              members={list}
+              currentUserId={currentUserId}
+              manages={manages}
+              pendingRole={changeRole.isPending ? changeRole.variables : null}
+              onRoleChange={onRoleChange}
+              onRemove={setRemoving}
+            />
+          )}
+        </QueryView>
         <p className="text-sm text-ink-faint">
           Owners manage members and may rename or delete the project; editors change scenarios; viewers only look. A project
           always keeps at least one owner.

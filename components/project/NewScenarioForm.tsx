@@ -1,13 +1,11 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { useCreateScenario } from "@/components/api/scenarios";
 import { backgroundKinds, backgroundNames } from "@/components/format/words";
-import { sentence } from "@/components/format/text";
-import { applyServerErrors } from "@/components/forms/serverErrors";
+import { FormProblem } from "@/components/forms/FormProblem";
+import { useApiForm } from "@/components/forms/useApiForm";
 import { newScenarioDocument } from "@/components/scenario/newScenarioDocument";
 import { backgroundSummary, labSummary } from "@/components/scenario/summary";
 import { SelectField, TextField } from "@/components/ui/Field";
@@ -20,7 +18,6 @@ const newScenarioSchema = z.object({
   title: scenarioTitleSchema,
   background: z.enum(backgroundKinds as [BackgroundKind, ...BackgroundKind[]], { error: "choose a background" }),
 });
-type NewScenarioInput = z.input<typeof newScenarioSchema>;
 
 /** What the chosen background starts with, read from the document itself. */
 function startingHint(kind: BackgroundKind): string {
@@ -30,22 +27,11 @@ function startingHint(kind: BackgroundKind): string {
 
 export function NewScenarioForm({ projectId }: { projectId: string }) {
   const create = useCreateScenario(projectId);
-  const [problem, setProblem] = useState<string | null>(null);
   const [created, setCreated] = useState<string | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    watch,
-    formState: { errors, isSubmitting },
-  } = useForm<NewScenarioInput, unknown, z.output<typeof newScenarioSchema>>({
-    resolver: zodResolver(newScenarioSchema),
-    defaultValues: { title: "", background: "minkowski" },
-  });
+  const { form, problem, setProblem, submit } = useApiForm(newScenarioSchema, { defaultValues: { title: "", background: "minkowski" } });
+  const { errors, isSubmitting } = form.formState;
 
-  const onSubmit = handleSubmit(async ({ title, background }) => {
-    setProblem(null);
+  const onSubmit = submit(async ({ title, background }) => {
     setCreated(null);
     // Read the starting document through the schema, so defaults of fields added later are filled in here too.
     const parsed = parseScenarioDocument(newScenarioDocument(background));
@@ -53,40 +39,26 @@ export function NewScenarioForm({ projectId }: { projectId: string }) {
       setProblem(`the starting document for this background does not fit the scenario schema (${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")})`);
       return;
     }
-    try {
-      const scenario = await create.mutateAsync({ title, document: parsed.document });
-      reset({ title: "", background });
-      setCreated(scenario.title);
-    } catch (error) {
-      setProblem(applyServerErrors(error, setError, ["title"]));
-    }
+    const scenario = await create.mutateAsync({ title, document: parsed.document });
+    form.reset({ title: "", background });
+    setCreated(scenario.title);
   });
 
-  const background = watch("background");
+  const background = form.watch("background");
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-labelledby="new-scenario-title" className="mb-10 border-b border-rule pb-8">
-      <h2 id="new-scenario-title" className="mb-4 font-serif text-xl font-semibold">
-        Add a scenario
-      </h2>
-      {problem && (
-        <div className="mb-4">
-          <Notice tone="invalid">{sentence(problem)}</Notice>
-        </div>
-      )}
-      {created && (
-        <div className="mb-4">
-          <Notice tone="success">Created “{created}”.</Notice>
-        </div>
-      )}
+    <form onSubmit={onSubmit} noValidate className="mb-10 space-y-4 border-b border-rule pb-8">
+      <h2 className="font-serif text-xl font-semibold">Add a scenario</h2>
+      <FormProblem problem={problem} />
+      {created && <Notice tone="success">Created “{created}”.</Notice>}
       <div className="flex flex-wrap items-start gap-4">
-        <TextField label="Title" autoComplete="off" className="min-w-64 flex-1" error={errors.title?.message} {...register("title")} />
+        <TextField label="Title" autoComplete="off" className="min-w-64 flex-1" error={errors.title?.message} {...form.register("title")} />
         <SelectField
           label="Background"
-          className="w-64"
+          className="w-72"
           hint={background ? startingHint(background) : undefined}
           error={errors.background?.message}
-          {...register("background")}
+          {...form.register("background")}
         >
           {backgroundKinds.map((kind) => (
             <option key={kind} value={kind}>

@@ -1,10 +1,9 @@
 "use client";
 
 import type { ReactNode } from "react";
-import { ApiError } from "@/components/api/client";
 import { useProject } from "@/components/api/projects";
 import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
+import { QueryView } from "@/components/ui/QueryStates";
 import { ProjectHeader } from "./ProjectHeader";
 
 /**
@@ -18,20 +17,14 @@ export function ProjectFrame({ projectId, children }: { projectId: string; child
   const project = useProject(projectId);
   return (
     <>
-      {project.isPending ? (
-        <Skeleton lines={5} label="Loading the project" />
-      ) : project.isError ? (
-        project.error instanceof ApiError && project.error.isNotFound ? (
-          <NotFoundNotice what="project" />
-        ) : (
-          <LoadError error={project.error} onRetry={() => project.refetch()} what="the project" />
-        )
-      ) : (
-        <>
-          <title>{`${project.data.name} · Branchline`}</title>
-          <ProjectHeader project={project.data} />
-        </>
-      )}
+      <QueryView query={project} what="the project" lines={5} notFound={<NotFoundNotice what="project" />}>
+        {(loaded) => (
+          <>
+            <title>{`${loaded.name} · Branchline`}</title>
+            <ProjectHeader project={loaded} />
+          </>
+        )}
+      </QueryView>
       {children}
     </>
   );

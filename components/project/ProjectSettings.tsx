@@ -1,15 +1,13 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { z } from "zod";
-import type { ProjectDto } from "@/components/api/projects";
-import { useDeleteProject, useUpdateProject } from "@/components/api/projects";
+import { useDeleteProject, useUpdateProject, type ProjectDto } from "@/components/api/projects";
 import { messageOf } from "@/components/api/client";
 import { sentence } from "@/components/format/text";
-import { applyServerErrors } from "@/components/forms/serverErrors";
+import { FormProblem } from "@/components/forms/FormProblem";
+import { useApiForm } from "@/components/forms/useApiForm";
 import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { TextAreaField, TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
@@ -18,7 +16,6 @@ import { projectNameSchema } from "@/lib/contracts";
 
 // The same rules as the PATCH body, with both fields present (the form always sends both).
 const settingsSchema = z.object({ name: projectNameSchema, description: z.string().max(2000, "use at most 2000 characters") });
-type SettingsInput = z.input<typeof settingsSchema>;
 
 /** Owners only: rename the project, change its description, or delete it. Folded away until asked for. */
 export function ProjectSettings({ project }: { project: ProjectDto }) {
@@ -37,38 +34,26 @@ export function ProjectSettings({ project }: { project: ProjectDto }) {
 
 function RenameProjectForm({ project }: { project: ProjectDto }) {
   const update = useUpdateProject(project.id);
-  const [problem, setProblem] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors, isSubmitting, isDirty },
-  } = useForm<SettingsInput, unknown, z.output<typeof settingsSchema>>({
-    resolver: zodResolver(settingsSchema),
+  const { form, problem, submit } = useApiForm(settingsSchema, {
     values: { name: project.name, description: project.description },
     resetOptions: { keepDirtyValues: true },
   });
+  const { errors, isSubmitting, isDirty } = form.formState;
 
-  const onSubmit = handleSubmit(async (input) => {
-    setProblem(null);
+  const onSubmit = submit(async (input) => {
     setSaved(false);
-    try {
-      const updated = await update.mutateAsync(input);
-      reset({ name: updated.name, description: updated.description });
-      setSaved(true);
-    } catch (error) {
-      setProblem(applyServerErrors(error, setError, ["name", "description"]));
-    }
+    const updated = await update.mutateAsync(input);
+    form.reset({ name: updated.name, description: updated.description });
+    setSaved(true);
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Rename the project">
-      {problem && <Notice tone="invalid">{sentence(problem)}</Notice>}
+    <form onSubmit={onSubmit} noValidate className="space-y-4">
+      <FormProblem problem={problem} />
       {saved && !isDirty && <Notice tone="success">Saved.</Notice>}
-      <TextField label="Project name" autoComplete="off" error={errors.name?.message} {...register("name")} />
-      <TextAreaField label="Description" error={errors.description?.message} {...register("description")} />
+      <TextField label="Project name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
+      <TextAreaField label="Description" error={errors.description?.message} {...form.register("description")} />
       <button type="submit" disabled={isSubmitting || !isDirty} className={buttonStyles.primary}>
         {isSubmitting ? "Saving…" : "Save name and description"}
       </button>

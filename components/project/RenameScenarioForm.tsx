@@ -1,20 +1,17 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { ApiError } from "@/components/api/client";
 import { scenarioKeys, useRenameScenario, type ScenarioSummaryDto } from "@/components/api/scenarios";
 import { sentence } from "@/components/format/text";
-import { applyServerErrors } from "@/components/forms/serverErrors";
+import { useApiForm } from "@/components/forms/useApiForm";
 import { FieldMessage } from "@/components/ui/Field";
 import { buttonStyles, fieldStyles } from "@/components/ui/styles";
 import { scenarioTitleSchema } from "@/lib/contracts";
 
 const renameSchema = z.object({ title: scenarioTitleSchema });
-type RenameInput = z.input<typeof renameSchema>;
 
 /**
  * Renames in place, sending the version the row shows. When someone saved in between, the server answers 409
@@ -24,26 +21,17 @@ export function RenameScenarioForm({ scenario, onDone }: { scenario: ScenarioSum
   const queryClient = useQueryClient();
   const rename = useRenameScenario(scenario.projectId);
   const [stale, setStale] = useState(false);
-  const [problem, setProblem] = useState<string | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<RenameInput, unknown, z.output<typeof renameSchema>>({
-    resolver: zodResolver(renameSchema),
-    defaultValues: { title: scenario.title },
-  });
+  const { form, problem, submit } = useApiForm(renameSchema, { defaultValues: { title: scenario.title } });
+  const { errors, isSubmitting } = form.formState;
 
-  const onSubmit = handleSubmit(async ({ title }) => {
-    setProblem(null);
+  const onSubmit = submit(async ({ title }) => {
     if (title === scenario.title) return onDone();
     try {
       await rename.mutateAsync({ scenarioId: scenario.id, version: scenario.version, title });
       onDone();
     } catch (error) {
       if (error instanceof ApiError && error.status === 409) setStale(true);
-      else setProblem(applyServerErrors(error, setError, ["title"]));
+      else throw error;
     }
   });
 
@@ -59,20 +47,19 @@ export function RenameScenarioForm({ scenario, onDone }: { scenario: ScenarioSum
     <form
       onSubmit={onSubmit}
       noValidate
-      aria-label={`Rename ${scenario.title}`}
       onKeyDown={(event) => {
         if (event.key === "Escape") onDone();
       }}
     >
-      <div className="flex flex-wrap items-center gap-2">
+      <div className="flex items-center gap-2">
         <input
           aria-label="New title"
           autoFocus
           autoComplete="off"
           aria-invalid={Boolean(titleError)}
           aria-describedby={titleError || stale || problem ? messageId : undefined}
-          className={`${fieldStyles.control} mt-0 min-w-48 flex-1 py-1`}
-          {...register("title")}
+          className={`${fieldStyles.control} mt-0 w-auto min-w-48 flex-1 py-1`}
+          {...form.register("title")}
         />
         <button type="submit" disabled={isSubmitting || stale} className={`${buttonStyles.primary} py-1`}>
           Save

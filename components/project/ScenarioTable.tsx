@@ -1,29 +1,25 @@
 "use client";
 
-import Link from "next/link";
 import { useEffect, useState } from "react";
 import { messageOf } from "@/components/api/client";
 import type { ProjectDto } from "@/components/api/projects";
 import { useDeleteScenario, useDuplicateScenario, useScenarioPage, type ScenarioSummaryDto } from "@/components/api/scenarios";
-import { backgroundName } from "@/components/format/words";
 import { sentence } from "@/components/format/text";
 import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
+import { EmptyState } from "@/components/ui/EmptyState";
 import { Notice } from "@/components/ui/Notice";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
-import { TimeStamp } from "@/components/ui/TimeStamp";
-import { buttonStyles, tableStyles } from "@/components/ui/styles";
+import { QueryView } from "@/components/ui/QueryStates";
 import { Pager } from "./Pager";
-import { RenameScenarioForm } from "./RenameScenarioForm";
 import { ScenarioFilters } from "./ScenarioFilters";
-import { SortableHeader } from "./SortableHeader";
+import { ScenarioGrid } from "./ScenarioGrid";
 import { useScenarioListParams } from "./useScenarioListParams";
 
+/** The project's scenarios: filters, the sortable table, paging, and the row actions' mutations. */
 export function ScenarioTable({ project }: { project: ProjectDto }) {
   const [query, setQuery] = useScenarioListParams();
   const scenarios = useScenarioPage(project.id, query);
   const duplicate = useDuplicateScenario(project.id);
   const remove = useDeleteScenario(project.id);
-  const [renaming, setRenaming] = useState<string | null>(null);
   const [deleting, setDeleting] = useState<ScenarioSummaryDto | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const canWrite = project.can.includes("scenario:write");
@@ -36,121 +32,46 @@ export function ScenarioTable({ project }: { project: ProjectDto }) {
     if (query.page > lastPage) setQuery({ page: lastPage });
   }, [total, query.page, query.pageSize, setQuery]);
 
-  const sort = (key: typeof query.sort, order: typeof query.order) => setQuery({ sort: key, order });
-  const filtered = Boolean(query.q || query.background);
+  const onDuplicate = (scenario: ScenarioSummaryDto) => {
+    setProblem(null);
+    duplicate.mutate(scenario.id, { onError: (error) => setProblem(`could not duplicate “${scenario.title}”: ${messageOf(error)}`) });
+  };
 
   return (
     <section aria-labelledby="scenarios-title" className="space-y-4">
-      <div className="flex flex-wrap items-end justify-between gap-4">
-        <h2 id="scenarios-title" className="font-serif text-xl font-semibold">
-          Scenarios
-        </h2>
-        <ScenarioFilters query={query} onChange={setQuery} />
-      </div>
+      <h2 id="scenarios-title" className="font-serif text-xl font-semibold">
+        Scenarios
+      </h2>
+      <ScenarioFilters query={query} onChange={setQuery} />
 
       {problem && (
-        <Notice
-          tone="invalid"
-          action={
-            <button type="button" onClick={() => setProblem(null)} className={`${buttonStyles.row} -my-1`}>
-              Dismiss
-            </button>
-          }
-        >
+        <Notice tone="invalid" onDismiss={() => setProblem(null)}>
           {sentence(problem)}
         </Notice>
       )}
 
-      {scenarios.isPending ? (
-        <Skeleton lines={6} label="Loading scenarios" />
-      ) : scenarios.isError ? (
-        <LoadError error={scenarios.error} onRetry={() => scenarios.refetch()} what="the scenarios" />
-      ) : scenarios.data.total === 0 ? (
-        <div className="border-y border-rule py-10 text-center text-ink-soft">
-          {filtered ? (
-            <>
-              <p className="font-serif text-lg text-ink">No scenario matches these filters</p>
-              <button type="button" onClick={() => setQuery({ q: undefined, background: undefined })} className={`${buttonStyles.secondary} mt-4`}>
-                Clear filters
-              </button>
-            </>
+      <QueryView query={scenarios} what="the scenarios" lines={6}>
+        {(page) =>
+          page.total > 0 ? (
+            <div className={scenarios.isPlaceholderData ? "opacity-60 transition-opacity" : "transition-opacity"} aria-busy={scenarios.isFetching}>
+              <ScenarioGrid
+                project={project}
+                scenarios={page.items}
+                sort={query}
+                onSort={(sort, order) => setQuery({ sort, order })}
+                actions={canWrite ? { onDuplicate, duplicatingId: duplicate.isPending ? duplicate.variables : null, onDelete: setDeleting } : null}
+              />
+              <Pager page={query.page} pageSize={query.pageSize} total={page.total} onPage={(n) => setQuery({ page: n })} />
+            </div>
+          ) : query.q || query.background ? (
+            <EmptyState title="No scenario matches these filters">Change the search or the background shown, or clear the filters.</EmptyState>
           ) : (
-            <>
-              <p className="font-serif text-lg text-ink">No scenarios yet</p>
-              <p className="mt-2 text-sm">{canWrite ? "Create the first one with the form above." : "Nobody has added a scenario to this project yet."}</p>
-            </>
-          )}
-        </div>
-      ) : (
-        <div className={scenarios.isPlaceholderData ? "opacity-60 transition-opacity" : "transition-opacity"} aria-busy={scenarios.isFetching}>
-          <div className="overflow-x-auto">
-            <table className={tableStyles.table}>
-              <caption className="sr-only">Scenarios in {project.name}; column headers with buttons sort the table</caption>
-              <thead>
-                <tr>
-                  <SortableHeader label="Title" sortKey="title" firstOrder="asc" current={query} onSort={sort} />
-                  <SortableHeader label="Background" sortKey="backgroundKind" firstOrder="asc" current={query} onSort={sort} />
-                  <th scope="col" className={`${tableStyles.head} text-right`}>
-                    Version
-                  </th>
-                  <SortableHeader label="Last change" sortKey="updatedAt" firstOrder="desc" current={query} onSort={sort} />
-                  <th scope="col" className={tableStyles.head}>
-                    Changed by
-                  </th>
-                  {canWrite && (
-                    <th scope="col" className={`${tableStyles.head} text-right`}>
-                      <span className="sr-only">Actions</span>
-                    </th>
-                  )}
-                </tr>
-              </thead>
-              <tbody>
-                {scenarios.data.items.map((scenario) => (
-                  <tr key={scenario.id} className={tableStyles.row}>
-                    <td className={`${tableStyles.cell} min-w-64`}>
-                      {renaming === scenario.id ? (
-                        <RenameScenarioForm scenario={scenario} onDone={() => setRenaming(null)} />
-                      ) : (
-                        <Link href={`/projects/${project.id}/scenarios/${scenario.id}`} className="font-semibold text-ink underline-offset-4 hover:underline">
-                          {scenario.title}
-                        </Link>
-                      )}
-                    </td>
-                    <td className={`${tableStyles.cell} text-ink-soft`}>{backgroundName(scenario.backgroundKind)}</td>
-                    <td className={`${tableStyles.cell} tabular text-right`}>v{scenario.version}</td>
-                    <td className={tableStyles.cell}>
-                      <TimeStamp iso={scenario.updatedAt} />
-                    </td>
-                    <td className={`${tableStyles.cell} text-ink-soft`}>{scenario.updatedBy?.name ?? "—"}</td>
-                    {canWrite && (
-                      <td className={`${tableStyles.cell} whitespace-nowrap text-right`}>
-                        <button type="button" onClick={() => setRenaming(scenario.id)} disabled={renaming === scenario.id} className={buttonStyles.row}>
-                          Rename
-                        </button>
-                        <button
-                          type="button"
-                          disabled={duplicate.isPending && duplicate.variables === scenario.id}
-                          onClick={() => {
-                            setProblem(null);
-                            duplicate.mutate(scenario.id, { onError: (error) => setProblem(`could not duplicate “${scenario.title}”: ${messageOf(error)}`) });
-                          }}
-                          className={buttonStyles.row}
-                        >
-                          {duplicate.isPending && duplicate.variables === scenario.id ? "Duplicating…" : "Duplicate"}
-                        </button>
-                        <button type="button" onClick={() => setDeleting(scenario)} className={buttonStyles.row}>
-                          Delete
-                        </button>
-                      </td>
-                    )}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-          <Pager page={query.page} pageSize={query.pageSize} total={scenarios.data.total} onPage={(page) => setQuery({ page })} />
-        </div>
-      )}
+            <EmptyState title="No scenarios yet">
+              {canWrite ? "Create the first one with the form above." : "Nobody has added a scenario to this project yet."}
+            </EmptyState>
+          )
+        }
+      </QueryView>
 
       <ConfirmDialog
         open={deleting !== null}

@@ -1,47 +1,38 @@
 "use client";
 
 import Link from "next/link";
-import { useProjects } from "@/components/api/projects";
+import { useProjects, type ProjectDto } from "@/components/api/projects";
 import { roleNames } from "@/components/format/words";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
+import { EmptyState } from "@/components/ui/EmptyState";
+import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
+import { TableHead } from "@/components/ui/TableHead";
 import { tableStyles } from "@/components/ui/styles";
+
+const projectColumns = [{ label: "Project" }, { label: "Your role" }, { label: "Scenarios", className: "text-right" }, { label: "Last change" }];
 
 export function ProjectList() {
   const projects = useProjects();
+  return (
+    <QueryView query={projects} what="your projects">
+      {(list) =>
+        list.length === 0 ? (
+          <EmptyState title="No projects yet">A project holds scenarios and the people you share them with. Create one to begin.</EmptyState>
+        ) : (
+          <ProjectTable projects={list} />
+        )
+      }
+    </QueryView>
+  );
+}
 
-  if (projects.isPending) return <Skeleton lines={4} label="Loading your projects" />;
-  if (projects.isError) return <LoadError error={projects.error} onRetry={() => projects.refetch()} what="your projects" />;
-  if (projects.data.length === 0) {
-    return (
-      <div className="border-y border-rule py-10 text-center text-ink-soft">
-        <p className="font-serif text-lg text-ink">No projects yet</p>
-        <p className="mt-2 text-sm">A project holds scenarios and the people you share them with. Create one to begin.</p>
-      </div>
-    );
-  }
-
+function ProjectTable({ projects }: { projects: ProjectDto[] }) {
   return (
     <table className={tableStyles.table}>
       <caption className="sr-only">Your projects</caption>
-      <thead>
-        <tr>
-          <th scope="col" className={tableStyles.head}>
-            Project
-          </th>
-          <th scope="col" className={tableStyles.head}>
-            Your role
-          </th>
-          <th scope="col" className={`${tableStyles.head} text-right`}>
-            Scenarios
-          </th>
-          <th scope="col" className={tableStyles.head}>
-            Last change
-          </th>
-        </tr>
-      </thead>
+      <TableHead columns={projectColumns} />
       <tbody>
-        {projects.data.map((project) => (
+        {projects.map((project) => (
           <tr key={project.id} className={tableStyles.row}>
             <td className={tableStyles.cell}>
               <Link href={`/projects/${project.id}`} className="font-semibold text-ink underline-offset-4 hover:underline">

@@ -35,7 +35,7 @@ function Row({ label, value, exactValue, mono = true }: { label: ReactNode; valu
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <section aria-label={title}>
+    <section>
       <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">{title}</h3>
       <dl className="border-t border-ink/70 text-sm">{children}</dl>
     </section>

@@ -1,13 +1,12 @@
 "use client";
 
 import Link from "next/link";
-import { ApiError } from "@/components/api/client";
-import { useProject } from "@/components/api/projects";
-import { useScenario } from "@/components/api/scenarios";
+import { useProject, type ProjectDto } from "@/components/api/projects";
+import { useScenario, type ScenarioDto } from "@/components/api/scenarios";
 import { backgroundName, roleNames } from "@/components/format/words";
 import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
 import { Notice } from "@/components/ui/Notice";
-import { LoadError, Skeleton } from "@/components/ui/QueryStates";
+import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { DocumentDetails } from "./DocumentDetails";
 import { RevisionList } from "./RevisionList";
@@ -19,19 +18,21 @@ export function ScenarioReadView({ projectId, scenarioId }: { projectId: string;
 
   // The project frame above speaks for a project that is loading, missing or failed.
   if (!project) return null;
-  if (scenario.isPending) return <Skeleton lines={8} label="Loading the scenario" />;
-  if (scenario.isError) {
-    if (scenario.error instanceof ApiError && scenario.error.isNotFound) return <NotFoundNotice what="scenario" />;
-    return <LoadError error={scenario.error} onRetry={() => scenario.refetch()} what="the scenario" />;
-  }
-  const s = scenario.data;
+  return (
+    <QueryView query={scenario} what="the scenario" lines={8} notFound={<NotFoundNotice what="scenario" />}>
+      {(loaded) => <ScenarioDetails project={project} scenario={loaded} />}
+    </QueryView>
+  );
+}
+
+function ScenarioDetails({ project, scenario: s }: { project: ProjectDto; scenario: ScenarioDto }) {
   const readOnly = !project.can.includes("scenario:write");
 
   return (
     <article aria-labelledby="scenario-title" className="space-y-10">
       <title>{`${s.title} · Branchline`}</title>
       <header>
-        <Link href={`/projects/${projectId}`} className="text-sm text-ink-faint hover:text-ink">
+        <Link href={`/projects/${project.id}`} className="text-sm text-ink-faint hover:text-ink">
           ← All scenarios
         </Link>
         <h1 id="scenario-title" className="mt-2 font-serif text-3xl font-semibold tracking-tight break-words">
@@ -71,7 +72,7 @@ export function ScenarioReadView({ projectId, scenarioId }: { projectId: string;
         </Notice>
       )}
 
-      <RevisionList projectId={projectId} scenarioId={scenarioId} currentVersion={s.version} />
+      <RevisionList projectId={project.id} scenarioId={s.id} currentVersion={s.version} />
     </article>
   );
 }

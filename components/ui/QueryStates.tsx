@@ -1,7 +1,9 @@
 "use client";
 
+import type { UseQueryResult } from "@tanstack/react-query";
 import Link from "next/link";
 import { usePathname } from "next/navigation";
+import type { ReactNode } from "react";
 import { ApiError, messageOf } from "@/components/api/client";
 import { signInPath } from "@/components/auth/callbackUrl";
 import { Notice } from "./Notice";
@@ -45,4 +47,29 @@ export function LoadError({ error, onRetry, what = "this" }: { error: unknown; o
       Could not load {what}: {messageOf(error)}
     </Notice>
   );
+}
+
+/**
+ * One query's three states: a skeleton while it loads, the error with a retry (or `notFound` for a 404, when
+ * given), and the data.
+ */
+export function QueryView<T>({
+  query,
+  what,
+  lines = 4,
+  notFound,
+  children,
+}: {
+  query: UseQueryResult<T>;
+  what: string;
+  lines?: number;
+  notFound?: ReactNode;
+  children: (data: T) => ReactNode;
+}) {
+  if (query.isPending) return <Skeleton lines={lines} label={`Loading ${what}`} />;
+  if (query.isError) {
+    if (notFound && query.error instanceof ApiError && query.error.isNotFound) return <>{notFound}</>;
+    return <LoadError error={query.error} onRetry={() => query.refetch()} what={what} />;
+  }
+  return <>{children(query.data)}</>;
 }

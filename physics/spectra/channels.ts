@@ -78,6 +78,12 @@ function thermalPolynomial(orders: readonly number[], alpha: number): { coeffici
   return { coefficients, atZero: coefficients[0] };
 }
 
+/**
+ * Below this ᾱ the thermal corrections (relative size ~ᾱ²) are far below double precision, and ᾱ² would
+ * underflow: the weight and kernel are taken as the inertial ones.
+ */
+const INERTIAL_BELOW = 1e-100;
+
 /** x coth x − 1, accurate for small x. */
 function xCothXMinusOne(x: number): number {
   if (x < 0.1) {
@@ -94,7 +100,7 @@ function xCothXMinusOne(x: number): number {
  */
 export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
   const p = definition.power;
-  if (alphaBar === 0) return p === 1 ? (omega) => omega : (omega) => omega ** p;
+  if (alphaBar < INERTIAL_BELOW) return p === 1 ? (omega) => omega : (omega) => omega ** p;
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
   // P − P₀ as a polynomial in Ω² without constant term (degree 1 for EM, 2 for gravity), by Horner's rule.
   const c1 = coefficients[1];
@@ -120,7 +126,7 @@ export function rampWeight(definition: ChannelDefinition, alphaBar: number): (om
 /** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */
 export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
   const p = definition.power;
-  if (alphaBar === 0) return () => 0;
+  if (alphaBar < INERTIAL_BELOW) return () => 0;
   const full = rampWeight(definition, alphaBar);
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
   const top = coefficients.length - 1;
@@ -146,18 +152,18 @@ export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar:
  */
 export function rampKernel(definition: ChannelDefinition, alphaBar: number): (x: number) => number {
   const gravitational = definition.channel === "gravitational";
-  if (alphaBar === 0) return gravitational ? (x) => 6 / x ** 4 : (x) => -1 / (x * x);
+  if (alphaBar < INERTIAL_BELOW) return gravitational ? (x) => 6 / x ** 4 : (x) => -1 / (x * x);
+  // ᾱ csch(ᾱx/2) → 2/x as ᾱ → 0: kept together so that small ᾱ neither overflows nor underflows.
+  const scaledCsch2 = (x: number) => (alphaBar / Math.sinh((alphaBar * x) / 2)) ** 2;
+  const logTail = (x: number) => Math.log(-Math.expm1(-alphaBar * x));
   if (gravitational) {
     return (x) => {
-      const y = (alphaBar * x) / 2;
-      const csch2 = 1 / Math.sinh(y) ** 2;
-      return 7.5 * alphaBar ** 4 * ((csch2 * csch2) / 20 - (2 / 15) * csch2 - (8 / 15) * Math.log(-Math.expm1(-2 * y)));
+      const q2 = scaledCsch2(x);
+      const a2 = alphaBar * alphaBar;
+      return 7.5 * ((q2 * q2) / 20 - (2 / 15) * a2 * q2 - (8 / 15) * a2 * a2 * logTail(x));
     };
   }
-  return (x) => {
-    const y = (alphaBar * x) / 2;
-    return -alphaBar * alphaBar * (Math.log(-Math.expm1(-2 * y)) + 0.25 / Math.sinh(y) ** 2);
-  };
+  return (x) => -(alphaBar * alphaBar * logTail(x) + 0.25 * scaledCsch2(x));
 }
 
 /** log10 of the hold-rate coefficient Γ/A² = K α^{2n+1} Π k² (s⁻¹ per unit A²); −Infinity when α = 0. */

@@ -15,15 +15,18 @@ if [ ! -x /usr/bin/chromium ]; then
   fi
 fi
 
+# Stop afterwards only what this run started.
 pg_was_running=$(bash scripts/pg.sh status 2>/dev/null || true)
+smtp_was_running=no
+[ -f .data/run/smtp.pid ] && kill -0 "$(cat .data/run/smtp.pid)" 2>/dev/null && smtp_was_running=yes
 bash scripts/services.sh start
 cleanup() {
   [ -n "${E2E_DB:-}" ] && bash scripts/pg.sh dropdb "$E2E_DB" >/dev/null 2>&1 || true
-  if [ "$pg_was_running" = "running" ]; then
-    [ -f .data/run/smtp.pid ] && kill "$(cat .data/run/smtp.pid)" 2>/dev/null; rm -f .data/run/smtp.pid
-  else
-    bash scripts/services.sh stop
+  if [ "$smtp_was_running" = no ] && [ -f .data/run/smtp.pid ]; then
+    kill "$(cat .data/run/smtp.pid)" 2>/dev/null || true
+    rm -f .data/run/smtp.pid
   fi
+  [ "$pg_was_running" = running ] || bash scripts/pg.sh stop
 }
 trap cleanup EXIT
 

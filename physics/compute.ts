@@ -11,7 +11,8 @@ import { electromagneticSource, gravitationalSource, type ChannelSource } from "
 import { farFieldEstimate } from "./estimators/far-field";
 import { log10Sum, quantityFromLog10, quantityFromValue } from "./estimators/quantity";
 import { schwarzschildEstimate } from "./estimators/schwarzschild";
-import { publishedEstimateRateModel, type SchwarzschildHorizonRateModel } from "./estimators/schwarzschild-horizon-rate";
+import { exactHorizonRateModel } from "./estimators/schwarzschild-exact-rate";
+import type { SchwarzschildHorizonRateModel } from "./estimators/schwarzschild-horizon-rate";
 import { thermalHorizonEstimate } from "./estimators/thermal-horizon";
 import { validityFlags } from "./flags";
 import { peakBranchSpeed, separationHistory } from "./protocols";
@@ -21,7 +22,10 @@ import { ScenarioInputError } from "./scenario/input-error";
 import { parseScenarioDocument, type ScenarioDocument } from "./scenario/schema";
 
 export interface ComputeOptions {
-  /** The Schwarzschild hold-rate model; default: the published estimates (physics/estimators/schwarzschild-horizon-rate.ts). */
+  /**
+   * The Schwarzschild hold-rate model; default: exactHorizonRateModel (physics/estimators/schwarzschild-exact-rate.ts),
+   * which reports the published estimate beside it. publishedEstimateRateModel reports the estimate alone.
+   */
   schwarzschildRateModel?: SchwarzschildHorizonRateModel;
 }
 
@@ -55,7 +59,7 @@ function estimateChannel(
           labProperAccelerationMetresPerSecondSquared: background.labProperAccelerationMetresPerSecondSquared,
           axis: document.separation.axis,
         },
-        options.schwarzschildRateModel ?? publishedEstimateRateModel,
+        options.schwarzschildRateModel ?? exactHorizonRateModel,
         resolution,
       );
   }
@@ -86,8 +90,8 @@ function combine(electromagnetic: ChannelResult, gravitational: ChannelResult): 
 export function computeScenario(document: ScenarioDocument, options: ComputeOptions = {}): ScenarioResult {
   const history = separationHistory(document);
   const background = makeBackground(document.background, document.lab);
-  const electromagnetic = channelResult(estimateChannel(document, history, background, electromagneticSource(document, history), options));
-  const gravitational = channelResult(estimateChannel(document, history, background, gravitationalSource(document, history), options));
+  const estimates = [electromagneticSource(document, history), gravitationalSource(document, history)].map((source) => estimateChannel(document, history, background, source, options));
+  const [electromagnetic, gravitational] = estimates.map(channelResult);
   const speed = peakBranchSpeed(history, document.separation.split);
   const combined = combine(electromagnetic, gravitational);
   const result: Omit<ScenarioResult, "flags"> = {
@@ -114,13 +118,25 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
     gravitational,
     combined,
   };
-  const reported = [electromagnetic, gravitational].flatMap((ch) =>
-    (["totalQuanta", "rampDrivenQuanta", "holdDrivenQuanta", "holdRate", "decoherenceTime"] as const).map((field) => ({ name: `${ch.channel}.${field}`, quantity: ch[field] })),
-  );
+  const reported = [electromagnetic, gravitational].flatMap((ch) => [
+    ...(["totalQuanta", "rampDrivenQuanta", "holdDrivenQuanta", "holdRate", "decoherenceTime"] as const).map((field) => ({ name: `${ch.channel}.${field}`, quantity: ch[field] })),
+    ...(ch.comparison === null
+      ? []
+      : (["estimateHoldRate", "ratioExactToEstimate"] as const).map((field) => ({ name: `${ch.channel}.comparison.${field}`, quantity: ch.comparison![field] }))),
+  ]);
   reported.push({ name: "combined.totalQuanta", quantity: combined.totalQuanta }, { name: "combined.decoherenceTime", quantity: combined.decoherenceTime });
   return {
     ...result,
-    flags: validityFlags({ document, history, background, peakBranchSpeedMetresPerSecond: speed, electromagnetic, gravitational, reported }),
+    flags: validityFlags({
+      document,
+      history,
+      background,
+      peakBranchSpeedMetresPerSecond: speed,
+      electromagnetic,
+      gravitational,
+      reported,
+      modelFlags: estimates.flatMap((e) => e.modelFlags),
+    }),
   };
 }
 

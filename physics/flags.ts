@@ -27,6 +27,8 @@ export interface FlagInputs {
   gravitational: ChannelResult;
   /** Every reported quantity, for the double-range check. */
   reported: { name: string; quantity: ChannelResult["totalQuanta"] | null }[];
+  /** The checks the Schwarzschild rate model raised (physics/estimators/schwarzschild-exact-rate.ts). */
+  modelFlags: ValidityFlag[];
 }
 
 function slowMotion(speed: number): ValidityFlag {
@@ -107,15 +109,37 @@ function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResul
   };
 }
 
-function schwarzschildRegime(document: ScenarioDocument, channels: ChannelResult[]): ValidityFlag {
+const ESTIMATE_REGIME_TEXT = {
+  far: "far from the hole (b ≥ 10 r_s): the published order-of-magnitude estimate, coefficient not established",
+  "near-horizon": "near the horizon (b ≤ 1.01 r_s): the Rindler limit with the lab's local acceleration, an estimate",
+  interpolated: "between near and far: the two estimates interpolated in ln b, marked as an interpolation, not a computation",
+} as const;
+
+function schwarzschildRegime(document: ScenarioDocument, electromagnetic: ChannelResult): ValidityFlag {
   if (document.background.kind !== "schwarzschild") return { code: "schwarzschild-regime", status: "not-applicable", message: "not a Schwarzschild background" };
-  const regime = channels[0].regime;
-  const text = {
-    far: "far from the hole (b ≥ 10 r_s): the published order-of-magnitude estimate, coefficient not established",
-    "near-horizon": "near the horizon (b ≤ 1.01 r_s): the Rindler limit with the lab's local acceleration, an estimate",
-    interpolated: "between near and far: the two estimates interpolated in ln b, marked as an interpolation, not a computation",
-  }[regime as "far" | "near-horizon" | "interpolated"];
+  const regime = electromagnetic.regime;
+  if (regime === "exact") {
+    const beside = electromagnetic.comparison
+      ? `the published estimate shown beside it for comparison is in its ${electromagnetic.comparison.estimateRegime} regime (${ESTIMATE_REGIME_TEXT[electromagnetic.comparison.estimateRegime]})`
+      : "no comparison is shown for an exactly zero channel";
+    return {
+      code: "schwarzschild-regime",
+      status: "note",
+      message:
+        "electromagnetic horizon rate: the exact value (horizon method with the Copson–Linet field, /methods/schwarzschild-exact) " +
+        `is used at every radius; ${beside}. Gravity: see schwarzschild-gravity-model`,
+    };
+  }
+  const text = ESTIMATE_REGIME_TEXT[regime as keyof typeof ESTIMATE_REGIME_TEXT];
   return { code: "schwarzschild-regime", status: regime === "interpolated" ? "caution" : "note", message: `horizon rate estimated ${text}` };
+}
+
+/** Checks that every result carries, filled in as not applicable where the rate model did not raise them. */
+const ALWAYS_PRESENT_MODEL_CHECKS = ["schwarzschild-multipole-check", "schwarzschild-gravity-model"] as const;
+
+function modelChecks(raised: ValidityFlag[]): ValidityFlag[] {
+  const missing = ALWAYS_PRESENT_MODEL_CHECKS.filter((code) => !raised.some((f) => f.code === code));
+  return [...raised, ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no exact Schwarzschild rate computed for this channel" }))];
 }
 
 function modelNotes(document: ScenarioDocument, background: Background, gravitational: ChannelResult): ValidityFlag[] {
@@ -171,7 +195,8 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
     samplingConverged(channels),
     ...kinkFlags(inputs.history, channels),
-    schwarzschildRegime(inputs.document, channels),
+    schwarzschildRegime(inputs.document, inputs.electromagnetic),
+    ...modelChecks(inputs.modelFlags),
     ...modelNotes(inputs.document, inputs.background, inputs.gravitational),
     doubleRange(inputs.reported),
     ...inputs.background.flags.map((f) => ({ code: `background:${f.code}`, status: f.severity, message: f.message }) satisfies ValidityFlag),

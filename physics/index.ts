@@ -6,6 +6,7 @@ export { computeScenario, computeScenarioFromJson, type ComputeOptions } from ".
 export type * from "./result";
 export { RESULT_FORMAT_VERSION } from "./result";
 export { sources, type SourceEntry, type SourceKey } from "./estimators/sources";
+export { exactHorizonRateModel } from "./estimators/schwarzschild-exact-rate";
 export {
   publishedEstimateRateModel,
   type SchwarzschildHorizonRateModel,

@@ -24,9 +24,26 @@ export type Channel = "electromagnetic" | "gravitational";
 export type RateRegime =
   | "none" // flat spacetime: a held superposition does not decohere
   | "thermal-spectrum" // Rindler, de Sitter: the spectral formula along the lab's worldline
+  | "exact" // Schwarzschild, electromagnetism: the exact horizon-method rate, at every radius
+  | "far-zone" // Schwarzschild, gravity: the far-zone rate, leading order in GM/(c²b)
   | "far" // Schwarzschild, published large-distance estimate
   | "near-horizon" // Schwarzschild, Rindler limit with the lab's local acceleration
   | "interpolated"; // Schwarzschild, between the two, interpolated in the logarithm
+
+/** The regimes of the published Schwarzschild estimate. */
+export type EstimateRegime = "far" | "near-horizon" | "interpolated";
+
+/**
+ * The published order-of-magnitude estimate beside a computed Schwarzschild hold rate (the exact electromagnetic
+ * rate, or the far-zone gravitational rate), for comparison.
+ */
+export interface HorizonRateComparison {
+  /** The published estimate of the hold rate at the same lab and source, per second of lab proper time. */
+  estimateHoldRate: Quantity;
+  /** holdRate / estimateHoldRate. */
+  ratioExactToEstimate: Quantity;
+  estimateRegime: EstimateRegime;
+}
 
 export interface Convergence {
   /** |N(2n) − N(n)| / N(2n) at the last doubling of the samples per moving window; 0 when N is exactly zero. */
@@ -59,6 +76,8 @@ export interface ChannelResult {
   /** Hold-driven quanta per second of lab proper time at full separation. */
   holdRate: Quantity;
   regime: RateRegime;
+  /** Schwarzschild, when holdRate is computed (not itself the estimate) and the channel is not exactly zero; else null. */
+  comparison: HorizonRateComparison | null;
   decoherence: Quantity;
   visibility: Quantity;
   /** Hold time at which the hold-driven part reaches one quantum; null where there is no hold-driven part. */

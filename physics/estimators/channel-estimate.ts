@@ -3,7 +3,7 @@
  * ChannelResult with decoherence, visibility and decoherence time.
  */
 import { decoherenceFromQuanta, decoherenceTimeFromRate, visibilityFromQuanta } from "../decoherence";
-import type { Channel, ChannelResult, Convergence, RateRegime } from "../result";
+import type { Channel, ChannelResult, Convergence, EstimateRegime, HorizonRateComparison, RateRegime, ValidityFlag } from "../result";
 import { log10Product, log10Sum, quantityFromLog10 } from "./quantity";
 import type { SourceKey } from "./sources";
 
@@ -23,6 +23,20 @@ export interface ChannelEstimate {
   holdSourceKey: SourceKey;
   totalSourceKey: SourceKey;
   convergence: Convergence;
+  /** The published estimate beside a computed hold rate (Schwarzschild), else null. */
+  comparison: { log10HoldRate: number; regime: EstimateRegime; sourceKey: SourceKey } | null;
+  /** Validity checks raised by the model that gave the hold rate, in the result's flag format. */
+  modelFlags: ValidityFlag[];
+}
+
+function comparisonResult(estimate: ChannelEstimate): HorizonRateComparison | null {
+  const comparison = estimate.comparison;
+  if (comparison === null) return null;
+  return {
+    estimateHoldRate: quantityFromLog10(comparison.log10HoldRate, "s^-1", comparison.sourceKey),
+    ratioExactToEstimate: quantityFromLog10(estimate.log10HoldRate - comparison.log10HoldRate, "1", "schwarzschild-exact-vs-estimate"),
+    estimateRegime: comparison.regime,
+  };
 }
 
 export function channelResult(estimate: ChannelEstimate): ChannelResult {
@@ -40,6 +54,7 @@ export function channelResult(estimate: ChannelEstimate): ChannelResult {
     horizonQuanta: estimate.counts === "far-field-and-horizon" ? hold : null,
     holdRate: quantityFromLog10(estimate.log10HoldRate, "s^-1", estimate.holdSourceKey),
     regime: estimate.regime,
+    comparison: comparisonResult(estimate),
     decoherence: decoherenceFromQuanta(total),
     visibility: visibilityFromQuanta(total),
     decoherenceTime: decoherenceTimeFromRate(estimate.log10HoldRate),
@@ -58,6 +73,8 @@ export function zeroEstimate(channel: Channel, reason: string, keys: Pick<Channe
     log10HoldRate: -Infinity,
     ...keys,
     convergence: { relativeChange: 0, converged: true, samplesPerWindow: 0, transformLength: 0, mode: "none", timeStepSeconds: 0 },
+    comparison: null,
+    modelFlags: [],
   };
 }
 

@@ -14,6 +14,10 @@ export interface ChannelSource {
   definition: ChannelDefinition;
   /** −Infinity when exactly zero. */
   log10Source: number;
+  /** |q| in C (electromagnetism) or m_eff in kg (gravity): A = |q|·d₀ or m_eff·d₀²; 0 when exactly zero. */
+  chargeOrEffectiveMass: number;
+  /** Peak full separation d₀, metres. */
+  separationMetres: number;
   zeroReason: string | null;
 }
 
@@ -21,7 +25,13 @@ export function electromagneticSource(document: ScenarioDocument, history: Separ
   const q = Math.abs(document.source.chargeCoulombs);
   const d = history.peakSeparationMetres;
   const zeroReason = q === 0 ? "the body carries no charge" : d === 0 ? "the branches are never separated" : null;
-  return { definition: electromagneticChannel, log10Source: zeroReason ? -Infinity : Math.log10(q) + Math.log10(d), zeroReason };
+  return {
+    definition: electromagneticChannel,
+    log10Source: zeroReason ? -Infinity : Math.log10(q) + Math.log10(d),
+    chargeOrEffectiveMass: zeroReason ? 0 : q,
+    separationMetres: d,
+    zeroReason,
+  };
 }
 
 export function gravitationalSource(document: ScenarioDocument, history: SeparationHistory): ChannelSource {
@@ -34,7 +44,13 @@ export function gravitationalSource(document: ScenarioDocument, history: Separat
   else if (document.separation.split === "symmetric") {
     zeroReason = "symmetric split: both branches have the same quadrupole, so there is no leading-order difference";
   }
-  if (zeroReason) return { definition: gravitationalChannel, log10Source: -Infinity, zeroReason };
+  if (zeroReason) return { definition: gravitationalChannel, log10Source: -Infinity, chargeOrEffectiveMass: 0, separationMetres: d, zeroReason };
   const effectiveMass = labMass && labMass > 0 ? m * (1 + m / labMass) : m;
-  return { definition: gravitationalChannel, log10Source: Math.log10(effectiveMass) + 2 * Math.log10(d), zeroReason: null };
+  return {
+    definition: gravitationalChannel,
+    log10Source: Math.log10(effectiveMass) + 2 * Math.log10(d),
+    chargeOrEffectiveMass: effectiveMass,
+    separationMetres: d,
+    zeroReason: null,
+  };
 }

@@ -29,5 +29,7 @@ export function farFieldEstimate(history: SeparationHistory, source: ChannelSour
     log10HoldRate: -Infinity,
     ...keys,
     convergence: ramp.convergence,
+    comparison: null,
+    modelFlags: [],
   };
 }

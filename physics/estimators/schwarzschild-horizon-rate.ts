@@ -1,7 +1,8 @@
 /**
  * The hold rate of a static lab outside a Schwarzschild black hole (Unruh state): quanta into the horizon per
  * second of lab proper time, at full separation. This file is the seam for a rate model: computeScenario takes
- * any SchwarzschildHorizonRateModel, and publishedEstimateRateModel is the default until an exact module exists.
+ * any SchwarzschildHorizonRateModel. The default is exactHorizonRateModel (schwarzschild-exact-rate.ts);
+ * publishedEstimateRateModel, below, is the alternative, and the exact model reports it beside its own value.
  *
  * publishedEstimateRateModel, with r_s = 2GM/c², b the lab's areal radius, lapse √(1 − r_s/b):
  * - far (b ≥ 10 r_s): the order-of-magnitude estimate of Danielson, Satishchandran & Wald, IJMPD 31, 2241003
@@ -14,7 +15,7 @@
  * Each is an estimate, labelled with its regime; the radial/tangential axis does not enter these estimates.
  */
 import { G, c, epsilon0, hbar } from "../constants";
-import type { Channel, RateRegime } from "../result";
+import type { Channel, EstimateRegime, RateRegime, ValidityFlag } from "../result";
 import { electromagneticChannel, gravitationalChannel, log10HoldRateCoefficient } from "../spectra/channels";
 import type { SourceKey } from "./sources";
 
@@ -25,15 +26,30 @@ export interface SchwarzschildHorizonRateInput {
   labRedshiftFactor: number;
   labProperAccelerationMetresPerSecondSquared: number;
   axis: "radial" | "tangential";
-  /** log10 of the source amplitude A (q·d in C m, or m_eff·d² in kg m²). */
-  log10Source: number;
+  /** The body's coupling: |q| in C for electromagnetism, m_eff in kg for gravity (channel-source.ts). */
+  chargeOrEffectiveMass: number;
+  /** Full separation d of the branches at the hold, a proper length measured by the static lab, metres; > 0. */
+  separationMetres: number;
 }
 
-export interface SchwarzschildHorizonRate {
+/** A hold rate and where it comes from. */
+export interface RateWithSource {
   /** log10 of quanta per second of lab proper time at full separation. */
   log10RatePerSecond: number;
   regime: RateRegime;
   sourceKey: SourceKey;
+}
+
+/** The published estimate, in one of its regimes. */
+export interface EstimatedRate extends RateWithSource {
+  regime: EstimateRegime;
+}
+
+export interface SchwarzschildHorizonRate extends RateWithSource {
+  /** The published order-of-magnitude estimate for the same lab and source, when the rate is not itself that estimate. */
+  estimate: EstimatedRate | null;
+  /** The model's own validity checks, in the result's flag format. */
+  flags: ValidityFlag[];
 }
 
 export interface SchwarzschildHorizonRateModel {
@@ -46,31 +62,41 @@ export const FAR_RADIUS_RATIO = 10;
 
 const log10 = Math.log10;
 
-function farRate(input: SchwarzschildHorizonRateInput): number {
+/** log10 of the source amplitude A: q·d (C m) or m_eff·d² (kg m²). */
+export function log10SourceAmplitude(input: SchwarzschildHorizonRateInput): number {
+  const power = input.channel === "electromagnetic" ? 1 : 2;
+  return log10(input.chargeOrEffectiveMass) + power * log10(input.separationMetres);
+}
+
+function farRate(input: SchwarzschildHorizonRateInput, log10Source: number): number {
   const killing =
     input.channel === "electromagnetic"
-      ? 3 * log10(G) + 3 * log10(input.massKg) + 2 * input.log10Source - log10(epsilon0) - log10(hbar) - 6 * log10(c) - 6 * log10(input.labArealRadiusMetres)
-      : 6 * log10(G) + 5 * log10(input.massKg) + 2 * input.log10Source - log10(hbar) - 10 * log10(c) - 10 * log10(input.labArealRadiusMetres);
+      ? 3 * log10(G) + 3 * log10(input.massKg) + 2 * log10Source - log10(epsilon0) - log10(hbar) - 6 * log10(c) - 6 * log10(input.labArealRadiusMetres)
+      : 6 * log10(G) + 5 * log10(input.massKg) + 2 * log10Source - log10(hbar) - 10 * log10(c) - 10 * log10(input.labArealRadiusMetres);
   return killing - log10(input.labRedshiftFactor);
 }
 
-function nearRate(input: SchwarzschildHorizonRateInput): number {
+function nearRate(input: SchwarzschildHorizonRateInput, log10Source: number): number {
   const definition = input.channel === "electromagnetic" ? electromagneticChannel : gravitationalChannel;
-  return 2 * input.log10Source + log10HoldRateCoefficient(definition, input.labProperAccelerationMetresPerSecondSquared / c);
+  return 2 * log10Source + log10HoldRateCoefficient(definition, input.labProperAccelerationMetresPerSecondSquared / c);
+}
+
+/** The published estimates alone, in their regimes. */
+export function publishedEstimateRate(input: SchwarzschildHorizonRateInput): EstimatedRate {
+  const suffix = input.channel === "electromagnetic" ? "em" : "gw";
+  const source = log10SourceAmplitude(input);
+  const ratio = (input.labArealRadiusMetres * c * c) / (2 * G * input.massKg);
+  if (ratio >= FAR_RADIUS_RATIO) return { log10RatePerSecond: farRate(input, source), regime: "far", sourceKey: `schwarzschild-far-${suffix}` };
+  if (ratio <= NEAR_HORIZON_RADIUS_RATIO) return { log10RatePerSecond: nearRate(input, source), regime: "near-horizon", sourceKey: `schwarzschild-near-${suffix}` };
+  const w = Math.log(ratio / NEAR_HORIZON_RADIUS_RATIO) / Math.log(FAR_RADIUS_RATIO / NEAR_HORIZON_RADIUS_RATIO);
+  return {
+    log10RatePerSecond: (1 - w) * nearRate(input, source) + w * farRate(input, source),
+    regime: "interpolated",
+    sourceKey: `schwarzschild-interpolated-${suffix}`,
+  };
 }
 
 export const publishedEstimateRateModel: SchwarzschildHorizonRateModel = {
   name: "published estimates (far: arXiv:2205.06279; near: Rindler limit), interpolated between",
-  rate(input) {
-    const suffix = input.channel === "electromagnetic" ? "em" : "gw";
-    const ratio = (input.labArealRadiusMetres * c * c) / (2 * G * input.massKg);
-    if (ratio >= FAR_RADIUS_RATIO) return { log10RatePerSecond: farRate(input), regime: "far", sourceKey: `schwarzschild-far-${suffix}` };
-    if (ratio <= NEAR_HORIZON_RADIUS_RATIO) return { log10RatePerSecond: nearRate(input), regime: "near-horizon", sourceKey: `schwarzschild-near-${suffix}` };
-    const w = Math.log(ratio / NEAR_HORIZON_RADIUS_RATIO) / Math.log(FAR_RADIUS_RATIO / NEAR_HORIZON_RADIUS_RATIO);
-    return {
-      log10RatePerSecond: (1 - w) * nearRate(input) + w * farRate(input),
-      regime: "interpolated",
-      sourceKey: `schwarzschild-interpolated-${suffix}`,
-    };
-  },
+  rate: (input) => ({ ...publishedEstimateRate(input), estimate: null, flags: [] }),
 };

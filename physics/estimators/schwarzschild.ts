@@ -1,10 +1,17 @@
 /**
  * Schwarzschild estimator (static lab at areal radius b outside a black hole of mass M, Unruh state). Two distinct
  * counts that add: the ramps' quanta to null infinity, from the far-field estimator in the lab's local flat
- * approximation (source "schwarzschild-ramps"), and the hold's quanta into the horizon, Γ ∫f² dτ with Γ from a
- * SchwarzschildHorizonRateModel (physics/estimators/schwarzschild-horizon-rate.ts).
- * Approximations: ramp wavelengths short compared with the distance to the hole; the rate model's regime.
- * Flags raised by the caller: Schwarzschild regime, flat-approximation note, separation vs distance to the horizon.
+ * approximation (source "schwarzschild-ramps"), and the hold's quanta into the horizon,
+ *   ⟨N⟩_hold = Γ ∫ f(τ)² dτ,   f = Δp(τ)/Δp_max (EM) or ΔI(τ)/ΔI_max (gravity), τ the lab's proper time,
+ * with Γ the rate at full separation from a SchwarzschildHorizonRateModel (default: exactHorizonRateModel, the exact
+ * horizon-method rate; schwarzschild-horizon-rate.ts). This is the same definition of the hold-driven part as the
+ * Rindler and de Sitter spectral split (physics/spectra/channels.ts: the zero-frequency noise times ∫f²dt, the time
+ * spent apart during the ramps included), so the parts compare across backgrounds; here it is the count into the
+ * horizon, which adds to the ramps' count at null infinity. Γ scales as d², so Γ(d_max) f² is the rate at d(τ).
+ * Approximations: ramp wavelengths short compared with the distance to the hole; hold long compared with GM/c³
+ * (the rate is the zero-frequency limit); those of the rate model.
+ * Flags raised by the caller: Schwarzschild regime, flat-approximation note, separation vs the distance to the
+ * horizon, and the rate model's own checks (carried in ChannelEstimate.modelFlags).
  */
 import type { SeparationHistory } from "../protocols/types";
 import { timesSquaredSource, zeroEstimate, type ChannelEstimate } from "./channel-estimate";
@@ -14,7 +21,10 @@ import { log10Product } from "./quantity";
 import { rampQuantaPerSquaredSource } from "./ramp-quanta";
 import type { SchwarzschildHorizonRateInput, SchwarzschildHorizonRateModel } from "./schwarzschild-horizon-rate";
 
-export type SchwarzschildLab = Omit<SchwarzschildHorizonRateInput, "channel" | "log10Source">;
+export type SchwarzschildLab = Omit<SchwarzschildHorizonRateInput, "channel" | "chargeOrEffectiveMass" | "separationMetres">;
+
+/** A unit source, only to learn which regime and source a zero channel would report. */
+const PROBE_SOURCE = { chargeOrEffectiveMass: 1, separationMetres: 1 } as const;
 
 export function schwarzschildEstimate(
   history: SeparationHistory,
@@ -25,7 +35,7 @@ export function schwarzschildEstimate(
 ): ChannelEstimate {
   const channel = source.definition.channel;
   if (source.zeroReason) {
-    const probe = model.rate({ ...lab, channel, log10Source: 0 });
+    const probe = model.rate({ ...lab, channel, ...PROBE_SOURCE });
     return zeroEstimate(channel, source.zeroReason, {
       rampSourceKey: "schwarzschild-ramps",
       holdSourceKey: probe.sourceKey,
@@ -34,7 +44,7 @@ export function schwarzschildEstimate(
       regime: probe.regime,
     });
   }
-  const rate = model.rate({ ...lab, channel, log10Source: source.log10Source });
+  const rate = model.rate({ ...lab, channel, chargeOrEffectiveMass: source.chargeOrEffectiveMass, separationMetres: source.separationMetres });
   const ramp = rampQuantaPerSquaredSource(history, source.definition, 0, kinkTimeResolutionSeconds);
   const timeApart = squaredProfileIntegralSeconds(history, source.definition);
   return {
@@ -50,5 +60,7 @@ export function schwarzschildEstimate(
     holdSourceKey: rate.sourceKey,
     totalSourceKey: rate.sourceKey,
     convergence: ramp.convergence,
+    comparison: rate.estimate && { log10HoldRate: rate.estimate.log10RatePerSecond, regime: rate.estimate.regime, sourceKey: rate.estimate.sourceKey },
+    modelFlags: rate.flags,
   };
 }

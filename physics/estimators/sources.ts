@@ -129,6 +129,58 @@ const entries = {
     assumptions: ["both estimates hold at their ends"],
     failureModes: ["a marked interpolation, not a computation"],
   },
+  "schwarzschild-exact-em": {
+    title: "Black hole: exact horizon decoherence rate of a held charge at any lab radius (horizon method; derivation at /methods/schwarzschild-exact)",
+    citation:
+      "static charge outside the hole: E. T. Copson, Proc. R. Soc. A 118, 184 (1928), with the correction of B. Linet, J. Phys. A 9, 1081 (1976); " +
+      "R. S. Hanni & R. Ruffini, PRD 8, 3259 (1973); horizon-memory count: D. L. Danielson, G. Satishchandran, R. M. Wald, " +
+      "IJMPD 31, 2241003 (2022), arXiv:2205.06279, and PRD 108, 025007 (2023), arXiv:2301.00026; Rindler limit: T. H. Boyer, PRD 21, 2137 (1980). " +
+      "Derived in full at /methods/schwarzschild-exact",
+    formula:
+      "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{\\varepsilon_0\\kappa}{\\pi\\hbar c\\sqrt{1-2GM/c^2b}}\\oint_H|\\Delta A_A|^2dS " +
+      "= \\frac{q^2d^2a^3}{6\\pi^2\\varepsilon_0\\hbar c^6}\\Big[\\cos^2\\alpha\\,\\big(1 + 3\\epsilon - \\tfrac32\\epsilon^2\\ln(1 + 2/\\epsilon)\\big) + \\sin^2\\alpha\\Big]," +
+      "\\ a = \\frac{GM}{b^2\\sqrt{1-2GM/c^2b}},\\ \\epsilon = \\frac{c^2b}{GM} - 2,\\ \\kappa = \\frac{c^3}{4GM}",
+    assumptions: [
+      "test charge: no back-reaction on the metric; the lab is static at areal radius b and the field is in the Unruh state",
+      "d is the proper separation measured by the lab, small compared with the proper distance to the horizon (leading order in d)",
+      "hold long compared with GM/c³: the zero-frequency limit; α = 0 for a radial separation, π/2 for a tangential one",
+      "hold-driven count Γ∫f²dτ over the lab's proper time, as in the Rindler/de Sitter split; the ramps' quanta to infinity add to it",
+    ],
+    failureModes: [
+      "separation comparable with the distance to the horizon (flagged by the module: the rate is the leading term in d)",
+      "labs within ~1e-10 GM/c² of the horizon: b − 2GM/c² loses digits in double precision (flagged)",
+      "far away the rate is the far-zone law 8/(3π) (radial), 2/(3π) (tangential) × q²d²(GM/c²)³/(4πε0ħb⁶): 2/(3π²) and 1/(6π²) of the published estimate",
+    ],
+  },
+  "schwarzschild-exact-gw-far-zone": {
+    title: "Black hole, gravity: hold rate from the hole's tidal heating by the quadrupole difference, far zone only (derivation at /methods/schwarzschild-exact)",
+    citation:
+      "tidal heating of a Schwarzschild hole: E. Poisson, PRD 70, 084044 (2004), arXiv:gr-qc/0407050 (coefficient from memory); " +
+      "H. Fang & G. Lovelace, PRD 72, 124016 (2005), arXiv:gr-qc/0505156; E. Poisson & M. Sasaki, PRD 51, 5753 (1995); " +
+      "fluctuation–dissipation at the Hawking temperature and the horizon count of D. L. Danielson, G. Satishchandran, R. M. Wald, arXiv:2205.06279, arXiv:2301.00026",
+    formula:
+      "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{4}{45\\pi}\\,\\frac{G^4M^5\\,\\Delta\\mathcal E_{ab}\\Delta\\mathcal E^{ab}}{\\hbar c^{10}\\sqrt{1-2GM/c^2b}},\\ " +
+      "\\Delta\\mathcal E_{ab} = -\\frac{G}{2}\\Delta I_{cd}\\,\\partial_a\\partial_b\\partial_c\\partial_d\\frac1R\\Big|_{R=b},\\ \\Delta I = m_{\\rm eff}d^2(\\hat n\\hat n)^{\\rm STF}" +
+      "\\ \\Rightarrow\\ \\frac{96}{5\\pi}\\ (\\text{radial}),\\ \\frac{26}{5\\pi}\\ (\\text{tangential})\\times\\frac{G^6M^5(m_{\\rm eff}d^2)^2}{\\hbar c^{10}b^{10}}",
+    assumptions: [
+      "b ≥ 100 GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole",
+      "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff d² (zero for a symmetric split)",
+      "Unruh state; slow variation (hold long compared with GM/c³)",
+    ],
+    failureModes: [
+      "no exact near-zone gravitational rate is computed: inside 100 GM/c² the published estimate is reported instead, with a caution",
+      "the tidal-heating coefficient is recalled, cross-checked against two independent results, not re-derived here",
+    ],
+  },
+  "schwarzschild-exact-vs-estimate": {
+    title: "Black hole: the computed hold rate divided by the published order-of-magnitude estimate",
+    citation: "ratio of schwarzschild-exact-em (or schwarzschild-exact-gw-far-zone) to the schwarzschild-far/near/interpolated estimate at the same lab; see /methods/schwarzschild-exact",
+    formula:
+      "\\Gamma_{\\rm exact}/\\Gamma_{\\rm estimate}\\ \\to\\ \\frac{2}{3\\pi^2}\\ (\\text{radial}),\\ \\frac{1}{6\\pi^2}\\ (\\text{tangential}),\\ " +
+      "\\frac{96}{5\\pi},\\ \\frac{26}{5\\pi}\\ (\\text{gravity})\\ \\text{as}\\ b \\gg GM/c^2",
+    assumptions: ["both rates per second of lab proper time, for the same source and separation"],
+    failureModes: ["near the horizon the estimate is the Rindler limit, which the tangential exact rate equals and the radial one approaches as 1 + 3(b/M − 2)"],
+  },
   "schwarzschild-ramps": {
     title: "Black hole: quanta of the ramps to null infinity, in the flat-space approximation at the lab",
     citation: "far-field-em / far-field-gw evaluated in the lab's proper time",

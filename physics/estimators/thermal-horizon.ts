@@ -45,5 +45,7 @@ export function thermalHorizonEstimate(
     log10HoldRate: log10Rate,
     ...keys,
     convergence: ramp.convergence,
+    comparison: null,
+    modelFlags: [],
   };
 }

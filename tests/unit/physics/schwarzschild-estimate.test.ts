@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { computeScenario } from "@/physics/compute";
+import { publishedEstimateRateModel } from "@/physics/estimators/schwarzschild-horizon-rate";
 import { G, c, epsilon0, hbar, solarMass } from "@/physics/constants";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { scenario, segments, valueOf, withSeparation, withSource } from "./scenarios";
@@ -14,19 +15,30 @@ function hovering(b: number, mass = M, split: ScenarioDocument["separation"]["sp
   );
 }
 
-const rate = (doc: ScenarioDocument, channel: "electromagnetic" | "gravitational" = "electromagnetic") => valueOf(computeScenario(doc)[channel].holdRate);
+/** The published estimate, read from the comparison block beside the computed hold rate. */
+const estimate = (doc: ScenarioDocument, channel: "electromagnetic" | "gravitational" = "electromagnetic") => {
+  const comparison = computeScenario(doc)[channel].comparison;
+  if (comparison === null) throw new Error(`no comparison block in the ${channel} channel`);
+  return comparison;
+};
+const rate = (doc: ScenarioDocument, channel: "electromagnetic" | "gravitational" = "electromagnetic") => valueOf(estimate(doc, channel).estimateHoldRate);
 
-describe("Schwarzschild horizon estimate (arXiv:2205.06279) and its near-horizon Rindler limit", () => {
+describe("Schwarzschild horizon estimate (arXiv:2205.06279) and its near-horizon Rindler limit, reported beside the computed rate", () => {
   it("far away equals the published estimate in SI, G³M³q²d²/(ε0 ħ c⁶ b⁶), per lab proper second", () => {
     const b = 100 * rs;
     const doc = hovering(b);
     const qd = doc.source.chargeCoulombs * doc.separation.distanceMetres;
     const lapse = Math.sqrt(1 - rs / b);
     const expected = (G ** 3 * M ** 3 * qd * qd) / (epsilon0 * hbar * c ** 6 * b ** 6) / lapse;
-    const result = computeScenario(doc);
-    expect(valueOf(result.electromagnetic.holdRate) / expected).toBeCloseTo(1, 9);
-    expect(result.electromagnetic.regime).toBe("far");
-    expect(result.flags.find((f) => f.code === "schwarzschild-regime")?.status).toBe("note");
+    const comparison = estimate(doc);
+    expect(valueOf(comparison.estimateHoldRate) / expected).toBeCloseTo(1, 9);
+    expect(comparison.estimateRegime).toBe("far");
+    expect(comparison.estimateHoldRate.sourceKey).toBe("schwarzschild-far-em");
+    const alone = computeScenario(doc, { schwarzschildRateModel: publishedEstimateRateModel });
+    expect(valueOf(alone.electromagnetic.holdRate) / expected).toBeCloseTo(1, 9);
+    expect(alone.electromagnetic.regime).toBe("far");
+    expect(alone.electromagnetic.comparison).toBeNull();
+    expect(alone.flags.find((f) => f.code === "schwarzschild-regime")?.status).toBe("note");
   });
 
   it("scales as M³ q² d² / D⁶ far away (published estimate; common practice)", () => {
@@ -52,16 +64,19 @@ describe("Schwarzschild horizon estimate (arXiv:2205.06279) and its near-horizon
     const doc = hovering(b);
     const a = (G * M) / (b * b * Math.sqrt(1 - rs / b));
     const qd = doc.source.chargeCoulombs * doc.separation.distanceMetres;
-    const result = computeScenario(doc);
-    expect(valueOf(result.electromagnetic.holdRate) / ((qd * qd * a ** 3) / (6 * Math.PI ** 2 * epsilon0 * hbar * c ** 6))).toBeCloseTo(1, 6);
-    expect(result.electromagnetic.regime).toBe("near-horizon");
+    const comparison = estimate(doc);
+    expect(valueOf(comparison.estimateHoldRate) / ((qd * qd * a ** 3) / (6 * Math.PI ** 2 * epsilon0 * hbar * c ** 6))).toBeCloseTo(1, 6);
+    expect(comparison.estimateRegime).toBe("near-horizon");
   });
 
   it("between near and far interpolates in the logarithm and says so", () => {
-    const result = computeScenario(hovering(3 * rs));
-    expect(result.electromagnetic.regime).toBe("interpolated");
-    expect(result.electromagnetic.holdRate.sourceKey).toBe("schwarzschild-interpolated-em");
-    expect(result.flags.find((f) => f.code === "schwarzschild-regime")?.status).toBe("caution");
+    const comparison = estimate(hovering(3 * rs));
+    expect(comparison.estimateRegime).toBe("interpolated");
+    expect(comparison.estimateHoldRate.sourceKey).toBe("schwarzschild-interpolated-em");
+    const alone = computeScenario(hovering(3 * rs), { schwarzschildRateModel: publishedEstimateRateModel });
+    expect(alone.electromagnetic.regime).toBe("interpolated");
+    expect(alone.electromagnetic.holdRate.sourceKey).toBe("schwarzschild-interpolated-em");
+    expect(alone.flags.find((f) => f.code === "schwarzschild-regime")?.status).toBe("caution");
   });
 
   it("adds the ramps' quanta to null infinity and the hold's quanta into the horizon", () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { G, c, solarMass } from "@/physics/constants";
+import { publishedEstimateRateModel } from "@/physics/estimators/schwarzschild-horizon-rate";
 import { ScenarioInputError } from "@/physics/scenario/input-error";
 import { logSpaced, optimiseRecombinationTime, sweepScenario } from "@/physics/sweeps";
 import { scenario, segments, valueOf } from "./scenarios";
@@ -28,12 +29,17 @@ describe("sweeps and the recombination optimum", () => {
     expect(increments[1] / increments[0]).toBeCloseTo((1e5 - 1e4) / (1e4 - 1e3), 6);
   });
 
-  it("sweeps the lab's distance from a black hole as b⁻⁶ far away (arXiv:2205.06279)", () => {
+  it("sweeps the lab's distance from a black hole as b⁻⁶ far away: the published estimate (arXiv:2205.06279) and the exact rate", () => {
     const M = 10 * solarMass.value;
     const rs = (2 * G * M) / (c * c);
-    const doc = scenario({ background: { kind: "schwarzschild", massKg: M }, lab: { placement: "areal-radius", arealRadiusMetres: 1e3 * rs }, protocol: segments({ holdSeconds: 1e20 }) });
-    const [near, far] = sweepScenario(doc, { parameter: "lab-distance", fromValue: 1e3 * rs, toValue: 2e3 * rs, points: 2 }).points;
+    const doc = scenario({ background: { kind: "schwarzschild", massKg: M }, lab: { placement: "areal-radius", arealRadiusMetres: 1e3 * rs }, protocol: segments({ holdSeconds: 1e22 }) });
+    const request = { parameter: "lab-distance", fromValue: 1e3 * rs, toValue: 2e3 * rs, points: 2 } as const;
+    const [near, far] = sweepScenario(doc, request, { compute: { schwarzschildRateModel: publishedEstimateRateModel } }).points;
     expect(valueOf(near.totalQuanta) / valueOf(far.totalQuanta)).toBeCloseTo(64 * Math.sqrt((1 - 1 / 2e3) / (1 - 1 / 1e3)), 4);
+    // The default document separates tangentially, where the exact rate is the Rindler rate q²d²a³/(6π²ε0ħc⁶) at the
+    // lab's acceleration a = GM/(b²√(1 − r_s/b)) (Boyer, PRD 21, 2137 (1980)): b⁻⁶ times the cube of the lapse ratio.
+    const [nearExact, farExact] = sweepScenario(doc, request).points;
+    expect(valueOf(nearExact.totalQuanta) / valueOf(farExact.totalQuanta)).toBeCloseTo(64 * ((1 - 1 / 2e3) / (1 - 1 / 1e3)) ** 1.5, 4);
   });
 
   it("refuses what cannot be swept", () => {

@@ -4,7 +4,8 @@
  * a horizon is refused with the path of the offending field).
  */
 import { BackgroundInputError, makeBackground } from "@/physics/backgrounds";
-import { parseScenarioDocument, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
+import { c, G, solarMass } from "@/physics/constants";
+import { parseScenarioDocument, type LabPlacement, type RampShape, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
 import type { ProtocolPlan } from "./lab-view/drag-plan";
 import type { SegmentName } from "./timeline";
 
@@ -41,4 +42,53 @@ export function documentIssues(document: ScenarioDocument): SchemaIssue[] {
     throw error;
   }
   return [];
+}
+
+/** 10 M☉ with the lab at five horizon radii, outside the photon sphere; an accelerated lab at 10¹⁸ m/s²; today's Hubble rate. */
+const DEFAULT_BLACK_HOLE_SOLAR_MASSES = 10;
+const DEFAULT_LAB_RADIUS_IN_HORIZON_RADII = 5;
+const DEFAULT_RINDLER_ACCELERATION = 1e18;
+const DEFAULT_HUBBLE_RATE = 2.2e-18;
+
+/** A fresh start for each background: its usual parameter and a lab placement it takes. */
+export function withBackgroundKind(document: ScenarioDocument, kind: ScenarioDocument["background"]["kind"]): ScenarioDocument {
+  if (document.background.kind === kind) return document;
+  switch (kind) {
+    case "minkowski":
+      return { ...document, background: { kind }, lab: { placement: "inertial" } };
+    case "rindler":
+      return { ...document, background: { kind, accelerationMetresPerSecondSquared: DEFAULT_RINDLER_ACCELERATION }, lab: { placement: "inertial" } };
+    case "de-sitter":
+      return { ...document, background: { kind, hubbleRatePerSecond: DEFAULT_HUBBLE_RATE }, lab: { placement: "inertial" } };
+    case "schwarzschild": {
+      const massKg = DEFAULT_BLACK_HOLE_SOLAR_MASSES * solarMass.value;
+      const horizon = (2 * G * massKg) / (c * c);
+      return { ...document, background: { kind, massKg }, lab: { placement: "areal-radius", arealRadiusMetres: DEFAULT_LAB_RADIUS_IN_HORIZON_RADII * horizon } };
+    }
+  }
+}
+
+
+export function withRampShape(document: ScenarioDocument, ramp: "separation" | "recombination", shape: RampShape): ScenarioDocument {
+  if (document.protocol.kind !== "segments") return document;
+  return { ...document, protocol: { ...document.protocol, [ramp]: { ...document.protocol[ramp], shape } } };
+}
+
+/**
+ * The same lab described another way (areal radius ↔ proper distance from the horizon), so switching the
+ * description does not move it; a lab at the de Sitter centre asked for a radius is put half-way to the horizon.
+ */
+export function withLabPlacement(document: ScenarioDocument, placement: LabPlacement["placement"]): ScenarioDocument {
+  if (document.lab.placement === placement) return document;
+  const background = makeBackground(document.background, document.lab);
+  switch (placement) {
+    case "inertial":
+      return { ...document, lab: { placement } };
+    case "areal-radius": {
+      const r = background.labRadiusMetres > 0 ? background.labRadiusMetres : 0.5 * (background.horizon?.radiusMetres ?? 1);
+      return { ...document, lab: { placement, arealRadiusMetres: r } };
+    }
+    case "proper-distance-above-horizon":
+      return { ...document, lab: { placement, properDistanceMetres: background.labProperDistanceToHorizonMetres ?? 1 } };
+  }
 }

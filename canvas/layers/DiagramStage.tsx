@@ -4,13 +4,13 @@
  * The Diagram: the conformal diagram of the scenario's background with the lab, the two branches and where their
  * radiation goes. Client-only (Konva); it reads the store and draws, and reports the pointer for the light cone.
  */
-import { useMemo } from "react";
 import { Circle, Group, Layer, Line, Stage, Text } from "react-konva";
 import type { KonvaEventObject } from "konva/lib/Node";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { hatchTicks, layoutLabels, offsetPolyline, wavyLine } from "../kernels/diagram/decorations";
+import { compactQuantity } from "../kernels/diagram/labels";
 import { lightConeAt } from "../kernels/diagram/light-cone";
-import { createSceneBuilder, type DiagramScene, type SceneBoundary } from "../kernels/diagram/scene";
+import type { DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
 import { fitDiagramViewport, flatPx, fromPx, toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
 import { diagramLabelCandidates } from "./diagram-labels";
@@ -19,7 +19,8 @@ import { useFigureFonts } from "./useFigureFonts";
 /** How far, in pixels, the branches are drawn from the lab's worldline at full separation. */
 const BRANCH_OFFSET_PX = 7;
 const CONE_LENGTH_PX = 34;
-const PADDING_PX = 40;
+const PADDING_PX = 48;
+const LABEL_SLACK_PX = 24;
 
 function Boundary({ boundary, viewport, palette }: { boundary: SceneBoundary; viewport: DiagramViewport; palette: FigurePalette }) {
   const pts = boundary.points.map((p) => toPx(viewport, p));
@@ -53,10 +54,12 @@ function Branches({ scene, viewport, palette }: { scene: DiagramScene; viewport:
   const samples = scene.protocol?.branches;
   if (!samples || samples.length < 2) return null;
   const points = samples.map((s) => toPx(viewport, s.point));
+  // A lab on the centre line r = 0 has nothing to its left: draw its branches beside the line, not across it.
+  const shift = scene.chart.background.labRadiusMetres === 0 ? BRANCH_OFFSET_PX + 2 : 0;
   return (
     <Group listening={false}>
-      <Line points={offsetPolyline(points, samples.map((s) => s.b * BRANCH_OFFSET_PX))} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
-      <Line points={offsetPolyline(points, samples.map((s) => s.a * BRANCH_OFFSET_PX))} stroke={palette.branchA} strokeWidth={2} lineJoin="round" />
+      <Line points={offsetPolyline(points, samples.map((s) => shift + s.b * BRANCH_OFFSET_PX))} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
+      <Line points={offsetPolyline(points, samples.map((s) => shift + s.a * BRANCH_OFFSET_PX))} stroke={palette.branchA} strokeWidth={2} lineJoin="round" />
       {scene.protocol!.marks.map((m, i) => {
         const p = toPx(viewport, m);
         return <Line key={i} points={[p.x - 4, p.y, p.x + 4, p.y]} stroke={palette.inkSoft} strokeWidth={1} />;
@@ -65,7 +68,13 @@ function Branches({ scene, viewport, palette }: { scene: DiagramScene; viewport:
   );
 }
 
-function LightConeGizmo({ scene, viewport, palette }: { scene: DiagramScene; viewport: DiagramViewport; palette: FigurePalette }) {
+function pointerReadout(scene: DiagramScene, cone: ReturnType<typeof lightConeAt>): string {
+  if (!cone.coordinates) return "outside the lab's static region";
+  const radius = scene.chart.background.kind === "rindler" ? "ξ" : "r";
+  return `t = ${compactQuantity(cone.coordinates.tSeconds, "time")}   ${radius} = ${compactQuantity(cone.coordinates.rMetres, "length")}`;
+}
+
+function LightConeGizmo({ scene, viewport, palette, font }: { scene: DiagramScene; viewport: DiagramViewport; palette: FigurePalette; font: string }) {
   const pointer = useEditor((s) => s.diagramPointer);
   if (!pointer) return null;
   const cone = lightConeAt(scene.chart.background, pointer, scene.chart.nullScaleMetres);
@@ -78,16 +87,16 @@ function LightConeGizmo({ scene, viewport, palette }: { scene: DiagramScene; vie
       <Line points={[fi.x, fi.y, at.x, at.y, fo.x, fo.y]} stroke={palette.inkSoft} strokeWidth={1} />
       <Line points={[pi.x, pi.y, at.x, at.y, po.x, po.y]} stroke={palette.inkFaint} strokeWidth={1} dash={[2, 3]} />
       <Circle x={at.x} y={at.y} radius={2} fill={palette.ink} />
+      <Text x={viewport.width - 410} y={viewport.height - 18} width={400} align="right" wrap="none" text={pointerReadout(scene, cone)} fontSize={11} fontFamily={font} fill={palette.inkSoft} />
     </Group>
   );
 }
 
 export default function DiagramStage({ width, height }: { width: number; height: number }) {
   const store = useEditorStore();
-  const document = useEditor((s) => s.document);
-  const buildScene = useMemo(() => createSceneBuilder(), []);
-  const outcome = buildScene(document);
-  const palette = FIGURE_PALETTES[document.display.theme];
+  const theme = useEditor((s) => s.document.display.theme);
+  const outcome = useEditor((s) => s.diagramScene(s.document));
+  const palette = FIGURE_PALETTES[theme];
   const fonts = useFigureFonts();
 
   if (!outcome.ok) {
@@ -126,23 +135,30 @@ export default function DiagramStage({ width, height }: { width: number; height:
         ))}
         <Line points={flatPx(viewport, scene.labWorldline)} stroke={palette.inkSoft} strokeWidth={1.25} />
         <Branches scene={scene} viewport={viewport} palette={palette} />
-        {labels.map((l) => (
-          <Text
-            key={l.id}
-            text={l.text}
-            x={l.rotation === 0 ? l.box.left : l.box.left}
-            y={l.rotation === 0 ? l.box.top : l.box.top + l.box.height}
-            width={l.rotation === 0 ? l.box.width : l.box.height}
-            rotation={l.rotation}
-            align={l.align}
-            fontSize={l.fontSize}
-            fontFamily={fonts.serif}
-            fill={tone[l.tone]}
-          />
-        ))}
+        {labels.map((l) => {
+          // The layout's widths are estimates; give Konva room to spare (it crops text wider than its box),
+          // split so that left, centre and right alignment still sit where the layout put them.
+          const along = (l.rotation === 0 ? l.box.width : l.box.height) + LABEL_SLACK_PX;
+          const shift = l.align === "left" ? 0 : l.align === "center" ? LABEL_SLACK_PX / 2 : LABEL_SLACK_PX;
+          return (
+            <Text
+              key={l.id}
+              text={l.text}
+              x={l.rotation === 0 ? l.box.left - shift : l.box.left}
+              y={l.rotation === 0 ? l.box.top : l.box.top + l.box.height + shift}
+              width={along}
+              rotation={l.rotation}
+              align={l.align}
+              fontSize={l.fontSize}
+              fontFamily={fonts.serif}
+              fill={tone[l.tone]}
+              wrap="none"
+            />
+          );
+        })}
       </Layer>
       <Layer listening={false}>
-        <LightConeGizmo scene={scene} viewport={viewport} palette={palette} />
+        <LightConeGizmo scene={scene} viewport={viewport} palette={palette} font={fonts.mono} />
       </Layer>
     </Stage>
   );

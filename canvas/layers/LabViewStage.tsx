@@ -131,7 +131,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
           {offsetTicks(viewport).map((t) => (
             <Group key={t.valueSI}>
               <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
-              <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} />
+              <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} wrap="none" />
             </Group>
           ))}
           <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
@@ -155,12 +155,12 @@ export default function LabViewStage({ width, height }: { width: number; height:
               fill={palette.inkSoft}
             />
           ))}
-          <Text x={plot.left + plot.width - 200} y={height - 13} width={200} align="right" text="lab proper time" fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
-          <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
+          <Text x={plot.left + plot.width - 200} y={height - 13} width={200} align="right" text="lab proper time" fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
+          <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
           <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
           <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
-          <Text x={plot.left + 6} y={plot.top + 4} text="A" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchA} />
-          <Text x={plot.left + 20} y={plot.top + 4} text="B" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchB} />
+          <Text x={plot.left + 6} y={plot.top + 4} text="A" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchA} wrap="none" />
+          <Text x={plot.left + 20} y={plot.top + 4} text="B" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchB} wrap="none" />
           {handles.map((h) => (
             <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
           ))}

@@ -4,6 +4,7 @@ import type { LabelCandidate } from "../kernels/diagram/decorations";
 import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 
 const BOUNDARY_OFFSET_PX = 13;
+const ROOM_FOR_TIME_LABELS_PX = 84;
 
 export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramViewport): LabelCandidate[] {
   const boundaryLabels = scene.boundaries.map((b, i): LabelCandidate => {
@@ -27,15 +28,17 @@ export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramVie
   const gridLabels = scene.grid.map((g, i): LabelCandidate => {
     const at = toPx(viewport, g.labelAt);
     const timeAtCentre = g.family === "time" && (scene.chart.background.kind === "minkowski" || scene.chart.background.kind === "de-sitter");
+    // Labels at the centre line go outside it where the stage leaves room, else just inside.
+    const outside = timeAtCentre && toPx(viewport, { T: 0, X: scene.bounds.minX }).x > ROOM_FOR_TIME_LABELS_PX;
     if (g.family === "radius") {
       return { id: `grid-${i}`, text: g.label, x: at.x + 2, y: at.y - 4, align: "left", verticalAlign: "top", rotation: -90, fontSize: 10, priority: 10, tone: "faint" };
     }
     return {
       id: `grid-${i}`,
       text: g.label,
-      x: timeAtCentre ? at.x - 6 : at.x + 6,
+      x: outside ? at.x - 6 : at.x + 6,
       y: at.y,
-      align: timeAtCentre ? "right" : "left",
+      align: outside ? "right" : "left",
       verticalAlign: "middle",
       rotation: 0,
       fontSize: 10,

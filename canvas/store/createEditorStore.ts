@@ -12,6 +12,8 @@ import type { ToolContext } from "../tools/types";
 import { emptyHistory, recordEntry, redoStep, undoStep } from "./history";
 import { diffValues } from "./patches";
 import { createLabViewSelectors } from "./selectors";
+import { createSceneBuilder } from "../kernels/diagram/scene";
+import { memoizeLast } from "../kernels/memoize";
 import type { EditorData, EditorState } from "./state";
 
 export interface EditorStoreOptions {
@@ -51,6 +53,7 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
     return {
       ...initialData(options),
       labView: createLabViewSelectors(),
+      diagramScene: memoizeLast(createSceneBuilder()),
 
       edit(label, recipe) {
         const state = get();

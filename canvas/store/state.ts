@@ -7,6 +7,7 @@ import type { HandleId } from "../kernels/lab-view/handles";
 import type { LabKeyEvent, LabPointerEvent } from "../tools/types";
 import type { History } from "./history";
 import type { LabViewSelectors } from "./selectors";
+import type { SceneOutcome } from "../kernels/diagram/scene";
 
 export type LabToolState = { name: "idle" } | { name: "dragging"; start: DragStart; plan: ProtocolPlan | null };
 
@@ -108,6 +109,8 @@ export interface EditorActions {
 /** Memoised derived values of this store (one set per store, so editors never share a cache). */
 export interface EditorDerived {
   labView: LabViewSelectors;
+  /** The Diagram's scene for a document (the same document gives the same object; the backdrop survives drags). */
+  diagramScene(document: ScenarioDocument): SceneOutcome;
 }
 
 export type EditorState = EditorData & EditorActions & EditorDerived;

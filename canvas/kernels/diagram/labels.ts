@@ -31,12 +31,22 @@ export function timeLabel(tSeconds: number): string {
 
 const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";
 
-/** A plain number with two significant digits, powers of ten written out ("6.8 × 10²"). */
-export function compactNumber(value: number): string {
+const superscript = (n: number) => `${n < 0 ? "⁻" : ""}${[...String(Math.abs(n))].map((d) => SUPERSCRIPT[Number(d)]).join("")}`;
+
+/** A plain number with `digits` significant digits (default 2), powers of ten written out ("6.8 × 10²"). */
+export function compactNumber(value: number, digits = 2): string {
   if (value === 0) return "0";
   const exponent = Math.floor(Math.log10(Math.abs(value)));
-  if (exponent >= -2 && exponent <= 3) return String(Number(value.toPrecision(2)));
-  const mantissa = Number((value / 10 ** exponent).toPrecision(2));
-  const power = `${exponent < 0 ? "⁻" : ""}${[...String(Math.abs(exponent))].map((d) => SUPERSCRIPT[Number(d)]).join("")}`;
-  return `${mantissa} × 10${power}`;
+  if (exponent >= -2 && exponent <= 3) return String(Number(value.toPrecision(digits)));
+  let mantissa = Number((value / 10 ** exponent).toPrecision(digits));
+  let shown = exponent;
+  if (Math.abs(mantissa) >= 10) [mantissa, shown] = [mantissa / 10, exponent + 1];
+  return `${mantissa} × 10${superscript(shown)}`;
+}
+
+/** A number known only by its base-10 logarithm (beyond a double's range), as "m × 10ⁿ". */
+export function numberFromLog10(log10: number, digits = 3): string {
+  const exponent = Math.floor(log10);
+  const mantissa = Number((10 ** (log10 - exponent)).toPrecision(digits));
+  return mantissa >= 10 ? `${mantissa / 10} × 10${superscript(exponent + 1)}` : `${mantissa} × 10${superscript(exponent)}`;
 }

@@ -107,7 +107,10 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
 
   const pad = 0.05 * total;
   const largest = Math.max(...Object.values(branchOffsetsMetres({ ...document.separation, distanceMetres: 1 }, 1)).map(Math.abs));
-  const branches = pathSampleTimes(times, -pad, total + pad, 32).map((tau) => {
+  // The ramps' own samples, plus even ones across the whole protocol: on the diagram the hold is a curve too.
+  const even = Array.from({ length: 97 }, (_, i) => -pad + ((total + 2 * pad) * i) / 96);
+  const samples = [...new Set([...pathSampleTimes(times, -pad, total + pad, 32), ...even])].sort((x, y) => x - y);
+  const branches = samples.map((tau) => {
     const offsets = branchOffsetsMetres({ ...document.separation, distanceMetres: 1 }, separationFraction(protocol, times, tau));
     return { point: at(tau), a: offsets.a / largest, b: offsets.b / largest };
   });

@@ -90,7 +90,7 @@ export function metresPerPx(viewport: LabViewport): number {
  * Width shares of the three segments (of the width left after the lead-in and run-out): each non-empty segment its
  * share of the time, raised to MIN_SEGMENT_SHARE where that is less, the rest shared in proportion among the others.
  */
-function segmentShares(durations: number[]): number[] {
+export function segmentShares(durations: number[]): number[] {
   const available = 1 - 2 * ROLL_SHARE;
   const floor = MIN_SEGMENT_SHARE * available;
   const raised = new Set<number>();

@@ -1,0 +1,13 @@
+import type { Metadata } from "next";
+import { redirect } from "next/navigation";
+import { signInPath } from "@/components/auth/callbackUrl";
+import { ScenarioEditorPage } from "@/components/editor/ScenarioEditorPage";
+import { currentUser } from "@/lib/session";
+
+export const metadata: Metadata = { title: "Edit scenario" };
+
+export default async function EditScenarioPage({ params }: { params: Promise<{ projectId: string; scenarioId: string }> }) {
+  const { projectId, scenarioId } = await params;
+  if (!(await currentUser())) redirect(signInPath(`/projects/${projectId}/scenarios/${scenarioId}/edit`));
+  return <ScenarioEditorPage projectId={projectId} scenarioId={scenarioId} />;
+}

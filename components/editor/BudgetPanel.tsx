@@ -1,0 +1,141 @@
+"use client";
+
+/**
+ * The Budget: quanta to infinity, quanta into the horizon, the ramp/hold split, the total, decoherence and
+ * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
+ * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
+ */
+import Link from "next/link";
+import { useEditor } from "@/canvas/EditorProvider";
+import { budgetIsStale } from "@/canvas/store/selectors";
+import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
+import { FlagIcon } from "./FlagIcon";
+import { quantityText } from "./quantity-text";
+
+type Row = { key: string; words: string; of(channel: ChannelResult): Quantity | null; combined?(result: ScenarioResult): Quantity | null };
+
+const ROWS: Row[] = [
+  { key: "far-field", words: "Quanta to infinity", of: (c) => c.farFieldQuanta },
+  { key: "horizon", words: "Quanta into the horizon", of: (c) => c.horizonQuanta },
+  { key: "ramp", words: "Ramp-driven", of: (c) => c.rampDrivenQuanta },
+  { key: "hold", words: "Hold-driven", of: (c) => c.holdDrivenQuanta },
+  { key: "total", words: "Total ⟨N⟩", of: (c) => c.totalQuanta, combined: (r) => r.combined.totalQuanta },
+  { key: "decoherence", words: "Decoherence 𝒟", of: (c) => c.decoherence, combined: (r) => r.combined.decoherence },
+  { key: "decoherence-time", words: "Decoherence time", of: (c) => c.decoherenceTime, combined: (r) => r.combined.decoherenceTime },
+];
+
+function Cell({ quantity, testId, label }: { quantity: Quantity | null; testId: string; label: string }) {
+  if (!quantity) return <td className="px-2 py-1.5 text-right text-ink-faint" data-testid={testId}>—</td>;
+  return (
+    <td className="px-2 py-1.5 text-right">
+      <Link
+        href={`/methods#${quantity.sourceKey}`}
+        className="tabular text-ink underline decoration-rule-strong underline-offset-4 hover:decoration-ink"
+        data-testid={testId}
+        data-value={quantity.value ?? ""}
+        aria-label={`${label}: ${quantityText(quantity)} (formula on the Methods page)`}
+      >
+        {quantityText(quantity)}
+      </Link>
+    </td>
+  );
+}
+
+const FLAG_LOOK: Partial<Record<ValidityFlag["status"], { icon: "invalid" | "caution" | "note"; words: string; box: string }>> = {
+  invalid: { icon: "invalid", words: "Invalid", box: "border-invalid-line bg-invalid-bg text-invalid" },
+  caution: { icon: "caution", words: "Caution", box: "border-caution-line bg-caution-bg text-caution" },
+  note: { icon: "note", words: "Note", box: "border-rule bg-paper-deep text-ink-soft" },
+};
+
+function Flags({ flags }: { flags: ValidityFlag[] }) {
+  const shown = flags.filter((f) => FLAG_LOOK[f.status]);
+  if (shown.length === 0) return null;
+  return (
+    <ul className="mt-3 space-y-1.5" aria-label="Validity flags">
+      {shown.map((flag) => {
+        const look = FLAG_LOOK[flag.status]!;
+        return (
+          <li key={flag.code} className={`flex gap-2 rounded border px-2 py-1.5 text-xs ${look.box}`} data-testid={`flag-${flag.code}`}>
+            <FlagIcon kind={look.icon} />
+            <span>
+              <strong className="font-semibold">{look.words}:</strong> {flag.message}
+            </span>
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
+
+export function BudgetPanel() {
+  const budget = useEditor((s) => s.budget);
+  const stale = useEditor((s) => budgetIsStale(s) || s.budget.status === "computing");
+  const result = budget.result;
+  const failedNow = budget.status === "failed";
+  const channels = result ? [result.electromagnetic, result.gravitational] : [];
+  const sameQuanta = result && (result.background.kind === "rindler" || result.background.kind === "de-sitter");
+  return (
+    <section aria-labelledby="budget-heading" data-testid="budget" data-state={stale ? "stale" : failedNow ? "failed" : "current"}>
+      <div className="mb-2 flex items-baseline justify-between">
+        <h2 id="budget-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+          Budget
+        </h2>
+        <span role="status" aria-live="polite" className="text-xs text-ink-faint">
+          {stale ? "⟳ updating…" : failedNow ? "" : result ? "up to date" : ""}
+        </span>
+      </div>
+      {failedNow && (
+        <div role="alert" className="mb-2 flex items-start gap-2 rounded border border-invalid-line bg-invalid-bg px-3 py-2 text-sm text-invalid">
+          <FlagIcon kind="invalid" />
+          <span>
+            This scenario cannot be computed: {budget.issues.map((i) => `${i.message}${i.path ? ` (${i.path})` : ""}`).join("; ")}
+            {result && " The numbers below are from the last scenario that could."}
+          </span>
+        </div>
+      )}
+      {!result ? (
+        <p className="text-sm text-ink-faint">{failedNow ? "" : "Computing…"}</p>
+      ) : (
+        <div className={stale || failedNow ? "opacity-55 transition-opacity" : "transition-opacity"}>
+          <table className="w-full border-collapse text-sm">
+            <thead>
+              <tr className="border-b border-ink/60 text-xs text-ink-soft">
+                <th className="px-2 py-1 text-left font-semibold" />
+                <th className="px-2 py-1 text-right font-semibold">Electromagnetic</th>
+                <th className="px-2 py-1 text-right font-semibold">Gravitational</th>
+                <th className="px-2 py-1 text-right font-semibold">Both</th>
+              </tr>
+            </thead>
+            <tbody>
+              {ROWS.map((row) => (
+                <tr key={row.key} className={`border-b border-rule ${row.key === "total" ? "border-t border-t-ink/40" : ""}`}>
+                  <th scope="row" className={`px-2 py-1.5 text-left font-normal ${row.key === "ramp" || row.key === "hold" ? "pl-5 text-ink-soft" : ""}`}>
+                    {row.words}
+                  </th>
+                  {channels.map((c) => (
+                    <Cell key={c.channel} quantity={row.of(c)} testId={`budget-${c.channel}-${row.key}`} label={`${row.words}, ${c.channel}`} />
+                  ))}
+                  <Cell quantity={row.combined ? row.combined(result) : null} testId={`budget-combined-${row.key}`} label={`${row.words}, both`} />
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          {sameQuanta && (
+            <p className="mt-2 text-xs text-ink-faint">
+              In the Rindler wedge and the de Sitter static patch the quanta crossing the horizon are the ones reaching infinity: they are counted once,
+              split by what drives them (the ramps, or the time spent apart).
+            </p>
+          )}
+          {channels
+            .filter((c) => c.exactZeroReason)
+            .map((c) => (
+              <p key={c.channel} className="mt-1 text-xs text-ink-faint">
+                {c.channel === "electromagnetic" ? "Electromagnetic" : "Gravitational"}: exactly zero — {c.exactZeroReason}.
+              </p>
+            ))}
+          <Flags flags={result.flags} />
+        </div>
+      )}
+    </section>
+  );
+}

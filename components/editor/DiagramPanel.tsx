@@ -1,0 +1,57 @@
+"use client";
+
+import dynamic from "next/dynamic";
+import { useEditor } from "@/canvas/EditorProvider";
+import { BranchLegend } from "./BranchLegend";
+import { useElementSize } from "./useElementSize";
+
+const DiagramStage = dynamic(() => import("@/canvas/layers/DiagramStage"), {
+  ssr: false,
+  loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the diagram…</p>,
+});
+
+/** The Diagram's height follows its shape (tall for Minkowski, wide for Schwarzschild), within these bounds. */
+const MIN_HEIGHT = 320;
+const MAX_HEIGHT = 540;
+
+/** Notes under the figure: what is exaggerated or rescaled (from the same scene the stage draws). */
+function DiagramNotes() {
+  const outcome = useEditor((s) => s.diagramScene(s.document));
+  if (!outcome.ok) return null;
+  return (
+    <ul className="mt-2 space-y-0.5 text-xs text-ink-faint">
+      {outcome.scene.notes.map((note) => (
+        <li key={note}>{note}</li>
+      ))}
+    </ul>
+  );
+}
+
+function useDiagramHeight(width: number): number {
+  const bounds = useEditor((s) => {
+    const outcome = s.diagramScene(s.document);
+    return outcome.ok ? outcome.scene.bounds : null;
+  });
+  if (!bounds) return MIN_HEIGHT;
+  const aspect = (bounds.maxT - bounds.minT) / (bounds.maxX - bounds.minX);
+  return Math.round(Math.min(MAX_HEIGHT, Math.max(MIN_HEIGHT, (width - 80) * aspect + 80)));
+}
+
+export function DiagramPanel() {
+  const [ref, size] = useElementSize<HTMLDivElement>({ width: 480, height: MIN_HEIGHT });
+  const height = useDiagramHeight(size.width);
+  return (
+    <section aria-labelledby="diagram-heading" className="min-w-0">
+      <h2 id="diagram-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
+        Diagram
+      </h2>
+      <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height }} data-testid="diagram">
+        {size.width > 0 && <DiagramStage width={size.width} height={height} />}
+      </div>
+      <div className="mt-2">
+        <BranchLegend radiation />
+      </div>
+      <DiagramNotes />
+    </section>
+  );
+}

@@ -1,0 +1,84 @@
+"use client";
+
+import dynamic from "next/dynamic";
+import { useEffect } from "react";
+import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
+import { withProtocolPlan } from "@/canvas/kernels/document-edits";
+import { HANDLE_IDS, HANDLE_WORDS, handleTimeSeconds, isTimeHandle, type HandleId } from "@/canvas/kernels/lab-view/handles";
+import { planHandleValue } from "@/canvas/kernels/lab-view/typed-plan";
+import { segmentTimes } from "@/canvas/kernels/timeline";
+import { formatQuantity } from "@/physics/units";
+import { BranchLegend } from "./BranchLegend";
+import { QuantityField } from "./QuantityField";
+import { useEdit } from "./useEdit";
+import { useElementSize } from "./useElementSize";
+
+const LabViewStage = dynamic(() => import("@/canvas/layers/LabViewStage"), {
+  ssr: false,
+  loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the Lab view…</p>,
+});
+
+const HEIGHT = 300;
+
+/** Every handle can be typed into: instants on the lab's clock from the start of the separation, and the separation. */
+function HandleFields() {
+  const store = useEditorStore();
+  const document = useEditor((s) => s.document);
+  const readOnly = useEditor((s) => s.readOnly);
+  const selection = useEditor((s) => s.selection);
+  const edit = useEdit();
+  if (document.protocol.kind !== "segments") return null;
+  const protocol = document.protocol;
+  const times = segmentTimes(protocol);
+  const valueOf = (handle: HandleId) => (isTimeHandle(handle) ? handleTimeSeconds(handle, times) : document.separation.distanceMetres);
+  return (
+    <div className="mt-3 grid grid-cols-5 gap-2" role="group" aria-label="Handle values">
+      {HANDLE_IDS.map((handle) => (
+        <div key={handle} className={`rounded p-1 ${selection === handle ? "bg-branchB-tint/60" : ""}`}>
+          <QuantityField
+            compact
+            label={HANDLE_WORDS[handle]}
+            dimension={isTimeHandle(handle) ? "time" : "length"}
+            shown={formatQuantity(valueOf(handle), isTimeHandle(handle) ? "time" : "length", { digits: 4 })}
+            disabled={readOnly}
+            testId={`handle-field-${handle}`}
+            onFocus={() => store.getState().select(handle)}
+            onCommit={(valueSI) => {
+              const typed = planHandleValue(handle, valueSI, protocol, document.separation);
+              if (!typed.ok) return { ok: false, message: typed.message };
+              return edit(`Set ${HANDLE_WORDS[handle].toLowerCase()}`, (d) => withProtocolPlan(d, typed.plan));
+            }}
+          />
+        </div>
+      ))}
+    </div>
+  );
+}
+
+export function LabViewPanel() {
+  const store = useEditorStore();
+  const readOnly = useEditor((s) => s.readOnly);
+  const [ref, size] = useElementSize<HTMLDivElement>({ width: 600, height: HEIGHT });
+  useEffect(() => {
+    if (size.width > 0) store.getState().setLabViewSize({ width: size.width, height: HEIGHT });
+  }, [store, size.width]);
+  return (
+    <section aria-labelledby="lab-view-heading" className="min-w-0">
+      <div className="mb-2 flex items-baseline justify-between gap-4">
+        <h2 id="lab-view-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+          Lab view
+        </h2>
+        <p className="text-xs text-ink-faint">
+          {readOnly ? "Read-only." : "Drag a handle; Shift snaps to round values; arrow keys nudge the selected handle."}
+        </p>
+      </div>
+      <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height: HEIGHT }}>
+        {size.width > 0 && <LabViewStage width={size.width} height={HEIGHT} />}
+      </div>
+      <div className="mt-2">
+        <BranchLegend />
+      </div>
+      <HandleFields />
+    </section>
+  );
+}

@@ -1,0 +1,241 @@
+"use client";
+
+/** Parameters: the background and its parameter, where the lab is, the source, and how the branches separate. */
+import type { ReactNode } from "react";
+import { useEditor } from "@/canvas/EditorProvider";
+import { compactNumber } from "@/canvas/kernels/diagram/labels";
+import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
+import { elementaryCharge } from "@/physics/constants";
+import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
+import { formatQuantity } from "@/physics/units";
+import { QuantityField } from "./QuantityField";
+import { useEdit } from "./useEdit";
+
+const BACKGROUND_WORDS: Record<BackgroundKind, string> = {
+  minkowski: "Minkowski",
+  schwarzschild: "Schwarzschild",
+  rindler: "Rindler wedge",
+  "de-sitter": "de Sitter static patch",
+};
+
+const selectClass = "mt-1 block w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm text-ink";
+
+function Group({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <fieldset className="space-y-3 border-t border-rule pt-3">
+      <legend className="pr-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">{title}</legend>
+      {children}
+    </fieldset>
+  );
+}
+
+function Choice<T extends string>({ label, value, options, onChange, disabled, name }: {
+  label: string; value: T; options: { value: T; words: string }[]; onChange(value: T): void; disabled: boolean; name: string;
+}) {
+  return (
+    <div role="radiogroup" aria-label={label}>
+      <div className="text-sm font-semibold text-ink">{label}</div>
+      <div className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
+        {options.map((o) => (
+          <label key={o.value} className="flex items-center gap-1.5 text-sm">
+            <input type="radio" name={name} value={o.value} checked={value === o.value} disabled={disabled} onChange={() => onChange(o.value)} />
+            {o.words}
+          </label>
+        ))}
+      </div>
+    </div>
+  );
+}
+
+function BackgroundFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+  const edit = useEdit();
+  const bg = document.background;
+  return (
+    <Group title="Background">
+      <label className="block text-sm font-semibold text-ink">
+        Spacetime
+        <select
+          className={selectClass}
+          value={bg.kind}
+          disabled={readOnly}
+          data-testid="background-kind"
+          onChange={(e) => edit("Change background", (d) => withBackgroundKind(d, e.target.value as BackgroundKind))}
+        >
+          {Object.entries(BACKGROUND_WORDS).map(([kind, words]) => (
+            <option key={kind} value={kind}>
+              {words}
+            </option>
+          ))}
+        </select>
+      </label>
+      {bg.kind === "schwarzschild" && (
+        <QuantityField
+          label="Black-hole mass"
+          dimension="mass"
+          hint="In kg or solar masses, e.g. 10 Msun"
+          shown={formatQuantity(bg.massKg, "mass", { solarMasses: true, digits: 4 })}
+          disabled={readOnly}
+          onCommit={(massKg) => edit("Set black-hole mass", (d) => ({ ...d, background: { kind: "schwarzschild", massKg } }))}
+        />
+      )}
+      {bg.kind === "rindler" && (
+        <QuantityField
+          label="Lab acceleration"
+          dimension="acceleration"
+          hint="e.g. 9.81 m/s^2; the horizon is c²/a behind the lab"
+          shown={formatQuantity(bg.accelerationMetresPerSecondSquared, "acceleration", { digits: 4 })}
+          disabled={readOnly}
+          onCommit={(a) => edit("Set lab acceleration", (d) => ({ ...d, background: { kind: "rindler", accelerationMetresPerSecondSquared: a } }))}
+        />
+      )}
+      {bg.kind === "de-sitter" && (
+        <QuantityField
+          label="Hubble rate"
+          dimension="rate"
+          hint="e.g. 2.2e-18 1/s"
+          shown={formatQuantity(bg.hubbleRatePerSecond, "rate", { digits: 4 })}
+          disabled={readOnly}
+          onCommit={(h) => edit("Set Hubble rate", (d) => ({ ...d, background: { kind: "de-sitter", hubbleRatePerSecond: h } }))}
+        />
+      )}
+    </Group>
+  );
+}
+
+const PLACEMENT_WORDS: Record<BackgroundKind, Partial<Record<LabPlacement["placement"], string>>> = {
+  minkowski: { inertial: "at rest (inertial)" },
+  rindler: { inertial: "accelerated, c²/a from the horizon" },
+  schwarzschild: { "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance above the horizon" },
+  "de-sitter": { inertial: "at the centre", "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance inward from the horizon" },
+};
+
+function LabFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+  const edit = useEdit();
+  const summary = useEditor((s) => s.budget.result?.background ?? null);
+  const placements = PLACEMENT_WORDS[document.background.kind];
+  const lab = document.lab;
+  return (
+    <Group title="Lab">
+      {Object.keys(placements).length > 1 ? (
+        <label className="block text-sm font-semibold text-ink">
+          Position given as
+          <select
+            className={selectClass}
+            value={lab.placement}
+            disabled={readOnly}
+            onChange={(e) => edit("Change how the lab is placed", (d) => withLabPlacement(d, e.target.value as LabPlacement["placement"]))}
+          >
+            {Object.entries(placements).map(([placement, words]) => (
+              <option key={placement} value={placement}>
+                {words}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : (
+        <p className="text-sm text-ink-soft">The lab is {Object.values(placements)[0]}.</p>
+      )}
+      {lab.placement === "areal-radius" && (
+        <QuantityField
+          label="Areal radius"
+          dimension="length"
+          shown={formatQuantity(lab.arealRadiusMetres, "length", { digits: 5 })}
+          disabled={readOnly}
+          testId="lab-areal-radius"
+          onCommit={(r) => edit("Set lab radius", (d) => ({ ...d, lab: { placement: "areal-radius", arealRadiusMetres: r } }))}
+        />
+      )}
+      {lab.placement === "proper-distance-above-horizon" && (
+        <QuantityField
+          label={document.background.kind === "de-sitter" ? "Proper distance inward from the horizon" : "Proper distance above the horizon"}
+          dimension="length"
+          shown={formatQuantity(lab.properDistanceMetres, "length", { digits: 5 })}
+          disabled={readOnly}
+          onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: l } }))}
+        />
+      )}
+      {summary && (
+        <dl className="grid grid-cols-2 gap-x-3 gap-y-0.5 text-xs text-ink-soft">
+          <dt>Lab acceleration</dt>
+          <dd className="tabular">{summary.labProperAcceleration.value === null ? "—" : formatQuantity(summary.labProperAcceleration.value, "acceleration")}</dd>
+          <dt>Redshift factor</dt>
+          <dd className="tabular">{summary.labRedshiftFactor.value === null ? "—" : compactNumber(summary.labRedshiftFactor.value)}</dd>
+          <dt>Local temperature</dt>
+          <dd className="tabular">{summary.labLocalTemperature.value === null ? "—" : `${compactNumber(summary.labLocalTemperature.value)} K`}</dd>
+        </dl>
+      )}
+    </Group>
+  );
+}
+
+function SourceFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+  const edit = useEdit();
+  const { source, separation } = document;
+  return (
+    <>
+      <Group title="Source">
+        <QuantityField
+          label="Charge"
+          dimension="charge"
+          hint={`= ${compactNumber(source.chargeCoulombs / elementaryCharge.value)} e; type e.g. 100 e or 1.6e-17 C`}
+          shown={formatQuantity(source.chargeCoulombs, "charge", { digits: 4 })}
+          disabled={readOnly}
+          onCommit={(q) => edit("Set charge", (d) => ({ ...d, source: { ...d.source, chargeCoulombs: q } }))}
+        />
+        <QuantityField
+          label="Mass"
+          dimension="mass"
+          shown={formatQuantity(source.massKg, "mass", { digits: 4 })}
+          disabled={readOnly}
+          onCommit={(m) => edit("Set source mass", (d) => ({ ...d, source: { ...d.source, massKg: m } }))}
+        />
+      </Group>
+      <Group title="Separation">
+        <Choice
+          label="Axis"
+          name="separation-axis"
+          value={separation.axis}
+          disabled={readOnly}
+          options={[
+            { value: "radial", words: "radial" },
+            { value: "tangential", words: "tangential" },
+          ]}
+          onChange={(axis) => edit("Set separation axis", (d) => ({ ...d, separation: { ...d.separation, axis } }))}
+        />
+        <Choice
+          label="Split"
+          name="separation-split"
+          value={separation.split}
+          disabled={readOnly}
+          options={[
+            { value: "symmetric", words: "symmetric (±d/2)" },
+            { value: "one-branch-stays", words: "branch B stays" },
+          ]}
+          onChange={(split) => edit("Set how the branches split", (d) => ({ ...d, separation: { ...d.separation, split } }))}
+        />
+        <QuantityField
+          label="Full separation d"
+          dimension="length"
+          shown={formatQuantity(separation.distanceMetres, "length", { digits: 4 })}
+          disabled={readOnly}
+          onCommit={(m) => edit("Set separation", (d) => ({ ...d, separation: { ...d.separation, distanceMetres: m } }))}
+        />
+      </Group>
+    </>
+  );
+}
+
+export function ParametersPanel() {
+  const document = useEditor((s) => s.document);
+  const readOnly = useEditor((s) => s.readOnly);
+  return (
+    <section aria-labelledby="parameters-heading" className="space-y-4">
+      <h2 id="parameters-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+        Parameters
+      </h2>
+      <BackgroundFields document={document} readOnly={readOnly} />
+      <LabFields document={document} readOnly={readOnly} />
+      <SourceFields document={document} readOnly={readOnly} />
+    </section>
+  );
+}

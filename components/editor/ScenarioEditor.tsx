@@ -1,0 +1,99 @@
+"use client";
+
+/**
+ * The scenario editor, Branchline's main screen: loads the scenario and the caller's rights in the project, then
+ * mounts one editor store (read-only for a viewer) with the Diagram, Lab view, Protocol strip, Parameters, Budget
+ * and Sweep around it.
+ */
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { EditorProvider, useEditorStore } from "@/canvas/EditorProvider";
+import { useProject, type ProjectDto } from "@/components/api/projects";
+import { useScenario, type ScenarioDto } from "@/components/api/scenarios";
+import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
+import { Notice } from "@/components/ui/Notice";
+import { QueryView } from "@/components/ui/QueryStates";
+import type { ScenarioDocument } from "@/physics/scenario/schema";
+import { BudgetPanel } from "./BudgetPanel";
+import { ConflictDialog } from "./ConflictDialog";
+import { DiagramPanel } from "./DiagramPanel";
+import { EditorToolbar } from "./EditorToolbar";
+import { LabViewPanel } from "./LabViewPanel";
+import { ParametersPanel } from "./ParametersPanel";
+import { ProtocolStrip } from "./ProtocolStrip";
+import { SweepPanel } from "./SweepPanel";
+import { useAutosave } from "./useAutosave";
+import { useBudgetWorker } from "./useBudgetWorker";
+import { useUndoShortcuts } from "./useUndoShortcuts";
+
+export interface ScenarioEditorProps {
+  projectId: string;
+  scenarioId: string;
+  /** The page a scenario's editor lives at (where "keep mine as a new scenario" goes). */
+  editPath(projectId: string, scenarioId: string): string;
+  /** Shown under the editor (e.g. the revision list). */
+  footer?: ReactNode;
+}
+
+export function ScenarioEditor({ projectId, scenarioId, editPath, footer }: ScenarioEditorProps) {
+  const { data: project } = useProject(projectId);
+  const scenario = useScenario(projectId, scenarioId);
+  if (!project) return null;
+  return (
+    <QueryView query={scenario} what="the scenario" lines={10} notFound={<NotFoundNotice what="scenario" />}>
+      {(loaded) =>
+        loaded.document ? (
+          <EditorProvider key={loaded.id} document={loaded.document} version={loaded.version} readOnly={!project.can.includes("scenario:write")}>
+            <EditorBody project={project} scenario={loaded} document={loaded.document} editPath={(id) => editPath(projectId, id)} footer={footer} />
+          </EditorProvider>
+        ) : (
+          <Notice tone="invalid">
+            This scenario's document cannot be read, so it cannot be edited:{" "}
+            {(loaded.documentIssues ?? []).map((i) => `${i.message}${i.path ? ` (${i.path})` : ""}`).join("; ")}
+          </Notice>
+        )
+      }
+    </QueryView>
+  );
+}
+
+function EditorBody({
+  project,
+  scenario,
+  editPath,
+  footer,
+}: {
+  project: ProjectDto;
+  scenario: ScenarioDto;
+  document: ScenarioDocument;
+  editPath(scenarioId: string): string;
+  footer?: ReactNode;
+}) {
+  const store = useEditorStore();
+  const { saveNow } = useAutosave(store, project.id, scenario.id);
+  useBudgetWorker(store);
+  useUndoShortcuts(store);
+  return (
+    <article className="space-y-6" aria-label={`Editor for ${scenario.title}`}>
+      <title>{`${scenario.title} · Branchline`}</title>
+      <Link href={`/projects/${project.id}`} className="text-sm text-ink-faint hover:text-ink">
+        ← All scenarios
+      </Link>
+      <EditorToolbar title={scenario.title} onRetrySave={saveNow} />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+        <DiagramPanel />
+        <LabViewPanel />
+      </div>
+      <ProtocolStrip />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,4fr)_minmax(0,8fr)]">
+        <ParametersPanel />
+        <div className="space-y-8">
+          <BudgetPanel />
+          <SweepPanel />
+        </div>
+      </div>
+      <ConflictDialog projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />
+      {footer}
+    </article>
+  );
+}

@@ -1,0 +1,191 @@
+"use client";
+
+/**
+ * The Sweep: decoherence against the recombination time, the hold time or the lab's distance, on log–log axes,
+ * computed on a worker of its own. The current value and the sweep's smallest decoherence are marked; clicking a
+ * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
+ */
+import { useEffect, useMemo, useState } from "react";
+import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
+import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
+import { compactNumber } from "@/canvas/kernels/diagram/labels";
+import { currentSweepValue, defaultSweepRange } from "@/canvas/kernels/sweep-range";
+import { spawnComputeWorker } from "@/canvas/worker/spawn";
+import { buttonStyles } from "@/components/ui/styles";
+import { withParameter } from "@/physics/sweeps";
+import { formatQuantity } from "@/physics/units";
+import { FlagIcon } from "./FlagIcon";
+import { QuantityField } from "./QuantityField";
+import { useEdit } from "./useEdit";
+
+const PARAMETER_WORDS: Record<SweepParameter, string> = {
+  "recombination-time": "recombination time",
+  "hold-time": "hold time",
+  "lab-distance": "lab distance",
+};
+const POINTS = 41;
+/** A sweep quicker than this shows no progress bar. */
+const PROGRESS_AFTER_MS = 400;
+
+const dimensionOf = (parameter: SweepParameter) => (parameter === "lab-distance" ? "length" : "time");
+
+function useJobRunner() {
+  const runner = useMemo(() => createJobRunner(spawnComputeWorker), []);
+  useEffect(() => () => runner.dispose(), [runner]);
+  return runner;
+}
+
+function useShowAfter(active: boolean, ms: number): boolean {
+  const [shown, setShown] = useState(false);
+  useEffect(() => {
+    if (!active) return setShown(false);
+    const timer = setTimeout(() => setShown(true), ms);
+    return () => clearTimeout(timer);
+  }, [active, ms]);
+  return shown;
+}
+
+export function SweepPanel() {
+  const store = useEditorStore();
+  const runner = useJobRunner();
+  const edit = useEdit();
+  const document = useEditor((s) => s.document);
+  const revision = useEditor((s) => s.revision);
+  const readOnly = useEditor((s) => s.readOnly);
+  const sweep = useEditor((s) => s.sweep);
+  const parameter = sweep.parameter;
+  const dimension = dimensionOf(parameter);
+  const [range, setRange] = useState<{ from: number; to: number } | null>(null);
+  const shownRange = range ?? defaultSweepRange(document, parameter);
+  const current = currentSweepValue(document, parameter);
+  const showProgress = useShowAfter(sweep.status === "running", PROGRESS_AFTER_MS);
+  const available: SweepParameter[] = document.background.kind === "minkowski" ? ["recombination-time", "hold-time"] : ["recombination-time", "hold-time", "lab-distance"];
+
+  const run = () => {
+    if (!shownRange) return;
+    const state = store.getState();
+    state.sweepStarted(state.revision);
+    runner.run(
+      { kind: "sweep", document: state.document, sweep: { parameter, fromValue: shownRange.from, toValue: shownRange.to, points: POINTS } },
+      {
+        progress: (done, total) => store.getState().sweepProgress(done, total),
+        sweep: (result) => store.getState().sweepFinished(result),
+        failed: (issues) => store.getState().sweepFailed(issues),
+      },
+    );
+  };
+
+  const data = (sweep.result?.points ?? [])
+    .map((p) => ({ x: p.x, decoherence: p.decoherence.value }))
+    .filter((p): p is { x: number; decoherence: number } => p.decoherence !== null && p.decoherence > 0);
+  const best = data.reduce<(typeof data)[number] | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null);
+  const stale = sweep.result !== null && sweep.requestRevision !== revision;
+  const setTo = (x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x));
+
+  return (
+    <section aria-labelledby="sweep-heading" data-testid="sweep">
+      <h2 id="sweep-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
+        Sweep
+      </h2>
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="block text-xs font-semibold text-ink-soft">
+          Decoherence against
+          <select
+            className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
+            value={parameter}
+            onChange={(e) => {
+              setRange(null);
+              store.getState().setSweepParameter(e.target.value as SweepParameter);
+            }}
+          >
+            {available.map((p) => (
+              <option key={p} value={p}>
+                {PARAMETER_WORDS[p]}
+              </option>
+            ))}
+          </select>
+        </label>
+        {shownRange && (
+          <>
+            <div className="w-32">
+              <QuantityField compact label="From" dimension={dimension} shown={formatQuantity(shownRange.from, dimension)} onCommit={(v) => {
+                if (!(v > 0) || v >= shownRange.to) return { ok: false, message: "must be positive and below the end of the range" };
+                setRange({ ...shownRange, from: v });
+                return { ok: true };
+              }} />
+            </div>
+            <div className="w-32">
+              <QuantityField compact label="To" dimension={dimension} shown={formatQuantity(shownRange.to, dimension)} onCommit={(v) => {
+                if (!(v > shownRange.from)) return { ok: false, message: "must be above the start of the range" };
+                setRange({ ...shownRange, to: v });
+                return { ok: true };
+              }} />
+            </div>
+          </>
+        )}
+        <button type="button" className={`${buttonStyles.secondary} py-1.5`} onClick={run} disabled={!shownRange || sweep.status === "running"} data-testid="run-sweep">
+          {sweep.status === "running" ? "Sweeping…" : "Run sweep"}
+        </button>
+      </div>
+      {showProgress && sweep.progress && (
+        <div className="mt-3 flex items-center gap-3 text-xs text-ink-soft">
+          <progress className="h-2 w-64" max={sweep.progress.total} value={sweep.progress.done} aria-label="Sweep progress" />
+          {sweep.progress.done} of {sweep.progress.total} points
+        </div>
+      )}
+      {sweep.status === "failed" && (
+        <p role="alert" className="mt-3 flex items-start gap-2 text-sm text-invalid">
+          <FlagIcon kind="invalid" /> The sweep failed: {sweep.issues.map((i) => i.message).join("; ")}
+        </p>
+      )}
+      {data.length > 0 && (
+        <div className={stale ? "opacity-60" : undefined}>
+          {stale && (
+            <p className="mt-2 flex items-start gap-1.5 text-xs text-caution">
+              <FlagIcon kind="caution" /> Computed for an earlier version of the scenario: run the sweep again.
+            </p>
+          )}
+          <div className="mt-3 h-64 w-full" data-testid="sweep-chart">
+            <ResponsiveContainer width="100%" height="100%">
+              <LineChart
+                data={data}
+                margin={{ top: 10, right: 20, bottom: 24, left: 10 }}
+                onClick={(state) => {
+                  const index = Number(state?.activeIndex);
+                  if (!readOnly && Number.isInteger(index) && data[index]) setTo(data[index].x);
+                }}
+                style={{ cursor: readOnly ? "default" : "pointer" }}
+              >
+                <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
+                <XAxis
+                  dataKey="x"
+                  type="number"
+                  scale="log"
+                  domain={["dataMin", "dataMax"]}
+                  tickFormatter={(v: number) => formatQuantity(v, dimension, { digits: 2 })}
+                  tick={{ fontSize: 11 }}
+                  label={{ value: PARAMETER_WORDS[parameter], position: "insideBottom", offset: -14, fontSize: 11 }}
+                />
+                <YAxis dataKey="decoherence" type="number" scale="log" domain={["auto", "auto"]} tickFormatter={(v: number) => compactNumber(v)} tick={{ fontSize: 11 }} width={72} label={{ value: "𝒟", angle: -90, position: "insideLeft", fontSize: 12 }} />
+                <Tooltip
+                  formatter={(v) => [compactNumber(Number(v), 3), "decoherence 𝒟"]}
+                  labelFormatter={(x) => `${PARAMETER_WORDS[parameter]} ${formatQuantity(Number(x), dimension)}`}
+                />
+                <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
+                {current !== null && current > 0 && <ReferenceLine x={current} stroke="#E69F00" strokeWidth={2} label={{ value: "now", position: "top", fontSize: 11 }} />}
+                {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} label={{ value: "smallest 𝒟", position: "bottom", fontSize: 11 }} />}
+              </LineChart>
+            </ResponsiveContainer>
+          </div>
+          {best && (
+            <p className="mt-1 text-xs text-ink-soft">
+              Smallest decoherence on this sweep: {compactNumber(best.decoherence, 3)} at {PARAMETER_WORDS[parameter]} {formatQuantity(best.x, dimension)}.
+              {!readOnly && " Click a point to set the scenario to it."}
+            </p>
+          )}
+        </div>
+      )}
+    </section>
+  );
+}

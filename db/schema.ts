@@ -84,6 +84,63 @@ export interface ScenarioRevisionsTable {
   createdAt: Generated<Date>;
 }
 
+export type InvitedRole = Exclude<ProjectRole, "owner">;
+
+export interface ProjectInvitationsTable {
+  id: Generated<string>;
+  projectId: string;
+  /** Lower-cased. */
+  email: string;
+  role: InvitedRole;
+  /** SHA-256 (hex) of the token in the e-mailed link; the token itself is never stored. */
+  tokenHash: string;
+  invitedBy: string | null;
+  createdAt: Generated<Date>;
+  sentAt: Timestamp;
+  expiresAt: Date;
+  acceptedAt: Date | null;
+  acceptedBy: string | null;
+  revokedAt: Date | null;
+}
+
+export interface ShareLinksTable {
+  id: Generated<string>;
+  projectId: string;
+  scenarioId: string;
+  label: string;
+  /** SHA-256 (hex) of the token in the link. */
+  tokenHash: string;
+  createdBy: string | null;
+  createdAt: Generated<Date>;
+  expiresAt: Date | null;
+  revokedAt: Date | null;
+  viewCount: Generated<number>;
+  lastViewedAt: Date | null;
+}
+
+export type AuditAction =
+  | "member_added"
+  | "invited"
+  | "invitation_resent"
+  | "invitation_revoked"
+  | "invitation_accepted"
+  | "role_changed"
+  | "member_removed"
+  | "member_left"
+  | "ownership_transferred";
+
+export interface ProjectAuditTable {
+  id: Generated<string>;
+  projectId: string;
+  actorId: string | null;
+  action: AuditAction;
+  targetUserId: string | null;
+  targetEmail: string;
+  role: ProjectRole | null;
+  previousRole: ProjectRole | null;
+  createdAt: Generated<Date>;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -93,6 +150,9 @@ export interface Database {
   projectMembers: ProjectMembersTable;
   scenarios: ScenariosTable;
   scenarioRevisions: ScenarioRevisionsTable;
+  projectInvitations: ProjectInvitationsTable;
+  shareLinks: ShareLinksTable;
+  projectAudit: ProjectAuditTable;
 }
 
 export type User = Selectable<UsersTable>;
@@ -106,3 +166,11 @@ export type Scenario = Selectable<ScenariosTable>;
 export type NewScenario = Insertable<ScenariosTable>;
 export type ScenarioUpdate = Updateable<ScenariosTable>;
 export type ScenarioRevision = Selectable<ScenarioRevisionsTable>;
+export type ProjectInvitation = Selectable<ProjectInvitationsTable>;
+export type NewProjectInvitation = Insertable<ProjectInvitationsTable>;
+export type ProjectInvitationUpdate = Updateable<ProjectInvitationsTable>;
+export type ShareLink = Selectable<ShareLinksTable>;
+export type NewShareLink = Insertable<ShareLinksTable>;
+export type ShareLinkUpdate = Updateable<ShareLinksTable>;
+export type ProjectAuditEntry = Selectable<ProjectAuditTable>;
+export type NewProjectAuditEntry = Insertable<ProjectAuditTable>;

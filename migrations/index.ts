@@ -2,7 +2,9 @@
 // same list works under tsx, vitest and bundlers. Add each new migration here.
 import type { Migration } from "kysely";
 import * as createCoreTables from "./2026_12_01_000000_create_core_tables";
+import * as addInvitationsShareLinksAudit from "./2026_12_01_120000_add_invitations_share_links_audit";
 
 export const migrations: Record<string, Migration> = {
   "2026_12_01_000000_create_core_tables": createCoreTables,
+  "2026_12_01_120000_add_invitations_share_links_audit": addInvitationsShareLinksAudit,
 };

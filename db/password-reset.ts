@@ -1,12 +1,11 @@
 import "server-only";
-import { createHash, randomBytes } from "node:crypto";
 import type { Kysely } from "kysely";
 import { AppError } from "./errors";
+import { hashToken, newToken } from "./tokens";
 import { findUserByEmail, setPassword } from "./users";
 import type { Database } from "./schema";
 
 const RESET_TOKEN_HOURS = 1;
-const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 
 /**
  * Issues a one-time reset token (256 random bits; only its hash is stored) for the account with this e-mail,
@@ -15,10 +14,10 @@ const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 export async function issuePasswordReset(db: Kysely<Database>, email: string): Promise<{ token: string; name: string; email: string } | null> {
   const user = await findUserByEmail(db, email);
   if (!user) return null;
-  const token = randomBytes(32).toString("base64url");
+  const token = newToken();
   await db
     .insertInto("passwordResetTokens")
-    .values({ tokenHash: sha256(token), userId: user.id, expiresAt: new Date(Date.now() + RESET_TOKEN_HOURS * 3600_000) })
+    .values({ tokenHash: hashToken(token), userId: user.id, expiresAt: new Date(Date.now() + RESET_TOKEN_HOURS * 3600_000) })
     .execute();
   return { token, name: user.name, email: user.email };
 }
@@ -29,7 +28,7 @@ export async function completePasswordReset(db: Kysely<Database>, token: string,
     const row = await trx
       .updateTable("passwordResetTokens")
       .set({ usedAt: new Date() })
-      .where("tokenHash", "=", sha256(token))
+      .where("tokenHash", "=", hashToken(token))
       .where("usedAt", "is", null)
       .where("expiresAt", ">", new Date())
       .returning("userId")

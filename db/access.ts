@@ -4,6 +4,10 @@
  *
  * A project the caller is not a member of is reported as not found (404), never as forbidden, so that its
  * existence does not leak. A member whose role lacks the permission gets 403.
+ *
+ * Two kinds of token stand in for a membership here: an invitation (it may be accepted once, before it expires,
+ * by the account with the address it was sent to) and a share link (its holder, signed in or not, may read the
+ * one scenario it names while it is live, and do nothing else). A dead token of either kind is not found.
  */
 import type { ProjectRole, SiteRole } from "./schema";
 import { AppError, forbidden, notFound } from "./errors";
@@ -19,6 +23,9 @@ export type ProjectAction =
   | "project:delete"
   | "members:read"
   | "members:manage"
+  | "members:invite"
+  | "members:audit"
+  | "share:manage"
   | "scenario:read"
   | "scenario:write";
 
@@ -26,9 +33,23 @@ export type SiteAction = "users:list" | "users:set-role";
 
 const projectGrants: Record<ProjectRole, ReadonlySet<ProjectAction>> = {
   viewer: new Set(["project:read", "members:read", "scenario:read"]),
-  editor: new Set(["project:read", "members:read", "scenario:read", "scenario:write"]),
-  owner: new Set(["project:read", "project:rename", "project:delete", "members:read", "members:manage", "scenario:read", "scenario:write"]),
+  editor: new Set(["project:read", "members:read", "scenario:read", "scenario:write", "share:manage"]),
+  owner: new Set([
+    "project:read",
+    "project:rename",
+    "project:delete",
+    "members:read",
+    "members:manage",
+    "members:invite",
+    "members:audit",
+    "scenario:read",
+    "scenario:write",
+    "share:manage",
+  ]),
 };
+
+/** All a share link's holder may do, whoever they are: read the scenario it names. */
+const linkHolderGrants: ReadonlySet<ProjectAction> = new Set(["scenario:read"]);
 
 const siteGrants: Record<SiteRole, ReadonlySet<SiteAction>> = {
   admin: new Set(["users:list", "users:set-role"]),
@@ -54,6 +75,47 @@ export function assertSiteAccess(actor: Actor | null, action: SiteAction): asser
   if (!siteGrants[actor.siteRole].has(action)) throw forbidden("only a site administrator may do this");
 }
 
+/** The parts of a stored token that decide whether it still works. */
+interface TokenState {
+  expiresAt: Date | null;
+  revokedAt: Date | null;
+}
+
+const isLive = (token: TokenState, now: Date) => token.revokedAt === null && (token.expiresAt === null || token.expiresAt > now);
+
+/**
+ * Throws unless a share link (as found by its token's hash, or undefined) is live and lets its holder do
+ * `action`. A revoked, expired or unknown link is not found; a live one never grants more than reading.
+ */
+export function assertShareLinkAccess<T extends TokenState>(link: T | undefined, action: ProjectAction, now = new Date()): asserts link is T {
+  if (!link || !isLive(link, now)) throw new AppError("not_found", "this share link was not found, or it has expired or been revoked");
+  if (!linkHolderGrants.has(action)) throw forbidden("a share link only lets you read the scenario it names");
+}
+
+/**
+ * Throws unless an invitation (as found by its token's hash, or undefined) may still be accepted by the account
+ * with `accountEmail`: not used, revoked or expired (else not found), and sent to this address (else forbidden).
+ */
+export function assertInvitationAcceptable<T extends TokenState & { acceptedAt: Date | null; email: string }>(
+  invitation: T | undefined,
+  accountEmail: string,
+  now = new Date(),
+): asserts invitation is T {
+  if (!invitation || !invitationIsOpen(invitation, now)) throw invitationNotFound();
+  if (invitation.email.toLowerCase() !== accountEmail.toLowerCase()) {
+    throw forbidden(
+      `this invitation was sent to ${invitation.email}, but you are signed in as ${accountEmail}; sign in with the invited address to accept it`,
+    );
+  }
+}
+
+export const invitationNotFound = () => new AppError("not_found", "this invitation was not found, or it has expired, been used or been revoked");
+
+/** Whether an invitation can still be accepted by someone (for showing it before sign-in). */
+export function invitationIsOpen(invitation: TokenState & { acceptedAt: Date | null }, now = new Date()): boolean {
+  return invitation.acceptedAt === null && isLive(invitation, now);
+}
+
 function describe(action: ProjectAction): string {
   const words: Record<ProjectAction, string> = {
     "project:read": "reading the project",
@@ -61,6 +123,9 @@ function describe(action: ProjectAction): string {
     "project:delete": "deleting the project",
     "members:read": "listing members",
     "members:manage": "managing members",
+    "members:invite": "inviting people",
+    "members:audit": "reading the membership history",
+    "share:manage": "managing share links",
     "scenario:read": "reading scenarios",
     "scenario:write": "changing scenarios",
   };

@@ -9,7 +9,8 @@ export type ErrorCode =
   | "version_conflict"
   | "payload_too_large"
   | "unprocessable"
-  | "rate_limited";
+  | "rate_limited"
+  | "service_unavailable";
 
 export interface FieldIssue {
   path: string;

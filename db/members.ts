@@ -1,6 +1,7 @@
 import "server-only";
 import type { Kysely } from "kysely";
 import { type Actor, assertProjectAccess } from "./access";
+import { recordAudit } from "./audit";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
 import type { Database, ProjectRole } from "./schema";
@@ -37,6 +38,17 @@ export async function listMembers(db: Kysely<Database>, actor: Actor, projectId:
   return rows.map((r) => ({ userId: r.userId, email: r.email, name: r.name, role: r.role, joinedAt: r.createdAt.toISOString() }));
 }
 
+/** Adds an account to a project with a role, inside the caller's transaction; null when it is already a member. */
+export async function insertMember(db: Kysely<Database>, projectId: string, userId: string, role: ProjectRole): Promise<Date | null> {
+  const inserted = await db
+    .insertInto("projectMembers")
+    .values({ projectId, userId, role })
+    .onConflict((oc) => oc.columns(["projectId", "userId"]).doNothing())
+    .returning("createdAt")
+    .executeTakeFirst();
+  return inserted?.createdAt ?? null;
+}
+
 export async function addMemberByEmail(
   db: Kysely<Database>,
   actor: Actor,
@@ -51,14 +63,12 @@ export async function addMemberByEmail(
       { path: "email", message: "no account with this address" },
     ]);
   }
-  const inserted = await db
-    .insertInto("projectMembers")
-    .values({ projectId, userId: user.id, role })
-    .onConflict((oc) => oc.columns(["projectId", "userId"]).doNothing())
-    .returning("createdAt")
-    .executeTakeFirst();
-  if (!inserted) throw conflict("this person is already a member of the project", [{ path: "email", message: "already a member" }]);
-  return { userId: user.id, email: user.email, name: user.name, role, joinedAt: inserted.createdAt.toISOString() };
+  return db.transaction().execute(async (trx) => {
+    const joinedAt = await insertMember(trx, projectId, user.id, role);
+    if (!joinedAt) throw conflict("this person is already a member of the project", [{ path: "email", message: "already a member" }]);
+    await recordAudit(trx, { projectId, actorId: actor.userId, action: "member_added", targetUserId: user.id, targetEmail: user.email, role });
+    return { userId: user.id, email: user.email, name: user.name, role, joinedAt: joinedAt.toISOString() };
+  });
 }
 
 async function countOwners(db: Kysely<Database>, projectId: string): Promise<number> {
@@ -69,6 +79,29 @@ async function countOwners(db: Kysely<Database>, projectId: string): Promise<num
     .where("role", "=", "owner")
     .executeTakeFirstOrThrow();
   return Number(n);
+}
+
+/** Locks the project's membership rows for the rest of the transaction, so concurrent changes queue. */
+async function lockMembers(trx: Kysely<Database>, projectId: string): Promise<void> {
+  await trx.selectFrom("projectMembers").select("userId").where("projectId", "=", projectId).forUpdate().execute();
+}
+
+/** A member's role and address, read under the lock; 404 when the account is not a member. */
+async function existingMember(trx: Kysely<Database>, projectId: string, userId: string): Promise<{ role: ProjectRole; email: string }> {
+  if (!isUuid(userId)) throw notFound("member");
+  const row = await trx
+    .selectFrom("projectMembers as m")
+    .innerJoin("users as u", "u.id", "m.userId")
+    .select(["m.role", "u.email"])
+    .where("m.projectId", "=", projectId)
+    .where("m.userId", "=", userId)
+    .executeTakeFirst();
+  if (!row) throw notFound("member");
+  return row;
+}
+
+async function setRole(trx: Kysely<Database>, projectId: string, userId: string, role: ProjectRole): Promise<void> {
+  await trx.updateTable("projectMembers").set({ role }).where("projectId", "=", projectId).where("userId", "=", userId).execute();
 }
 
 /**
@@ -84,16 +117,52 @@ export async function changeMemberRole(
 ): Promise<MemberDto> {
   return db.transaction().execute(async (trx) => {
     assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:manage");
-    if (!isUuid(userId)) throw notFound("member");
-    await trx.selectFrom("projectMembers").select("userId").where("projectId", "=", projectId).forUpdate().execute();
-    const current = await roleInProject(trx, projectId, userId);
-    if (!current) throw notFound("member");
-    if (current === "owner" && role !== "owner" && (await countOwners(trx, projectId)) === 1) {
+    await lockMembers(trx, projectId);
+    const current = await existingMember(trx, projectId, userId);
+    if (current.role === "owner" && role !== "owner" && (await countOwners(trx, projectId)) === 1) {
       throw conflict("the last owner cannot be demoted; make someone else an owner first", [{ path: "role", message: "last owner" }]);
     }
-    await trx.updateTable("projectMembers").set({ role }).where("projectId", "=", projectId).where("userId", "=", userId).execute();
+    if (current.role !== role) {
+      await setRole(trx, projectId, userId, role);
+      await recordAudit(trx, {
+        projectId,
+        actorId: actor.userId,
+        action: "role_changed",
+        targetUserId: userId,
+        targetEmail: current.email,
+        role,
+        previousRole: current.role,
+      });
+    }
     const members = await listMembers(trx, actor, projectId);
     return members.find((m) => m.userId === userId)!;
+  });
+}
+
+/**
+ * Hands the caller's ownership to another member: they become an owner, the caller an editor, in one step
+ * (so the project is never without an owner). Only an owner may do it.
+ */
+export async function transferOwnership(db: Kysely<Database>, actor: Actor, projectId: string, userId: string): Promise<MemberDto[]> {
+  return db.transaction().execute(async (trx) => {
+    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:manage");
+    if (userId === actor.userId) {
+      throw new AppError("unprocessable", "choose another member: ownership passes from you to someone else", [{ path: "userId", message: "that is you" }]);
+    }
+    await lockMembers(trx, projectId);
+    const target = await existingMember(trx, projectId, userId);
+    await setRole(trx, projectId, userId, "owner");
+    await setRole(trx, projectId, actor.userId, "editor");
+    await recordAudit(trx, {
+      projectId,
+      actorId: actor.userId,
+      action: "ownership_transferred",
+      targetUserId: userId,
+      targetEmail: target.email,
+      role: "owner",
+      previousRole: target.role,
+    });
+    return listMembers(trx, actor, projectId);
   });
 }
 
@@ -101,15 +170,21 @@ export async function changeMemberRole(
 export async function removeMember(db: Kysely<Database>, actor: Actor, projectId: string, userId: string): Promise<void> {
   await db.transaction().execute(async (trx) => {
     const callerRole = await roleInProject(trx, projectId, actor.userId);
-    if (actor.userId !== userId) assertProjectAccess(callerRole, "members:manage");
-    else assertProjectAccess(callerRole, "project:read");
-    if (!isUuid(userId)) throw notFound("member");
-    await trx.selectFrom("projectMembers").select("userId").where("projectId", "=", projectId).forUpdate().execute();
-    const current = await roleInProject(trx, projectId, userId);
-    if (!current) throw notFound("member");
-    if (current === "owner" && (await countOwners(trx, projectId)) === 1) {
+    const leaving = actor.userId === userId;
+    assertProjectAccess(callerRole, leaving ? "project:read" : "members:manage");
+    await lockMembers(trx, projectId);
+    const current = await existingMember(trx, projectId, userId);
+    if (current.role === "owner" && (await countOwners(trx, projectId)) === 1) {
       throw conflict("the last owner cannot leave the project; make someone else an owner first, or delete the project");
     }
     await trx.deleteFrom("projectMembers").where("projectId", "=", projectId).where("userId", "=", userId).execute();
+    await recordAudit(trx, {
+      projectId,
+      actorId: actor.userId,
+      action: leaving ? "member_left" : "member_removed",
+      targetUserId: userId,
+      targetEmail: current.email,
+      previousRole: current.role,
+    });
   });
 }

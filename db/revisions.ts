@@ -2,11 +2,11 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, assertProjectAccess } from "./access";
-import { notFound } from "./errors";
-import { isUuid } from "./ids";
+import { diffDocuments, type DocumentDiff } from "../lib/document-diff";
+import { AppError, notFound } from "./errors";
 import { roleInProject } from "./members";
 import type { Database } from "./schema";
-import type { PersonDto } from "./scenarios";
+import { assertScenarioInProject, type PersonDto, saveNextVersion, type ScenarioDto } from "./scenarios";
 
 export interface RevisionSummaryDto {
   version: number;
@@ -19,6 +19,16 @@ export interface RevisionSummaryDto {
 export interface RevisionDto extends RevisionSummaryDto {
   document: ScenarioDocument | null;
   documentIssues: { path: string; message: string }[] | null;
+}
+
+/** Revision numbers are PostgreSQL integers. */
+export const MAX_REVISION = 2_147_483_647;
+
+/** A revision number from a URL segment; anything that cannot name a revision is not found. */
+export function revisionNumber(segment: string): number {
+  const n = Number(segment);
+  if (!Number.isInteger(n) || n < 1 || n > MAX_REVISION) throw notFound("revision");
+  return n;
 }
 
 function revisionQuery(db: Kysely<Database>, projectId: string, scenarioId: string) {
@@ -45,9 +55,7 @@ function toSummary(r: RevisionRow): RevisionSummaryDto {
 
 async function assertScenarioReadable(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string) {
   assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
-  if (!isUuid(scenarioId)) throw notFound("scenario");
-  const exists = await db.selectFrom("scenarios").select("id").where("id", "=", scenarioId).where("projectId", "=", projectId).executeTakeFirst();
-  if (!exists) throw notFound("scenario");
+  await assertScenarioInProject(db, projectId, scenarioId);
 }
 
 export async function listRevisions(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<RevisionSummaryDto[]> {
@@ -72,4 +80,62 @@ export async function getRevision(
     document: parsed.ok ? parsed.document : null,
     documentIssues: parsed.ok ? null : parsed.issues,
   };
+}
+
+export interface RevisionDiffDto extends DocumentDiff {
+  /** The older side (?against=) and the newer side (the revision in the path). */
+  from: RevisionSummaryDto;
+  to: RevisionSummaryDto;
+  /** The title, when it differs; titles live beside the document. */
+  title: { before: string; after: string } | null;
+}
+
+async function storedRevision(db: Kysely<Database>, projectId: string, scenarioId: string, version: number) {
+  const row = await revisionQuery(db, projectId, scenarioId).select("r.document").where("r.version", "=", version).executeTakeFirst();
+  if (!row) throw notFound(`revision ${version}`);
+  return row;
+}
+
+/** What changed from revision `against` to revision `version`: document paths with their old and new values, as stored. */
+export async function diffRevisions(
+  db: Kysely<Database>,
+  actor: Actor,
+  projectId: string,
+  scenarioId: string,
+  version: number,
+  against: number,
+): Promise<RevisionDiffDto> {
+  await assertScenarioReadable(db, actor, projectId, scenarioId);
+  const [older, newer] = await Promise.all([storedRevision(db, projectId, scenarioId, against), storedRevision(db, projectId, scenarioId, version)]);
+  return {
+    from: toSummary(older),
+    to: toSummary(newer),
+    title: older.title === newer.title ? null : { before: older.title, after: newer.title },
+    ...diffDocuments(older.document, newer.document),
+  };
+}
+
+/**
+ * Restores an old revision as a new one: the scenario's next version gets that revision's title and document
+ * (upgraded to the current schema). Nothing is deleted; the versions in between stay in the history.
+ */
+export async function restoreRevision(
+  db: Kysely<Database>,
+  actor: Actor,
+  projectId: string,
+  scenarioId: string,
+  version: number,
+): Promise<ScenarioDto> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
+  await assertScenarioInProject(db, projectId, scenarioId);
+  const revision = await storedRevision(db, projectId, scenarioId, version);
+  const parsed = parseScenarioDocument(revision.document);
+  if (!parsed.ok) {
+    throw new AppError(
+      "unprocessable",
+      `revision ${version}'s document cannot be read by this version of Branchline, so it cannot be restored`,
+      parsed.issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })),
+    );
+  }
+  return saveNextVersion(db, actor, projectId, scenarioId, () => ({ title: revision.title, document: parsed.document }));
 }

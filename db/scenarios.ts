@@ -156,6 +156,13 @@ async function fetchScenario(db: Kysely<Database>, projectId: string, scenarioId
   return row;
 }
 
+/** 404 unless the scenario exists in this project; call it after checking the caller's access to the project. */
+export async function assertScenarioInProject(db: Kysely<Database>, projectId: string, scenarioId: string): Promise<void> {
+  if (!isUuid(scenarioId)) throw notFound("scenario");
+  const exists = await db.selectFrom("scenarios").select("id").where("id", "=", scenarioId).where("projectId", "=", projectId).executeTakeFirst();
+  if (!exists) throw notFound("scenario");
+}
+
 export async function getScenario(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<ScenarioDto> {
   assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
   return toDto(await fetchScenario(db, projectId, scenarioId));
@@ -218,6 +225,30 @@ export async function updateScenario(
   scenarioId: string,
   input: { version: number; title?: string; document?: ScenarioDocument },
 ): Promise<ScenarioDto> {
+  return saveNextVersion(db, actor, projectId, scenarioId, (current) => {
+    if (current.version !== input.version) {
+      throw new AppError(
+        "version_conflict",
+        `this scenario was changed by someone else (you edited version ${input.version}; version ${current.version} is stored)`,
+        [{ path: "version", message: "stale version" }],
+        { currentVersion: current.version },
+      );
+    }
+    return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document) };
+  });
+}
+
+/**
+ * Stores the next version of a scenario and its revision, in one transaction holding the scenario's row lock.
+ * `next` sees what is stored now and answers the title and document to store, or throws to store nothing.
+ */
+export async function saveNextVersion(
+  db: Kysely<Database>,
+  actor: Actor,
+  projectId: string,
+  scenarioId: string,
+  next: (current: { version: number; title: string; document: unknown }) => { title: string; document: ScenarioDocument },
+): Promise<ScenarioDto> {
   assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
   if (!isUuid(scenarioId)) throw notFound("scenario");
   await db.transaction().execute(async (trx) => {
@@ -229,16 +260,7 @@ export async function updateScenario(
       .forUpdate()
       .executeTakeFirst();
     if (!current) throw notFound("scenario");
-    if (current.version !== input.version) {
-      throw new AppError(
-        "version_conflict",
-        `this scenario was changed by someone else (you edited version ${input.version}; version ${current.version} is stored)`,
-        [{ path: "version", message: "stale version" }],
-        { currentVersion: current.version },
-      );
-    }
-    const document = input.document ?? validDocument(current.document);
-    const title = input.title ?? current.title;
+    const { title, document } = next(current);
     const version = current.version + 1;
     await trx
       .updateTable("scenarios")

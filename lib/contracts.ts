@@ -47,3 +47,31 @@ export const scenarioListQuerySchema = z.object({
   background: z.enum(["minkowski", "schwarzschild", "rindler", "de-sitter"]).optional(),
 });
 export type ScenarioListQueryInput = z.input<typeof scenarioListQuerySchema>;
+
+export const invitedRoleSchema = z.enum(["editor", "viewer"], { error: "invite as editor or viewer; make someone an owner once they have joined" });
+export const invitationCreateSchema = z.object({ email: emailSchema, role: invitedRoleSchema }).strict();
+export const ownershipTransferSchema = z.object({ userId: z.string({ error: "choose the member who becomes owner" }).min(1, "choose the member who becomes owner") }).strict();
+
+export const SHARE_LINK_MAX_DAYS = 365;
+export const shareLinkLabelSchema = z.string().trim().min(1, "say who the link is for, e.g. “for the referee”").max(200, "use at most 200 characters");
+export const shareLinkCreateSchema = z
+  .object({
+    label: shareLinkLabelSchema,
+    /** Days until the link stops working; null or absent: until it is revoked. */
+    expiresInDays: z
+      .number({ error: "expiry must be a number of days" })
+      .int("expiry must be a whole number of days")
+      .min(1, "a link must work for at least a day")
+      .max(SHARE_LINK_MAX_DAYS, `a link may work for at most ${SHARE_LINK_MAX_DAYS} days`)
+      .nullable()
+      .optional(),
+  })
+  .strict();
+
+export const revisionDiffQuerySchema = z.object({
+  against: z.coerce
+    .number({ error: "against must be a revision number" })
+    .int("against must be a whole revision number")
+    .min(1, "revisions start at 1")
+    .max(2_147_483_647, "no revision has so large a number"),
+});

@@ -16,6 +16,7 @@ const statusOf: Record<ErrorCode, number> = {
   payload_too_large: 413,
   unprocessable: 422,
   rate_limited: 429,
+  service_unavailable: 503,
 };
 
 /** Largest JSON body a route accepts (a sampled protocol of many points fits). */

@@ -7,18 +7,13 @@ import { branchlineAuthAdapter } from "@/db/auth-adapter";
 import { MAX_FAILURES_PER_ACCOUNT } from "@/db/sign-in-limits";
 import { authOptions, RATE_LIMITED_MESSAGE } from "@/lib/auth";
 import { call, makeUser } from "./harness";
+import { mailboxMessagesTo } from "./mailbox";
 
 type Authorize = (credentials: Record<string, string>, req: { headers: Record<string, string> }) => Promise<{ id: string } | null>;
 
 function credentialsAuthorize(): Authorize {
   const provider = authOptions.providers.find((p) => p.id === "credentials") as unknown as { options: { authorize: Authorize } };
   return provider.options.authorize;
-}
-
-async function mailboxMessagesTo(address: string): Promise<{ subject: string; text: string }[]> {
-  const res = await fetch(`${process.env.BRANCHLINE_MAILBOX_URL}/messages`);
-  const { messages } = (await res.json()) as { messages: { to: string[]; subject: string; text: string }[] };
-  return messages.filter((m) => m.to.includes(address));
 }
 
 describe("password sign-in", () => {

@@ -3,22 +3,31 @@
  * A project the caller cannot see answers 404 (its existence must not leak); a member whose role lacks the
  * permission gets 403; a signed-out caller 401. Each case runs on a fresh fixture, so destructive cases do
  * not disturb the others. The last test fails when a route exists that the table does not cover.
+ *
+ * Where a scenario is involved there is a sixth caller, the link holder: signed out, holding a live share link
+ * of the fixture's scenario. On the share route the token is the path (the other callers hold only a revoked
+ * one); everywhere else it rides along as a header and a query parameter, and must grant nothing.
  */
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { call, makeUser } from "./harness";
-import { type ProjectFixture, projectFixture, type Role, userFor } from "./fixtures";
+import { type ProjectFixture, projectFixture, type Role, type TeamExtras, teamExtras, userFor } from "./fixtures";
+
+type Caller = Role | "linkHolder";
 
 interface Case {
   /** Route file under app/api, as on disk. */
   file: string;
   method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
-  path: (f: ProjectFixture) => string;
-  params?: (f: ProjectFixture) => Record<string, string>;
+  /** The fixture gets an invitation and share links first (see teamExtras). */
+  extras?: true;
+  path: (f: ProjectFixture, x: TeamExtras, caller: Caller) => string;
+  params?: (f: ProjectFixture, x: TeamExtras, caller: Caller) => Record<string, string>;
+  query?: (f: ProjectFixture) => Record<string, string>;
   body?: (f: ProjectFixture) => unknown;
-  expected: Record<Role, number>;
+  expected: Record<Role, number> & { linkHolder?: number };
 }
 
 const P = (f: ProjectFixture) => ({ projectId: f.projectId });
@@ -28,6 +37,10 @@ const signedIn = (status: number): Record<Role, number> => ({ ...everyone(status
 const readers = (status: number): Record<Role, number> => ({ anonymous: 401, stranger: 404, viewer: status, editor: status, owner: status });
 const writers = (status: number): Record<Role, number> => ({ anonymous: 401, stranger: 404, viewer: 403, editor: status, owner: status });
 const owners = (status: number): Record<Role, number> => ({ anonymous: 401, stranger: 404, viewer: 403, editor: 403, owner: status });
+/** A share link's holder is signed out: outside the share route, the token does not make them anyone. */
+const holderToo = (expected: Record<Role, number>) => ({ ...expected, linkHolder: 401 });
+const I = (f: ProjectFixture, x: TeamExtras) => ({ projectId: f.projectId, invitationId: x.invitationId });
+const R1 = (f: ProjectFixture) => ({ ...S(f), version: "1" });
 let unique = 0;
 
 const cases: Case[] = [
@@ -50,12 +63,26 @@ const cases: Case[] = [
   { file: "projects/[projectId]/members/[userId]/route.ts", method: "DELETE", path: (f) => `/api/projects/${f.projectId}/members/${f.extraMember.id}`, params: (f) => ({ projectId: f.projectId, userId: f.extraMember.id }), expected: owners(204) },
   { file: "projects/[projectId]/scenarios/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios`, params: P, expected: readers(200) },
   { file: "projects/[projectId]/scenarios/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/scenarios`, params: P, body: () => ({ title: "New scenario", document: defaultScenarioDocument() }), expected: writers(201) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, expected: readers(200) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "PUT", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, body: () => ({ version: 1, title: "Saved again" }), expected: writers(200) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "DELETE", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, expected: writers(204) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/duplicate/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/duplicate`, params: S, body: () => ({}), expected: writers(201) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions`, params: S, expected: readers(200) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1`, params: (f) => ({ ...S(f), version: "1" }), expected: readers(200) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, expected: holderToo(readers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "PUT", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, body: () => ({ version: 1, title: "Saved again" }), expected: holderToo(writers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/route.ts", method: "DELETE", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}`, params: S, expected: holderToo(writers(204)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/duplicate/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/duplicate`, params: S, body: () => ({}), expected: holderToo(writers(201)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions`, params: S, expected: holderToo(readers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1`, params: R1, expected: holderToo(readers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/restore/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1/restore`, params: R1, expected: holderToo(writers(201)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/diff/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1/diff`, params: R1, query: () => ({ against: "1" }), expected: holderToo(readers(200)) },
+  { file: "projects/[projectId]/invitations/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/invitations`, params: P, expected: owners(200) },
+  { file: "projects/[projectId]/invitations/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/invitations`, params: P, body: () => ({ email: `invitee-${++unique}-${Date.now()}@example.test`, role: "viewer" }), expected: owners(201) },
+  { file: "projects/[projectId]/invitations/[invitationId]/route.ts", method: "DELETE", extras: true, path: (f, x) => `/api/projects/${f.projectId}/invitations/${x.invitationId}`, params: I, expected: owners(204) },
+  { file: "projects/[projectId]/invitations/[invitationId]/resend/route.ts", method: "POST", extras: true, path: (f, x) => `/api/projects/${f.projectId}/invitations/${x.invitationId}/resend`, params: I, expected: owners(200) },
+  // The invitation is addressed to the fixture's stranger: only that account may accept it.
+  { file: "invitations/[token]/accept/route.ts", method: "POST", extras: true, path: (_f, x) => `/api/invitations/${x.invitationToken}/accept`, params: (_f, x) => ({ token: x.invitationToken }), expected: { anonymous: 401, stranger: 200, viewer: 403, editor: 403, owner: 403 } },
+  { file: "projects/[projectId]/ownership/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/ownership`, params: P, body: (f) => ({ userId: f.extraMember.id }), expected: owners(200) },
+  { file: "projects/[projectId]/audit/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/audit`, params: P, expected: owners(200) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/route.ts", method: "GET", extras: true, path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links`, params: S, expected: holderToo(writers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/route.ts", method: "POST", extras: true, path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links`, params: S, body: () => ({ label: "for the referee", expiresInDays: 7 }), expected: holderToo(writers(201)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/[linkId]/route.ts", method: "DELETE", extras: true, path: (f, x) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links/${x.linkId}`, params: (f, x) => ({ ...S(f), linkId: x.linkId }), expected: holderToo(writers(204)) },
+  { file: "share/[token]/route.ts", method: "GET", extras: true, path: (_f, x, caller) => `/api/share/${caller === "linkHolder" ? x.linkToken : x.revokedLinkToken}`, params: (_f, x, caller) => ({ token: caller === "linkHolder" ? x.linkToken : x.revokedLinkToken }), expected: { ...everyone(404), linkHolder: 200 } },
 ];
 
 /** Routes tested elsewhere, with the reason. */
@@ -74,15 +101,25 @@ function routeFiles(dir = apiRoot): string[] {
 }
 
 const roles: Role[] = ["anonymous", "stranger", "viewer", "editor", "owner"];
+const noExtras: TeamExtras = { invitationId: "", invitationToken: "", linkId: "", linkToken: "", revokedLinkToken: "" };
 
 describe("authorization table", () => {
   for (const c of cases) {
-    for (const role of roles) {
-      it(`${c.method} ${c.file} as ${role} answers ${c.expected[role]}`, async () => {
+    const callers: Caller[] = c.expected.linkHolder === undefined ? roles : [...roles, "linkHolder"];
+    for (const caller of callers) {
+      const expected = caller === "linkHolder" ? c.expected.linkHolder! : c.expected[caller];
+      it(`${c.method} ${c.file} as ${caller} answers ${expected}`, async () => {
         const mod = await import(`../../app/api/${c.file}`);
         const f = await projectFixture();
-        const res = await call(mod[c.method], c.method, c.path(f), { as: userFor(f, role), params: c.params?.(f), body: c.body?.(f) });
-        expect(res.status, JSON.stringify(res.body)).toBe(c.expected[role]);
+        const x = c.extras || caller === "linkHolder" ? await teamExtras(f) : noExtras;
+        const holding = caller === "linkHolder" ? { headers: { "x-share-token": x.linkToken }, query: { ...c.query?.(f), share: x.linkToken } } : { query: c.query?.(f) };
+        const res = await call(mod[c.method], c.method, c.path(f, x, caller), {
+          as: caller === "linkHolder" ? null : userFor(f, caller),
+          params: c.params?.(f, x, caller),
+          body: c.body?.(f),
+          ...holding,
+        });
+        expect(res.status, JSON.stringify(res.body)).toBe(expected);
         if (res.status >= 400) expect(res.body.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });
       });
     }

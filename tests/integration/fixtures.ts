@@ -1,7 +1,9 @@
 import { getDb } from "@/db";
+import { createInvitation } from "@/db/invitations";
 import { addMemberByEmail } from "@/db/members";
 import { createProject } from "@/db/projects";
 import { createScenario } from "@/db/scenarios";
+import { createShareLink, revokeShareLink } from "@/db/share-links";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { makeUser, type TestUser } from "./harness";
 
@@ -34,4 +36,28 @@ export async function projectFixture(): Promise<ProjectFixture> {
 
 export function userFor(f: ProjectFixture, role: Role): TestUser | null {
   return role === "anonymous" ? null : f.users[role];
+}
+
+export interface TeamExtras {
+  /** An open invitation to the fixture's stranger, as viewer, and the token its e-mail would carry. */
+  invitationId: string;
+  invitationToken: string;
+  /** A live share link of the fixture's scenario, and one that has been revoked. */
+  linkId: string;
+  linkToken: string;
+  revokedLinkToken: string;
+}
+
+/** An invitation and share links in a fixture project, made by its owner through the data access layer. */
+export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
+  const db = getDb();
+  const owner = { userId: f.users.owner.id, siteRole: "member" as const };
+  let invitationToken = "";
+  const invitation = await createInvitation(db, owner, f.projectId, { email: f.users.stranger.email, role: "viewer" }, async (letter) => {
+    invitationToken = letter.token;
+  });
+  const live = await createShareLink(db, owner, f.projectId, f.scenarioId, { label: "for the referee" });
+  const revoked = await createShareLink(db, owner, f.projectId, f.scenarioId, { label: "an old link" });
+  await revokeShareLink(db, owner, f.projectId, f.scenarioId, revoked.link.id);
+  return { invitationId: invitation.id, invitationToken, linkId: live.link.id, linkToken: live.token, revokedLinkToken: revoked.token };
 }

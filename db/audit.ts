@@ -1,0 +1,60 @@
+import "server-only";
+import type { Kysely } from "kysely";
+import { type Actor, assertProjectAccess } from "./access";
+import { roleInProject } from "./members";
+import type { AuditAction, Database, NewProjectAuditEntry, ProjectRole } from "./schema";
+import type { PersonDto } from "./scenarios";
+
+/** One membership change: who did what to whom, and when. */
+export interface AuditEntryDto {
+  id: string;
+  at: string;
+  action: AuditAction;
+  /** Null when the account that did it has since been deleted. */
+  actor: PersonDto | null;
+  target: { userId: string | null; name: string | null; email: string };
+  role: ProjectRole | null;
+  previousRole: ProjectRole | null;
+}
+
+/** How many entries the members page shows, newest first. */
+export const AUDIT_PAGE_SIZE = 100;
+
+/** Records a membership change; call it inside the transaction that makes the change, so both or neither stay. */
+export async function recordAudit(db: Kysely<Database>, entry: Omit<NewProjectAuditEntry, "id" | "createdAt">): Promise<void> {
+  await db.insertInto("projectAudit").values(entry).execute();
+}
+
+export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: string): Promise<AuditEntryDto[]> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "members:audit");
+  const rows = await db
+    .selectFrom("projectAudit as a")
+    .leftJoin("users as actor", "actor.id", "a.actorId")
+    .leftJoin("users as target", "target.id", "a.targetUserId")
+    .select([
+      "a.id",
+      "a.createdAt",
+      "a.action",
+      "a.actorId",
+      "actor.name as actorName",
+      "a.targetUserId",
+      "target.name as targetName",
+      "a.targetEmail",
+      "a.role",
+      "a.previousRole",
+    ])
+    .where("a.projectId", "=", projectId)
+    .orderBy("a.createdAt", "desc")
+    .orderBy("a.id", "desc")
+    .limit(AUDIT_PAGE_SIZE)
+    .execute();
+  return rows.map((r) => ({
+    id: r.id,
+    at: r.createdAt.toISOString(),
+    action: r.action,
+    actor: r.actorId && r.actorName ? { id: r.actorId, name: r.actorName } : null,
+    target: { userId: r.targetUserId, name: r.targetName, email: r.targetEmail },
+    role: r.role,
+    previousRole: r.previousRole,
+  }));
+}

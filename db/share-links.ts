@@ -1,0 +1,143 @@
+import "server-only";
+import type { Kysely } from "kysely";
+import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
+import { type Actor, assertProjectAccess, assertShareLinkAccess } from "./access";
+import { conflict, notFound } from "./errors";
+import { isUuid } from "./ids";
+import { roleInProject } from "./members";
+import { assertScenarioInProject, type PersonDto } from "./scenarios";
+import { hashToken, newToken } from "./tokens";
+import type { Database } from "./schema";
+
+export interface ShareLinkDto {
+  id: string;
+  label: string;
+  status: "active" | "expired" | "revoked";
+  createdAt: string;
+  createdBy: PersonDto | null;
+  expiresAt: string | null;
+  revokedAt: string | null;
+  viewCount: number;
+  lastViewedAt: string | null;
+}
+
+/** What a share link's holder sees: the scenario and nothing else of its project (no names, no ids). */
+export interface SharedScenarioDto {
+  title: string;
+  backgroundKind: string;
+  version: number;
+  updatedAt: string;
+  document: ScenarioDocument | null;
+  documentIssues: { path: string; message: string }[] | null;
+  /** When the link stops working, if it does. */
+  linkExpiresAt: string | null;
+}
+
+function linkQuery(db: Kysely<Database>, projectId: string, scenarioId: string) {
+  return db
+    .selectFrom("shareLinks as l")
+    .leftJoin("users as u", "u.id", "l.createdBy")
+    .select(["l.id", "l.label", "l.createdAt", "l.createdBy", "u.name as createdByName", "l.expiresAt", "l.revokedAt", "l.viewCount", "l.lastViewedAt"])
+    .where("l.projectId", "=", projectId)
+    .where("l.scenarioId", "=", scenarioId);
+}
+
+type LinkRow = Awaited<ReturnType<ReturnType<typeof linkQuery>["executeTakeFirstOrThrow"]>>;
+
+function toDto(r: LinkRow, now = new Date()): ShareLinkDto {
+  const status = r.revokedAt ? "revoked" : r.expiresAt && r.expiresAt <= now ? "expired" : "active";
+  return {
+    id: r.id,
+    label: r.label,
+    status,
+    createdAt: r.createdAt.toISOString(),
+    createdBy: r.createdBy && r.createdByName ? { id: r.createdBy, name: r.createdByName } : null,
+    expiresAt: r.expiresAt?.toISOString() ?? null,
+    revokedAt: r.revokedAt?.toISOString() ?? null,
+    viewCount: r.viewCount,
+    lastViewedAt: r.lastViewedAt?.toISOString() ?? null,
+  };
+}
+
+async function assertManages(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<void> {
+  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "share:manage");
+  await assertScenarioInProject(db, projectId, scenarioId);
+}
+
+/** Every link of a scenario, live or not, newest first (revoked ones stay listed with their view counts). */
+export async function listShareLinks(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<ShareLinkDto[]> {
+  await assertManages(db, actor, projectId, scenarioId);
+  const rows = await linkQuery(db, projectId, scenarioId).orderBy("l.createdAt", "desc").orderBy("l.id").execute();
+  return rows.map((r) => toDto(r));
+}
+
+/** Creates a read-only link; the token is returned once, here, and only its hash is kept. */
+export async function createShareLink(
+  db: Kysely<Database>,
+  actor: Actor,
+  projectId: string,
+  scenarioId: string,
+  input: { label: string; expiresInDays?: number | null },
+): Promise<{ link: ShareLinkDto; token: string }> {
+  await assertManages(db, actor, projectId, scenarioId);
+  const token = newToken();
+  const expiresAt = input.expiresInDays ? new Date(Date.now() + input.expiresInDays * 24 * 3600_000) : null;
+  const { id } = await db
+    .insertInto("shareLinks")
+    .values({ projectId, scenarioId, label: input.label, tokenHash: hashToken(token), createdBy: actor.userId, expiresAt })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  return { link: toDto(await linkQuery(db, projectId, scenarioId).where("l.id", "=", id).executeTakeFirstOrThrow()), token };
+}
+
+export async function revokeShareLink(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string, linkId: string): Promise<void> {
+  await assertManages(db, actor, projectId, scenarioId);
+  if (!isUuid(linkId)) throw notFound("share link");
+  const revoked = await db
+    .updateTable("shareLinks")
+    .set({ revokedAt: new Date() })
+    .where("id", "=", linkId)
+    .where("projectId", "=", projectId)
+    .where("scenarioId", "=", scenarioId)
+    .where("revokedAt", "is", null)
+    .executeTakeFirst();
+  if (revoked.numUpdatedRows > 0n) return;
+  const exists = await linkQuery(db, projectId, scenarioId).where("l.id", "=", linkId).executeTakeFirst();
+  if (!exists) throw notFound("share link");
+  throw conflict("this share link is already revoked");
+}
+
+/**
+ * Opens a share link for its holder, signed in or not: counts the view and answers the scenario as it is now.
+ * A revoked, expired or unknown token is not found.
+ */
+export async function openSharedScenario(db: Kysely<Database>, token: string): Promise<SharedScenarioDto> {
+  const link = await db
+    .selectFrom("shareLinks")
+    .select(["id", "scenarioId", "expiresAt", "revokedAt"])
+    .where("tokenHash", "=", hashToken(token))
+    .executeTakeFirst();
+  assertShareLinkAccess(link, "scenario:read");
+  await db
+    .updateTable("shareLinks")
+    .set((eb) => ({ viewCount: eb("viewCount", "+", 1), lastViewedAt: new Date() }))
+    .where("id", "=", link.id)
+    .execute();
+  const row = await db
+    .selectFrom("scenarios")
+    .select(["title", "backgroundKind", "version", "updatedAt", "document"])
+    .where("id", "=", link.scenarioId)
+    .executeTakeFirst();
+  // The link row cascades with its scenario; this only guards a deletion between the two reads.
+  if (!row) throw notFound("share link");
+  const parsed = parseScenarioDocument(row.document);
+  return {
+    title: row.title,
+    backgroundKind: row.backgroundKind,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+    document: parsed.ok ? parsed.document : null,
+    documentIssues: parsed.ok ? null : parsed.issues,
+    linkExpiresAt: link.expiresAt?.toISOString() ?? null,
+  };
+}

@@ -1,0 +1,13 @@
+/** Reads the fake SMTP server's mailbox API (scripts/smtp-fake.ts), which keeps every message it received. */
+export interface MailboxMessage {
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+/** Every message to this address, newest first. */
+export async function mailboxMessagesTo(address: string): Promise<MailboxMessage[]> {
+  const res = await fetch(`${process.env.BRANCHLINE_MAILBOX_URL}/messages`);
+  const { messages } = (await res.json()) as { messages: MailboxMessage[] };
+  return messages.filter((m) => m.to.includes(address));
+}

@@ -106,6 +106,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
       role="application"
       aria-label="Lab view: branch offsets against lab time; drag or use the arrow keys to move the selected handle"
       data-testid="lab-view"
+      data-handles={JSON.stringify(handles.map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })))}
       style={{ cursor, touchAction: "none", outline: "none" }}
       onPointerDown={onPointerDown}
       onPointerMove={(e) => store.getState().labPointerMove(local(e))}
@@ -159,8 +160,6 @@ export default function LabViewStage({ width, height }: { width: number; height:
           <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
           <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
           <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
-          <Text x={plot.left + 6} y={plot.top + 4} text="A" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchA} wrap="none" />
-          <Text x={plot.left + 20} y={plot.top + 4} text="B" fontSize={12} fontStyle="bold" fontFamily={fonts.sans} fill={palette.branchB} wrap="none" />
           {handles.map((h) => (
             <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
           ))}

@@ -9,7 +9,7 @@ import { useEffect, useMemo, useState } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
-import { compactNumber } from "@/canvas/kernels/diagram/labels";
+import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
 import { currentSweepValue, defaultSweepRange } from "@/canvas/kernels/sweep-range";
 import { spawnComputeWorker } from "@/canvas/worker/spawn";
 import { buttonStyles } from "@/components/ui/styles";
@@ -163,7 +163,7 @@ export function SweepPanel() {
                   type="number"
                   scale="log"
                   domain={["dataMin", "dataMax"]}
-                  tickFormatter={(v: number) => formatQuantity(v, dimension, { digits: 2 })}
+                  tickFormatter={(v: number) => compactQuantity(v, dimension)}
                   tick={{ fontSize: 11 }}
                   label={{ value: PARAMETER_WORDS[parameter], position: "insideBottom", offset: -14, fontSize: 11 }}
                 />

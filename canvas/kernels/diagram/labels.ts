@@ -10,7 +10,7 @@ export type RadiusLabelStyle = "radius" | "distance-from-horizon" | "above-horiz
 
 /**
  * The label of a curve of constant radius. Near a horizon every radius prints alike ("29.5 km"), so there the label
- * gives the distance from the horizon instead (r_s + 3 m, r_H − 3 m).
+ * gives the distance from the horizon instead (rₛ + 3 m, c/H − 3 m).
  */
 export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRadiusMetres: number | null): string {
   switch (style) {
@@ -19,9 +19,9 @@ export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRad
     case "distance-from-horizon":
       return `ξ = ${compactQuantity(rMetres, "length")}`;
     case "above-horizon":
-      return `r_s + ${compactQuantity(rMetres - (horizonRadiusMetres ?? 0), "length")}`;
+      return `r = rₛ + ${compactQuantity(rMetres - (horizonRadiusMetres ?? 0), "length")}`;
     case "below-horizon":
-      return `r_H − ${compactQuantity((horizonRadiusMetres ?? 0) - rMetres, "length")}`;
+      return `r = c/H − ${compactQuantity((horizonRadiusMetres ?? 0) - rMetres, "length")}`;
   }
 }
 

@@ -19,9 +19,9 @@
  */
 import type { MotionWindow, SeparationHistory } from "../protocols/types";
 import type { Convergence } from "../result";
-import { rampKernel, rampWeight, thermalCorrectionWeight, type ChannelDefinition } from "../spectra/channels";
+import { fillRampWeightsOnGrid, rampKernel, thermalCorrectionWeight, type ChannelDefinition } from "../spectra/channels";
 import { crossTerm } from "../spectra/cross-term";
-import { integrateGaussLegendre } from "../spectra/gauss-legendre";
+import { gaussLegendre } from "../spectra/gauss-legendre";
 import { groupWindows, type WindowGroup } from "../spectra/window-groups";
 import { PADDING_FACTOR, windowSpectrum, type SpectrumLevel } from "../spectra/window-spectrum";
 
@@ -62,30 +62,58 @@ function inertialReferenceIntegral(p: number, c0: number, c2: number): number {
   return (c0 * factorial(a - 1)) / (2 * s ** (p + 1)) + (c2 * factorial(a)) / (2 * s ** (p + 3));
 }
 
-/** ∫₀^∞ corr(rΩ) R(Ω) dΩ on panels that halve towards Ω = 0, where the thermal correction has its structure. */
-function thermalReferenceIntegral(correction: (omega: number) => number, scale: number, alphaBar: number, c0: number, c2: number): number {
-  const s = REFERENCE_WIDTH;
-  const top = 7 / s;
-  const reference = (omega: number) => correction(scale * omega) * (c0 + c2 * omega * omega) * Math.exp(-s * s * omega * omega);
+/** ∫₀^∞ corr(rΩ) e^{−s²Ω²} dΩ and ∫₀^∞ corr(rΩ) Ω² e^{−s²Ω²} dΩ, whose combination c₀J₀ + c₂J₂ is the thermal part of R's integral. */
+interface ThermalReferenceMoments {
+  zeroth: number;
+  second: number;
+}
+
+const THERMAL_REFERENCE_ORDER = 12;
+
+/**
+ * The two moments on panels that halve towards Ω = 0, where the thermal correction has its structure; one pass
+ * evaluates the correction once per node for both, so the fine and the coarse level share them.
+ */
+function thermalReferenceMoments(correction: (omega: number) => number, scale: number, alphaBar: number): ThermalReferenceMoments {
+  const s2 = REFERENCE_WIDTH * REFERENCE_WIDTH;
+  const top = 7 / REFERENCE_WIDTH;
+  const { nodes, weights } = gaussLegendre(THERMAL_REFERENCE_ORDER);
+  const moments = { zeroth: 0, second: 0 };
+  const addPanel = (a: number, b: number) => {
+    const half = (b - a) / 2;
+    const mid = (a + b) / 2;
+    for (let i = 0; i < THERMAL_REFERENCE_ORDER; i++) {
+      const omega = mid + half * nodes[i];
+      const term = weights[i] * half * correction(scale * omega) * Math.exp(-s2 * omega * omega);
+      moments.zeroth += term;
+      moments.second += term * omega * omega;
+    }
+  };
   const finest = 1e-3 * Math.min(alphaBar / scale, top);
-  let sum = 0;
   let hi = top;
   for (let k = 0; k < 80 && hi > finest; k++) {
-    sum += integrateGaussLegendre(reference, hi / 2, hi, 12);
+    addPanel(hi / 2, hi);
     hi /= 2;
   }
-  return sum + integrateGaussLegendre(reference, 0, hi, 12);
+  addPanel(0, hi);
+  return moments;
 }
+
+/** Scratch for the weights on the grid, one per length: filled and consumed within one group of one level. */
+const weightBuffers = new Map<number, Float64Array>();
 
 /** w̄(rΩ_j, ᾱ) on the FFT grid, shared by the fine and the coarse level. */
 function weightsOnGrid(definition: ChannelDefinition, alphaBar: number, scale: number, step: number, length: number): Float64Array {
-  const weight = rampWeight(definition, alphaBar);
-  const weights = new Float64Array(length);
-  for (let j = 0; j < length; j++) weights[j] = weight(scale * j * step);
+  let weights = weightBuffers.get(length);
+  if (!weights) {
+    weights = new Float64Array(length);
+    weightBuffers.set(length, weights);
+  }
+  fillRampWeightsOnGrid(definition, alphaBar, scale * step, weights);
   return weights;
 }
 
-function groupIntegral(level: SpectrumLevel, weights: Float64Array, step: number, definition: ChannelDefinition, scale: number, alphaBar: number): number {
+function groupIntegral(level: SpectrumLevel, weights: Float64Array, step: number, definition: ChannelDefinition, scale: number, thermal: ThermalReferenceMoments | null): number {
   const [mu0, mu1, mu2] = level.moments;
   const c0 = mu0 * mu0;
   const c2 = mu1 * mu1 - mu0 * mu2 + c0 * REFERENCE_WIDTH * REFERENCE_WIDTH;
@@ -103,7 +131,7 @@ function groupIntegral(level: SpectrumLevel, weights: Float64Array, step: number
   }
   trapezoid *= step;
   let reference = scale ** definition.power * inertialReferenceIntegral(definition.power, c0, c2);
-  if (alphaBar > 0) reference += thermalReferenceIntegral(thermalCorrectionWeight(definition, alphaBar), scale, alphaBar, c0, c2);
+  if (thermal) reference += c0 * thermal.zeroth + c2 * thermal.second;
   return scale * (trapezoid + reference);
 }
 
@@ -127,8 +155,9 @@ function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, ref
     const spectrum = windowSpectrum(group.window, definition, n);
     const scale = referenceSeconds / group.window.durationSeconds;
     const weights = weightsOnGrid(definition, alphaBar, scale, spectrum.frequencyStep, spectrum.fine.power.length);
-    fine += groupIntegral(spectrum.fine, weights, spectrum.frequencyStep, definition, scale, alphaBar);
-    coarse += groupIntegral(spectrum.coarse, weights, spectrum.frequencyStep, definition, scale, alphaBar);
+    const thermal = alphaBar > 0 ? thermalReferenceMoments(thermalCorrectionWeight(definition, alphaBar), scale, alphaBar) : null;
+    fine += groupIntegral(spectrum.fine, weights, spectrum.frequencyStep, definition, scale, thermal);
+    coarse += groupIntegral(spectrum.coarse, weights, spectrum.frequencyStep, definition, scale, thermal);
   }
   const kernel = rampKernel(definition, alphaBar);
   for (let g = 0; g < groups.length; g++) {

@@ -94,11 +94,12 @@ function xCothXMinusOne(x: number): number {
 }
 
 /**
- * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K, for many Ω at one ᾱ. ᾱ = 0 gives Ω^p exactly.
+ * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K at one ᾱ, as a function of Ω and 1/Ω (so that a grid
+ * can supply 1/Ω from a table). ᾱ below INERTIAL_BELOW gives Ω^p exactly.
  * Two forms, each free of cancellation where it is used: x = πΩ/ᾱ < 1, (ᾱ/πΩ²)[P(xcothx − 1) + (P − P₀)];
- * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀].
+ * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀], whose Bose factor is dropped beyond x = 350 (below e⁻⁷⁰⁰).
  */
-export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
+function rampWeightOf(definition: ChannelDefinition, alphaBar: number): (omega: number, inverseOmega: number) => number {
   const p = definition.power;
   if (alphaBar < INERTIAL_BELOW) return p === 1 ? (omega) => omega : (omega) => omega ** p;
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
@@ -107,21 +108,46 @@ export function rampWeight(definition: ChannelDefinition, alphaBar: number): (om
   const c2 = coefficients[2] ?? 0;
   const c3 = coefficients[3] ?? 0;
   if (coefficients.length > 4) throw new RangeError("thermal polynomials of degree above 3 are not implemented");
-  const minusZero = (omega2: number) => omega2 * (c1 + omega2 * (c2 + omega2 * c3));
-  return (omega) => {
+  const atOrigin = (alphaBar / Math.PI) * ((atZero * Math.PI * Math.PI) / (3 * alphaBar * alphaBar) + c1);
+  const xPerOmega = Math.PI / alphaBar;
+  const tailFactor = alphaBar / Math.PI;
+  return (omega, inverseOmega) => {
+    if (omega === 0) return atOrigin;
     const omega2 = omega * omega;
-    const x = (Math.PI * omega) / alphaBar;
-    if (x < 1) {
-      if (omega === 0) return (alphaBar / Math.PI) * ((atZero * Math.PI * Math.PI) / (3 * alphaBar * alphaBar) + coefficients[1]);
-      const polynomial = atZero + minusZero(omega2);
-      return (alphaBar / (Math.PI * omega2)) * (polynomial * xCothXMinusOne(x) + minusZero(omega2));
-    }
-    const polynomial = atZero + minusZero(omega2);
-    const boseTail = x > 350 ? 0 : (2 * x) / Math.expm1(2 * x);
-    return polynomial / omega + (alphaBar / (Math.PI * omega2)) * (polynomial * boseTail - atZero);
+    const tail = tailFactor * inverseOmega * inverseOmega;
+    const minusZero = omega2 * (c1 + omega2 * (c2 + omega2 * c3));
+    const polynomial = atZero + minusZero;
+    const x = xPerOmega * omega;
+    if (x < 1) return tail * (polynomial * xCothXMinusOne(x) + minusZero);
+    if (x > 350) return polynomial * inverseOmega - tail * atZero;
+    return polynomial * inverseOmega + tail * (polynomial * ((2 * x) / Math.expm1(2 * x)) - atZero);
   };
 }
 
+/** w̄(Ω, ᾱ) for many Ω at one ᾱ (rampWeightOf). */
+export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
+  const weight = rampWeightOf(definition, alphaBar);
+  return (omega) => weight(omega, 1 / omega);
+}
+
+/** 1/j for j ≥ 1 (index 0 unused), grown on demand: a constant table, so a grid needs no division per point. */
+let reciprocals = new Float64Array(0);
+
+function reciprocalTable(length: number): Float64Array {
+  if (reciprocals.length < length) {
+    reciprocals = new Float64Array(length);
+    for (let j = 1; j < length; j++) reciprocals[j] = 1 / j;
+  }
+  return reciprocals;
+}
+
+/** w̄(j·step, ᾱ) for j = 0 … out.length − 1, written into `out`: the ramp integral's grid. */
+export function fillRampWeightsOnGrid(definition: ChannelDefinition, alphaBar: number, step: number, out: Float64Array): void {
+  const weight = rampWeightOf(definition, alphaBar);
+  const inverse = reciprocalTable(out.length);
+  const inverseStep = 1 / step;
+  for (let j = 0; j < out.length; j++) out[j] = weight(j * step, inverse[j] * inverseStep);
+}
 
 /** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */
 export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {

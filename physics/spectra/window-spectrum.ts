@@ -69,8 +69,12 @@ function fillCompositeSamples(window: MotionWindow & { parts: readonly MotionWin
   }
 }
 
+/**
+ * Fills input[0 … samples − 1]. The transform buffer of each length is only ever used with length/PADDING_FACTOR
+ * samples, so its zero padding is never written and stays zero between calls.
+ */
 function fillSamples(window: MotionWindow, definition: ChannelDefinition, samples: number, input: Float64Array): void {
-  input.fill(0);
+  input.fill(0, 0, samples);
   if (isComposite(window) && window.rate) {
     fillCompositeSamples(window, definition, samples, input);
     return;
@@ -122,10 +126,16 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
   fft.realTransform(output, input);
   const half = length / 2;
   const norm = 1 / (samples * samples);
-  const fine = new Float64Array(half + 1);
-  for (let j = 0; j <= half; j++) fine[j] = (output[2 * j] ** 2 + output[2 * j + 1] ** 2) * norm;
   const quarter = length / 4;
-  const coarse = new Float64Array(quarter + 1);
+  // One allocation for both levels.
+  const powers = new Float64Array(half + 1 + quarter + 1);
+  const fine = powers.subarray(0, half + 1);
+  const coarse = powers.subarray(half + 1);
+  for (let j = 0; j <= half; j++) {
+    const re = output[2 * j];
+    const im = output[2 * j + 1];
+    fine[j] = (re * re + im * im) * norm;
+  }
   for (let j = 0; j <= quarter; j++) {
     const re = output[2 * j] + output[2 * (half - j)];
     const im = output[2 * j + 1] - output[2 * (half - j) + 1];

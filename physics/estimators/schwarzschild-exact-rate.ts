@@ -34,12 +34,14 @@ import {
 import { electromagneticChannel, log10HoldRateCoefficient } from "../spectra/channels";
 import { c } from "../constants";
 import {
+  describeEstimate,
   log10SourceAmplitude,
   publishedEstimateRate,
   type EstimatedRate,
   type SchwarzschildHorizonRate,
   type SchwarzschildHorizonRateInput,
   type SchwarzschildHorizonRateModel,
+  type SchwarzschildRateLab,
 } from "./schwarzschild-horizon-rate";
 
 const severityStatus: Record<SchwarzschildRateFlag["severity"], FlagStatus> = { info: "note", caution: "caution" };
@@ -156,10 +158,17 @@ function farZoneGravityRate(input: SchwarzschildHorizonRateInput, estimate: Esti
   };
 }
 
+function describeExact(lab: SchwarzschildRateLab): Pick<SchwarzschildHorizonRate, "regime" | "sourceKey"> {
+  if (lab.channel === "electromagnetic") return { regime: "exact", sourceKey: "schwarzschild-exact-em" };
+  const inFarZone = lab.labArealRadiusMetres / massLengthMetres(lab.massKg) >= GRAVITY_FAR_ZONE_MIN_B_OVER_M;
+  return inFarZone ? { regime: "far-zone", sourceKey: "schwarzschild-exact-gw-far-zone" } : describeEstimate(lab);
+}
+
 export const exactHorizonRateModel: SchwarzschildHorizonRateModel = {
   name: "exact horizon-method rate (electromagnetism, every radius; gravity, far zone), with the published estimate beside it",
   rate(input) {
     const estimate = publishedEstimateRate(input);
     return input.channel === "electromagnetic" ? exactElectromagneticRate(input, estimate) : farZoneGravityRate(input, estimate);
   },
+  describe: describeExact,
 };

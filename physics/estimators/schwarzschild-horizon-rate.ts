@@ -52,15 +52,24 @@ export interface SchwarzschildHorizonRate extends RateWithSource {
   flags: ValidityFlag[];
 }
 
+/** Where a lab and channel sit, without a source: what `rate` would report as regime and source. */
+export type SchwarzschildRateLab = Omit<SchwarzschildHorizonRateInput, "chargeOrEffectiveMass" | "separationMetres">;
+
 export interface SchwarzschildHorizonRateModel {
   name: string;
   rate(input: SchwarzschildHorizonRateInput): SchwarzschildHorizonRate;
+  /** The regime and source `rate` reports for this lab and channel (for a channel that is exactly zero). */
+  describe(lab: SchwarzschildRateLab): Pick<RateWithSource, "regime" | "sourceKey">;
 }
 
 export const NEAR_HORIZON_RADIUS_RATIO = 1.01;
 export const FAR_RADIUS_RATIO = 10;
 
 const log10 = Math.log10;
+const LOG10_G = log10(G);
+const LOG10_C = log10(c);
+const LOG10_HBAR = log10(hbar);
+const LOG10_EPSILON0 = log10(epsilon0);
 
 /** log10 of the source amplitude A: q·d (C m) or m_eff·d² (kg m²). */
 export function log10SourceAmplitude(input: SchwarzschildHorizonRateInput): number {
@@ -71,8 +80,8 @@ export function log10SourceAmplitude(input: SchwarzschildHorizonRateInput): numb
 function farRate(input: SchwarzschildHorizonRateInput, log10Source: number): number {
   const killing =
     input.channel === "electromagnetic"
-      ? 3 * log10(G) + 3 * log10(input.massKg) + 2 * log10Source - log10(epsilon0) - log10(hbar) - 6 * log10(c) - 6 * log10(input.labArealRadiusMetres)
-      : 6 * log10(G) + 5 * log10(input.massKg) + 2 * log10Source - log10(hbar) - 10 * log10(c) - 10 * log10(input.labArealRadiusMetres);
+      ? 3 * LOG10_G + 3 * log10(input.massKg) + 2 * log10Source - LOG10_EPSILON0 - LOG10_HBAR - 6 * LOG10_C - 6 * log10(input.labArealRadiusMetres)
+      : 6 * LOG10_G + 5 * log10(input.massKg) + 2 * log10Source - LOG10_HBAR - 10 * LOG10_C - 10 * log10(input.labArealRadiusMetres);
   return killing - log10(input.labRedshiftFactor);
 }
 
@@ -81,22 +90,34 @@ function nearRate(input: SchwarzschildHorizonRateInput, log10Source: number): nu
   return 2 * log10Source + log10HoldRateCoefficient(definition, input.labProperAccelerationMetresPerSecondSquared / c);
 }
 
+function estimateRegime(lab: SchwarzschildRateLab): EstimateRegime {
+  const ratio = (lab.labArealRadiusMetres * c * c) / (2 * G * lab.massKg);
+  return ratio >= FAR_RADIUS_RATIO ? "far" : ratio <= NEAR_HORIZON_RADIUS_RATIO ? "near-horizon" : "interpolated";
+}
+
+const ESTIMATE_KEYS = {
+  electromagnetic: { far: "schwarzschild-far-em", "near-horizon": "schwarzschild-near-em", interpolated: "schwarzschild-interpolated-em" },
+  gravitational: { far: "schwarzschild-far-gw", "near-horizon": "schwarzschild-near-gw", interpolated: "schwarzschild-interpolated-gw" },
+} as const satisfies Record<Channel, Record<EstimateRegime, SourceKey>>;
+
+export function describeEstimate(lab: SchwarzschildRateLab): { regime: EstimateRegime; sourceKey: SourceKey } {
+  const regime = estimateRegime(lab);
+  return { regime, sourceKey: ESTIMATE_KEYS[lab.channel][regime] };
+}
+
 /** The published estimates alone, in their regimes. */
 export function publishedEstimateRate(input: SchwarzschildHorizonRateInput): EstimatedRate {
-  const suffix = input.channel === "electromagnetic" ? "em" : "gw";
+  const { regime, sourceKey } = describeEstimate(input);
   const source = log10SourceAmplitude(input);
+  if (regime === "far") return { log10RatePerSecond: farRate(input, source), regime, sourceKey };
+  if (regime === "near-horizon") return { log10RatePerSecond: nearRate(input, source), regime, sourceKey };
   const ratio = (input.labArealRadiusMetres * c * c) / (2 * G * input.massKg);
-  if (ratio >= FAR_RADIUS_RATIO) return { log10RatePerSecond: farRate(input, source), regime: "far", sourceKey: `schwarzschild-far-${suffix}` };
-  if (ratio <= NEAR_HORIZON_RADIUS_RATIO) return { log10RatePerSecond: nearRate(input, source), regime: "near-horizon", sourceKey: `schwarzschild-near-${suffix}` };
   const w = Math.log(ratio / NEAR_HORIZON_RADIUS_RATIO) / Math.log(FAR_RADIUS_RATIO / NEAR_HORIZON_RADIUS_RATIO);
-  return {
-    log10RatePerSecond: (1 - w) * nearRate(input, source) + w * farRate(input, source),
-    regime: "interpolated",
-    sourceKey: `schwarzschild-interpolated-${suffix}`,
-  };
+  return { log10RatePerSecond: (1 - w) * nearRate(input, source) + w * farRate(input, source), regime, sourceKey };
 }
 
 export const publishedEstimateRateModel: SchwarzschildHorizonRateModel = {
   name: "published estimates (far: arXiv:2205.06279; near: Rindler limit), interpolated between",
   rate: (input) => ({ ...publishedEstimateRate(input), estimate: null, flags: [] }),
+  describe: describeEstimate,
 };

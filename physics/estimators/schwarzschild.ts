@@ -23,9 +23,6 @@ import type { SchwarzschildHorizonRateInput, SchwarzschildHorizonRateModel } fro
 
 export type SchwarzschildLab = Omit<SchwarzschildHorizonRateInput, "channel" | "chargeOrEffectiveMass" | "separationMetres">;
 
-/** A unit source, only to learn which regime and source a zero channel would report. */
-const PROBE_SOURCE = { chargeOrEffectiveMass: 1, separationMetres: 1 } as const;
-
 export function schwarzschildEstimate(
   history: SeparationHistory,
   source: ChannelSource,
@@ -35,13 +32,13 @@ export function schwarzschildEstimate(
 ): ChannelEstimate {
   const channel = source.definition.channel;
   if (source.zeroReason) {
-    const probe = model.rate({ ...lab, channel, ...PROBE_SOURCE });
+    const described = model.describe({ ...lab, channel });
     return zeroEstimate(channel, source.zeroReason, {
       rampSourceKey: "schwarzschild-ramps",
-      holdSourceKey: probe.sourceKey,
-      totalSourceKey: probe.sourceKey,
+      holdSourceKey: described.sourceKey,
+      totalSourceKey: described.sourceKey,
       counts: "far-field-and-horizon",
-      regime: probe.regime,
+      regime: described.regime,
     });
   }
   const rate = model.rate({ ...lab, channel, chargeOrEffectiveMass: source.chargeOrEffectiveMass, separationMetres: source.separationMetres });

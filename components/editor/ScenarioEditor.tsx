@@ -7,7 +7,7 @@
  */
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { EditorProvider, useEditorStore } from "@/canvas/EditorProvider";
+import { EditorProvider, useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { useProject, type ProjectDto } from "@/components/api/projects";
 import { useScenario, type ScenarioDto } from "@/components/api/scenarios";
 import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
@@ -31,8 +31,8 @@ export interface ScenarioEditorProps {
   scenarioId: string;
   /** The page a scenario's editor lives at (where "keep mine as a new scenario" goes). */
   editPath(projectId: string, scenarioId: string): string;
-  /** Shown under the editor (e.g. the revision list). */
-  footer?: ReactNode;
+  /** Shown under the editor (the revision list), given the version the editor last loaded or saved. */
+  footer?(version: number): ReactNode;
 }
 
 export function ScenarioEditor({ projectId, scenarioId, editPath, footer }: ScenarioEditorProps) {
@@ -67,12 +67,13 @@ function EditorBody({
   scenario: ScenarioDto;
   document: ScenarioDocument;
   editPath(scenarioId: string): string;
-  footer?: ReactNode;
+  footer?(version: number): ReactNode;
 }) {
   const store = useEditorStore();
   const { saveNow } = useAutosave(store, project.id, scenario.id);
   useBudgetWorker(store);
   useUndoShortcuts(store);
+  const version = useEditor((s) => s.save.baseVersion);
   return (
     <article className="space-y-6" aria-label={`Editor for ${scenario.title}`}>
       <title>{`${scenario.title} · Branchline`}</title>
@@ -93,7 +94,7 @@ function EditorBody({
         </div>
       </div>
       <ConflictDialog projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />
-      {footer}
+      {footer?.(version)}
     </article>
   );
 }

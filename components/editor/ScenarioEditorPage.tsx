@@ -1,11 +1,19 @@
 "use client";
 
-/** The editor as a page body: a client boundary so the route file stays a thin server component. */
+/** The editor as the scenario page's body, with the scenario's revisions below it. */
+import { RevisionList } from "@/components/scenario/RevisionList";
 import { ScenarioEditor } from "./ScenarioEditor";
 
-export const scenarioEditPath = (projectId: string, scenarioId: string) =>
-  `/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}/edit`;
+export const scenarioPath = (projectId: string, scenarioId: string) =>
+  `/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}`;
 
 export function ScenarioEditorPage({ projectId, scenarioId }: { projectId: string; scenarioId: string }) {
-  return <ScenarioEditor projectId={projectId} scenarioId={scenarioId} editPath={scenarioEditPath} />;
+  return (
+    <ScenarioEditor
+      projectId={projectId}
+      scenarioId={scenarioId}
+      editPath={scenarioPath}
+      footer={(version) => <RevisionList projectId={projectId} scenarioId={scenarioId} currentVersion={version} />}
+    />
+  );
 }

@@ -6,7 +6,9 @@
  * silently. Leaving the page with unsaved changes asks first.
  */
 import { useCallback, useEffect, useRef } from "react";
+import { useQueryClient } from "@tanstack/react-query";
 import { ApiError, messageOf } from "@/components/api/client";
+import { scenarioKeys } from "@/components/api/scenarios";
 import type { EditorStore } from "@/canvas/store/createEditorStore";
 import { hasUnsavedChanges } from "@/canvas/store/selectors";
 import { putScenarioDocument } from "./save-scenario";
@@ -15,6 +17,7 @@ export const AUTOSAVE_DELAY_MS = 800;
 
 export function useAutosave(store: EditorStore, projectId: string, scenarioId: string): { saveNow(): void } {
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const queryClient = useQueryClient();
 
   const attempt = useCallback(async () => {
     const state = store.getState();
@@ -24,6 +27,8 @@ export function useAutosave(store: EditorStore, projectId: string, scenarioId: s
     try {
       const saved = await putScenarioDocument(projectId, scenarioId, state.save.baseVersion, document);
       store.getState().saveSucceeded(saved.version, document);
+      queryClient.setQueryData(scenarioKeys.one(projectId, scenarioId), saved);
+      void queryClient.invalidateQueries({ queryKey: scenarioKeys.revisions(projectId, scenarioId) });
     } catch (error) {
       if (error instanceof ApiError && error.status === 409) {
         store.getState().saveConflicted(Number(error.details.currentVersion ?? state.save.baseVersion + 1));
@@ -34,7 +39,7 @@ export function useAutosave(store: EditorStore, projectId: string, scenarioId: s
     }
     // Edits made while the request was out are saved next, from the new version.
     if (hasUnsavedChanges(store.getState())) timer.current = setTimeout(attempt, AUTOSAVE_DELAY_MS);
-  }, [store, projectId, scenarioId]);
+  }, [store, projectId, scenarioId, queryClient]);
 
   useEffect(() => {
     const schedule = () => {

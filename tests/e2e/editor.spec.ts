@@ -35,7 +35,7 @@ function blackHoleScenario() {
   };
 }
 
-const editorPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/edit`;
+const editorPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}`;
 
 async function currentBudget(page: Page) {
   await expect(page.getByTestId("budget")).toHaveAttribute("data-state", "current");

@@ -109,7 +109,7 @@ describe("authorization table", () => {
     for (const caller of callers) {
       const expected = caller === "linkHolder" ? c.expected.linkHolder! : c.expected[caller];
       it(`${c.method} ${c.file} as ${caller} answers ${expected}`, async () => {
-        const mod = await import(`../../app/api/${c.file}`);
+        const mod = await import(/* @vite-ignore */ `../../app/api/${c.file}`);
         const f = await projectFixture();
         const x = c.extras || caller === "linkHolder" ? await teamExtras(f) : noExtras;
         const holding = caller === "linkHolder" ? { headers: { "x-share-token": x.linkToken }, query: { ...c.query?.(f), share: x.linkToken } } : { query: c.query?.(f) };
@@ -149,7 +149,7 @@ describe("authorization table", () => {
   it("covers every method each route exports", async () => {
     const uncovered: string[] = [];
     for (const file of routeFiles().filter((f) => !(f in exempt))) {
-      const mod = await import(`../../app/api/${file}`);
+      const mod = await import(/* @vite-ignore */ `../../app/api/${file}`);
       for (const method of ["GET", "POST", "PUT", "PATCH", "DELETE"]) {
         if (typeof mod[method] === "function" && !cases.some((c) => c.file === file && c.method === method)) uncovered.push(`${method} ${file}`);
       }

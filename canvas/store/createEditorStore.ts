@@ -121,13 +121,9 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
       labKeyDown: (event) => dragHandleTool.keyDown(tool, event),
 
       loadDocument(document, version) {
-        const { readOnly, labViewSize, sweep } = get();
-        set((s) => ({
-          ...initialData({ document, version, readOnly }),
-          labViewSize,
-          sweep: { ...initialData({ document, version, readOnly }).sweep, parameter: sweep.parameter },
-          revision: s.revision + 1,
-        }));
+        const { readOnly, labViewSize, sweep, revision } = get();
+        const fresh = initialData({ document, version, readOnly });
+        set({ ...fresh, labViewSize, sweep: { ...fresh.sweep, parameter: sweep.parameter }, revision: revision + 1 });
       },
 
       saveStarted: () => set((s) => ({ save: { ...s.save, status: "saving", message: null } })),

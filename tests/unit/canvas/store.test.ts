@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { segmentTimes, type SegmentsProtocol } from "@/canvas/kernels/timeline";
 import { HANDLE_IDS } from "@/canvas/kernels/lab-view/handles";
+import { hasUnsavedChanges } from "@/canvas/store/selectors";
 import { createHarness, framesOf, schwarzschildDocument } from "./harness";
 
 const protocolOf = (h: ReturnType<typeof createHarness>) => h.document().protocol as SegmentsProtocol;
@@ -130,5 +131,29 @@ describe("the editor store", () => {
     const start = h.store.getState().revision;
     h.drag("recombination-end", framesOf(50, 0, 5));
     expect(h.store.getState().revision - start).toBeGreaterThanOrEqual(5);
+  });
+});
+
+describe("saving state in the store", () => {
+  it("counts the document as unsaved after an edit and saved again once the server has that document", () => {
+    const h = createHarness();
+    h.drag("hold-end", framesOf(-30, 0, 3));
+    expect(hasUnsavedChanges(h.store.getState())).toBe(true);
+    h.store.getState().saveSucceeded(2, h.document());
+    expect(hasUnsavedChanges(h.store.getState())).toBe(false);
+    expect(h.store.getState().save.baseVersion).toBe(2);
+  });
+
+  it("starts afresh from the server's document after a conflict is resolved by reloading theirs", () => {
+    const h = createHarness();
+    h.drag("hold-end", framesOf(-30, 0, 3));
+    h.store.getState().saveConflicted(5);
+    expect(h.store.getState().save.status).toBe("conflict");
+    const theirs = schwarzschildDocument();
+    h.store.getState().loadDocument(theirs, 5);
+    const s = h.store.getState();
+    expect(s.document).toBe(theirs);
+    expect(s.save).toMatchObject({ status: "idle", baseVersion: 5 });
+    expect(s.history.past).toHaveLength(0);
   });
 });

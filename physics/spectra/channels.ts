@@ -93,41 +93,63 @@ function xCothXMinusOne(x: number): number {
   return x / Math.tanh(x) - 1;
 }
 
-/**
- * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K at one ᾱ, as a function of Ω and 1/Ω (so that a grid
- * can supply 1/Ω from a table). ᾱ below INERTIAL_BELOW gives Ω^p exactly.
- * Two forms, each free of cancellation where it is used: x = πΩ/ᾱ < 1, (ᾱ/πΩ²)[P(xcothx − 1) + (P − P₀)];
- * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀], whose Bose factor is dropped beyond x = 350 (below e⁻⁷⁰⁰).
- */
-function rampWeightOf(definition: ChannelDefinition, alphaBar: number): (omega: number, inverseOmega: number) => number {
-  const p = definition.power;
-  if (alphaBar < INERTIAL_BELOW) return p === 1 ? (omega) => omega : (omega) => omega ** p;
+/** The constants of w̄(·, ᾱ) at one ᾱ: P(Ω²) = P₀ + c₁Ω² + c₂Ω⁴ + c₃Ω⁶, and the factors of its two forms. */
+interface ThermalWeightParameters {
+  atZero: number;
+  c1: number;
+  c2: number;
+  c3: number;
+  /** w̄(0, ᾱ), the limit of the low-frequency form. */
+  atOrigin: number;
+  /** π/ᾱ, so that x = πΩ/ᾱ is one product. */
+  xPerOmega: number;
+  /** ᾱ/π. */
+  tailFactor: number;
+}
+
+/** null below INERTIAL_BELOW, where w̄ = Ω^p exactly. */
+function thermalWeightParameters(definition: ChannelDefinition, alphaBar: number): ThermalWeightParameters | null {
+  if (alphaBar < INERTIAL_BELOW) return null;
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
-  // P − P₀ as a polynomial in Ω² without constant term (degree 1 for EM, 2 for gravity), by Horner's rule.
-  const c1 = coefficients[1];
-  const c2 = coefficients[2] ?? 0;
-  const c3 = coefficients[3] ?? 0;
   if (coefficients.length > 4) throw new RangeError("thermal polynomials of degree above 3 are not implemented");
-  const atOrigin = (alphaBar / Math.PI) * ((atZero * Math.PI * Math.PI) / (3 * alphaBar * alphaBar) + c1);
-  const xPerOmega = Math.PI / alphaBar;
-  const tailFactor = alphaBar / Math.PI;
-  return (omega, inverseOmega) => {
-    if (omega === 0) return atOrigin;
-    const omega2 = omega * omega;
-    const tail = tailFactor * inverseOmega * inverseOmega;
-    const minusZero = omega2 * (c1 + omega2 * (c2 + omega2 * c3));
-    const polynomial = atZero + minusZero;
-    const x = xPerOmega * omega;
-    if (x < 1) return tail * (polynomial * xCothXMinusOne(x) + minusZero);
-    if (x > 350) return polynomial * inverseOmega - tail * atZero;
-    return polynomial * inverseOmega + tail * (polynomial * ((2 * x) / Math.expm1(2 * x)) - atZero);
+  const c1 = coefficients[1];
+  return {
+    atZero,
+    c1,
+    c2: coefficients[2] ?? 0,
+    c3: coefficients[3] ?? 0,
+    atOrigin: (alphaBar / Math.PI) * ((atZero * Math.PI * Math.PI) / (3 * alphaBar * alphaBar) + c1),
+    xPerOmega: Math.PI / alphaBar,
+    tailFactor: alphaBar / Math.PI,
   };
 }
 
-/** w̄(Ω, ᾱ) for many Ω at one ᾱ (rampWeightOf). */
+/**
+ * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K, from Ω and 1/Ω (so that a grid can supply 1/Ω from a
+ * table). Two forms, each free of cancellation where it is used: x = πΩ/ᾱ < 1, (ᾱ/πΩ²)[P(xcothx − 1) + (P − P₀)];
+ * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀], whose Bose factor is dropped beyond x = 350 (below e⁻⁷⁰⁰).
+ * A plain function of its parameters rather than a closure: the grid loop calls it 10⁴ times, and a closure made
+ * per call is not inlined there (about four times slower).
+ */
+function thermalWeightAt(w: ThermalWeightParameters, omega: number, inverseOmega: number): number {
+  if (omega === 0) return w.atOrigin;
+  const omega2 = omega * omega;
+  const tail = w.tailFactor * inverseOmega * inverseOmega;
+  // P − P₀ without its constant term (degree 1 for EM, 2 for gravity), by Horner's rule.
+  const minusZero = omega2 * (w.c1 + omega2 * (w.c2 + omega2 * w.c3));
+  const polynomial = w.atZero + minusZero;
+  const x = w.xPerOmega * omega;
+  if (x < 1) return tail * (polynomial * xCothXMinusOne(x) + minusZero);
+  if (x > 350) return polynomial * inverseOmega - tail * w.atZero;
+  return polynomial * inverseOmega + tail * (polynomial * ((2 * x) / Math.expm1(2 * x)) - w.atZero);
+}
+
+/** w̄(Ω, ᾱ) for many Ω at one ᾱ; ᾱ below INERTIAL_BELOW gives Ω^p exactly. */
 export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
-  const weight = rampWeightOf(definition, alphaBar);
-  return (omega) => weight(omega, 1 / omega);
+  const p = definition.power;
+  const thermal = thermalWeightParameters(definition, alphaBar);
+  if (thermal === null) return p === 1 ? (omega) => omega : (omega) => omega ** p;
+  return (omega) => thermalWeightAt(thermal, omega, 1 / omega);
 }
 
 /** 1/j for j ≥ 1 (index 0 unused), grown on demand: a constant table, so a grid needs no division per point. */
@@ -143,10 +165,15 @@ function reciprocalTable(length: number): Float64Array {
 
 /** w̄(j·step, ᾱ) for j = 0 … out.length − 1, written into `out`: the ramp integral's grid. */
 export function fillRampWeightsOnGrid(definition: ChannelDefinition, alphaBar: number, step: number, out: Float64Array): void {
-  const weight = rampWeightOf(definition, alphaBar);
+  const thermal = thermalWeightParameters(definition, alphaBar);
+  const p = definition.power;
+  if (thermal === null) {
+    for (let j = 0; j < out.length; j++) out[j] = (j * step) ** p;
+    return;
+  }
   const inverse = reciprocalTable(out.length);
   const inverseStep = 1 / step;
-  for (let j = 0; j < out.length; j++) out[j] = weight(j * step, inverse[j] * inverseStep);
+  for (let j = 0; j < out.length; j++) out[j] = thermalWeightAt(thermal, j * step, inverse[j] * inverseStep);
 }
 
 /** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */

@@ -92,3 +92,9 @@ export function withLabPlacement(document: ScenarioDocument, placement: LabPlace
       return { ...document, lab: { placement, properDistanceMetres: background.labProperDistanceToHorizonMetres ?? 1 } };
   }
 }
+
+/** A recombination time traded against the hold (the total duration kept), as the optimiser proposes it. */
+export function withRecombinationAndHold(document: ScenarioDocument, recombinationSeconds: number, holdSeconds: number): ScenarioDocument {
+  if (document.protocol.kind !== "segments") return document;
+  return withSegmentDuration(withSegmentDuration(document, "recombination", recombinationSeconds), "hold", holdSeconds);
+}

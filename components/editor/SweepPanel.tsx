@@ -10,6 +10,7 @@ import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, Responsive
 import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
+import { withRecombinationAndHold } from "@/canvas/kernels/document-edits";
 import { currentSweepValue, defaultSweepRange } from "@/canvas/kernels/sweep-range";
 import { spawnComputeWorker } from "@/canvas/worker/spawn";
 import { buttonStyles } from "@/components/ui/styles";
@@ -76,6 +77,23 @@ export function SweepPanel() {
     );
   };
 
+  const findBest = () => {
+    const state = store.getState();
+    const protocol = state.document.protocol;
+    if (protocol.kind !== "segments") return;
+    const total = protocol.separation.durationSeconds + protocol.hold.durationSeconds + protocol.recombination.durationSeconds;
+    state.sweepStarted(state.revision);
+    runner.run(
+      { kind: "optimise", document: state.document, request: { totalDurationSeconds: total, tradeAgainst: "hold" } },
+      { optimum: (optimum) => store.getState().optimumFound(optimum), failed: (issues) => store.getState().sweepFailed(issues) },
+    );
+  };
+  const optimum = sweep.optimum;
+  const useOptimum = () => {
+    if (!optimum) return;
+    edit("Use the best recombination time", (d) => withRecombinationAndHold(d, optimum.recombinationSeconds, optimum.tradedSeconds));
+  };
+
   const data = (sweep.result?.points ?? [])
     .map((p) => ({ x: p.x, decoherence: p.decoherence.value }))
     .filter((p): p is { x: number; decoherence: number } => p.decoherence !== null && p.decoherence > 0);
@@ -128,6 +146,25 @@ export function SweepPanel() {
           {sweep.status === "running" ? "Sweeping…" : "Run sweep"}
         </button>
       </div>
+      {parameter === "recombination-time" && document.protocol.kind === "segments" && (
+        <div className="mt-3 flex flex-wrap items-center gap-3 text-sm">
+          <button type="button" className={buttonStyles.row} onClick={findBest} disabled={sweep.status === "running"} data-testid="find-best-recombination">
+            Find the best recombination time for the same total duration (trading against the hold)
+          </button>
+          {optimum && (
+            <span className="text-ink-soft" data-testid="best-recombination">
+              Best: {formatQuantity(optimum.recombinationSeconds, "time")} (hold {formatQuantity(optimum.tradedSeconds, "time")}), 𝒟 ={" "}
+              {optimum.decoherence.value === null ? "—" : compactNumber(optimum.decoherence.value, 3)}
+              {optimum.onBoundary && " — at the end of the allowed range"}
+              {!readOnly && (
+                <button type="button" className={`${buttonStyles.row} ml-2`} onClick={useOptimum}>
+                  Use it
+                </button>
+              )}
+            </span>
+          )}
+        </div>
+      )}
       {showProgress && sweep.progress && (
         <div className="mt-3 flex items-center gap-3 text-xs text-ink-soft">
           <progress className="h-2 w-64" max={sweep.progress.total} value={sweep.progress.done} aria-label="Sweep progress" />

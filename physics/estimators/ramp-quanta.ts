@@ -19,7 +19,7 @@
  */
 import type { MotionWindow, SeparationHistory } from "../protocols/types";
 import type { Convergence } from "../result";
-import { fillRampWeightsOnGrid, rampKernel, thermalCorrectionWeight, type ChannelDefinition } from "../spectra/channels";
+import { fillRampWeightsOnGrid, rampKernel, thermalCorrectionAt, thermalWeight, type ChannelDefinition, type ThermalWeight } from "../spectra/channels";
 import { crossTerm } from "../spectra/cross-term";
 import { gaussLegendre } from "../spectra/gauss-legendre";
 import { groupWindows, type WindowGroup } from "../spectra/window-groups";
@@ -74,29 +74,30 @@ const THERMAL_REFERENCE_ORDER = 12;
  * The two moments on panels that halve towards Ω = 0, where the thermal correction has its structure; one pass
  * evaluates the correction once per node for both, so the fine and the coarse level share them.
  */
-function thermalReferenceMoments(correction: (omega: number) => number, scale: number, alphaBar: number): ThermalReferenceMoments {
+function thermalReferenceMoments(weight: ThermalWeight, scale: number, alphaBar: number): ThermalReferenceMoments {
   const s2 = REFERENCE_WIDTH * REFERENCE_WIDTH;
   const top = 7 / REFERENCE_WIDTH;
   const { nodes, weights } = gaussLegendre(THERMAL_REFERENCE_ORDER);
-  const moments = { zeroth: 0, second: 0 };
-  const addPanel = (a: number, b: number) => {
-    const half = (b - a) / 2;
-    const mid = (a + b) / 2;
+  const finest = 1e-3 * Math.min(alphaBar / scale, top);
+  let zeroth = 0;
+  let second = 0;
+  // Panels [hi/2, hi] from the top down, then [0, hi] once hi reaches the finest scale.
+  let hi = top;
+  for (let k = 0; k <= 80; k++) {
+    const lastPanel = k === 80 || hi <= finest;
+    const lo = lastPanel ? 0 : hi / 2;
+    const half = (hi - lo) / 2;
+    const mid = (hi + lo) / 2;
     for (let i = 0; i < THERMAL_REFERENCE_ORDER; i++) {
       const omega = mid + half * nodes[i];
-      const term = weights[i] * half * correction(scale * omega) * Math.exp(-s2 * omega * omega);
-      moments.zeroth += term;
-      moments.second += term * omega * omega;
+      const term = weights[i] * half * thermalCorrectionAt(weight, scale * omega) * Math.exp(-s2 * omega * omega);
+      zeroth += term;
+      second += term * omega * omega;
     }
-  };
-  const finest = 1e-3 * Math.min(alphaBar / scale, top);
-  let hi = top;
-  for (let k = 0; k < 80 && hi > finest; k++) {
-    addPanel(hi / 2, hi);
-    hi /= 2;
+    if (lastPanel) break;
+    hi = lo;
   }
-  addPanel(0, hi);
-  return moments;
+  return { zeroth, second };
 }
 
 /** Scratch for the weights on the grid, one per length: filled and consumed within one group of one level. */
@@ -122,13 +123,15 @@ function groupIntegral(level: SpectrumLevel, weights: Float64Array, step: number
   const last = power.length - 1;
   // Beyond Ω = 7/s the reference is below e⁻⁴⁹ of its peak: not worth an exp per bin.
   const referenceBins = Math.min(last, Math.ceil(7 / (REFERENCE_WIDTH * step)));
-  let trapezoid = 0;
-  for (let j = 0; j <= last; j++) {
+  const term = (j: number) => {
     const omega = j * step;
     const reference = j <= referenceBins ? (c0 + c2 * omega * omega) * Math.exp(-s2 * omega * omega) : 0;
-    const term = weights[j] * (power[j] - reference);
-    trapezoid += j === 0 || j === last ? 0.5 * term : term;
-  }
+    return weights[j] * (power[j] - reference);
+  };
+  // The trapezoid: every bin once, less half of each end; past referenceBins the reference is dropped.
+  let trapezoid = -0.5 * (term(0) + term(last));
+  for (let j = 0; j <= referenceBins; j++) trapezoid += term(j);
+  for (let j = referenceBins + 1; j <= last; j++) trapezoid += weights[j] * power[j];
   trapezoid *= step;
   let reference = scale ** definition.power * inertialReferenceIntegral(definition.power, c0, c2);
   if (thermal) reference += c0 * thermal.zeroth + c2 * thermal.second;
@@ -148,6 +151,7 @@ function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, ref
   let coarse = 0;
   let samplesPerWindow = 0;
   let timeStepSeconds = Infinity;
+  const correction = alphaBar > 0 ? thermalWeight(definition, alphaBar) : null;
   for (const group of groups) {
     const n = samplesFor(group, perShortest);
     samplesPerWindow = Math.max(samplesPerWindow, n);
@@ -155,7 +159,7 @@ function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, ref
     const spectrum = windowSpectrum(group.window, definition, n);
     const scale = referenceSeconds / group.window.durationSeconds;
     const weights = weightsOnGrid(definition, alphaBar, scale, spectrum.frequencyStep, spectrum.fine.power.length);
-    const thermal = alphaBar > 0 ? thermalReferenceMoments(thermalCorrectionWeight(definition, alphaBar), scale, alphaBar) : null;
+    const thermal = correction === null ? null : thermalReferenceMoments(correction, scale, alphaBar);
     fine += groupIntegral(spectrum.fine, weights, spectrum.frequencyStep, definition, scale, thermal);
     coarse += groupIntegral(spectrum.coarse, weights, spectrum.frequencyStep, definition, scale, thermal);
   }

@@ -93,8 +93,16 @@ function xCothXMinusOne(x: number): number {
   return x / Math.tanh(x) - 1;
 }
 
-/** The constants of w̄(·, ᾱ) at one ᾱ: P(Ω²) = P₀ + c₁Ω² + c₂Ω⁴ + c₃Ω⁶, and the factors of its two forms. */
-interface ThermalWeightParameters {
+/**
+ * The constants of w̄(·, ᾱ) at one ᾱ: P(Ω²) = P₀ + c₁Ω² + c₂Ω⁴ + c₃Ω⁶ (leading coefficient 1, at Ω^{2·top}), and
+ * the factors of its two forms. Evaluated by plain functions rather than closures: the integrals call them 10³–10⁴
+ * times per ramp, and a closure made per call is not inlined there (about four times slower, measured).
+ */
+export interface ThermalWeight {
+  /** Power p of the inertial weight Ω^p. */
+  power: number;
+  /** Degree of P in Ω². */
+  top: number;
   atZero: number;
   c1: number;
   c2: number;
@@ -108,12 +116,14 @@ interface ThermalWeightParameters {
 }
 
 /** null below INERTIAL_BELOW, where w̄ = Ω^p exactly. */
-function thermalWeightParameters(definition: ChannelDefinition, alphaBar: number): ThermalWeightParameters | null {
+export function thermalWeight(definition: ChannelDefinition, alphaBar: number): ThermalWeight | null {
   if (alphaBar < INERTIAL_BELOW) return null;
   const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
   if (coefficients.length > 4) throw new RangeError("thermal polynomials of degree above 3 are not implemented");
   const c1 = coefficients[1];
   return {
+    power: definition.power,
+    top: coefficients.length - 1,
     atZero,
     c1,
     c2: coefficients[2] ?? 0,
@@ -128,10 +138,8 @@ function thermalWeightParameters(definition: ChannelDefinition, alphaBar: number
  * The dimensionless ramp weight w̄(Ω, ᾱ) = W_rest τ₀^p / K, from Ω and 1/Ω (so that a grid can supply 1/Ω from a
  * table). Two forms, each free of cancellation where it is used: x = πΩ/ᾱ < 1, (ᾱ/πΩ²)[P(xcothx − 1) + (P − P₀)];
  * else P/Ω + (ᾱ/πΩ²)[P·2x/(e^{2x} − 1) − P₀], whose Bose factor is dropped beyond x = 350 (below e⁻⁷⁰⁰).
- * A plain function of its parameters rather than a closure: the grid loop calls it 10⁴ times, and a closure made
- * per call is not inlined there (about four times slower).
  */
-function thermalWeightAt(w: ThermalWeightParameters, omega: number, inverseOmega: number): number {
+function thermalWeightAt(w: ThermalWeight, omega: number, inverseOmega: number): number {
   if (omega === 0) return w.atOrigin;
   const omega2 = omega * omega;
   const tail = w.tailFactor * inverseOmega * inverseOmega;
@@ -147,7 +155,7 @@ function thermalWeightAt(w: ThermalWeightParameters, omega: number, inverseOmega
 /** w̄(Ω, ᾱ) for many Ω at one ᾱ; ᾱ below INERTIAL_BELOW gives Ω^p exactly. */
 export function rampWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
   const p = definition.power;
-  const thermal = thermalWeightParameters(definition, alphaBar);
+  const thermal = thermalWeight(definition, alphaBar);
   if (thermal === null) return p === 1 ? (omega) => omega : (omega) => omega ** p;
   return (omega) => thermalWeightAt(thermal, omega, 1 / omega);
 }
@@ -165,7 +173,7 @@ function reciprocalTable(length: number): Float64Array {
 
 /** w̄(j·step, ᾱ) for j = 0 … out.length − 1, written into `out`: the ramp integral's grid. */
 export function fillRampWeightsOnGrid(definition: ChannelDefinition, alphaBar: number, step: number, out: Float64Array): void {
-  const thermal = thermalWeightParameters(definition, alphaBar);
+  const thermal = thermalWeight(definition, alphaBar);
   const p = definition.power;
   if (thermal === null) {
     for (let j = 0; j < out.length; j++) out[j] = (j * step) ** p;
@@ -177,22 +185,22 @@ export function fillRampWeightsOnGrid(definition: ChannelDefinition, alphaBar: n
 }
 
 /** w̄(Ω, ᾱ) − Ω^p: the thermal correction to the inertial weight, computed without cancellation at large Ω. */
+export function thermalCorrectionAt(w: ThermalWeight, omega: number): number {
+  const x = w.xPerOmega * omega;
+  if (x < 1) return thermalWeightAt(w, omega, 1 / omega) - omega ** w.power;
+  const omega2 = omega * omega;
+  // P − P₀ below its leading term Ω^{2·top}.
+  const belowTop = w.top === 1 ? 0 : w.top === 2 ? w.c1 * omega2 : omega2 * (w.c1 + w.c2 * omega2);
+  const polynomial = w.atZero + belowTop + omega2 ** w.top;
+  const boseTail = x > 350 ? 0 : (2 * x) / Math.expm1(2 * x);
+  return (w.atZero + belowTop) / omega + (w.tailFactor / omega2) * (polynomial * boseTail - w.atZero);
+}
+
+/** thermalCorrectionAt as a function of Ω alone; identically 0 below INERTIAL_BELOW. */
 export function thermalCorrectionWeight(definition: ChannelDefinition, alphaBar: number): (omega: number) => number {
-  const p = definition.power;
-  if (alphaBar < INERTIAL_BELOW) return () => 0;
-  const full = rampWeight(definition, alphaBar);
-  const { coefficients, atZero } = thermalPolynomial(definition.thermalOrders, alphaBar);
-  const top = coefficients.length - 1;
-  return (omega) => {
-    const x = (Math.PI * omega) / alphaBar;
-    if (x < 1) return full(omega) - omega ** p;
-    const omega2 = omega * omega;
-    let belowTop = 0;
-    for (let i = top - 1; i >= 1; i--) belowTop = (belowTop + coefficients[i]) * omega2;
-    const polynomial = atZero + belowTop + coefficients[top] * omega2 ** top;
-    const boseTail = x > 350 ? 0 : (2 * x) / Math.expm1(2 * x);
-    return (atZero + belowTop) / omega + (alphaBar / (Math.PI * omega2)) * (polynomial * boseTail - atZero);
-  };
+  const thermal = thermalWeight(definition, alphaBar);
+  if (thermal === null) return () => 0;
+  return (omega) => thermalCorrectionAt(thermal, omega);
 }
 
 /**

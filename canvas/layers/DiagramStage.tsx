@@ -19,7 +19,9 @@ import { useFigureFonts } from "./useFigureFonts";
 /** How far, in pixels, the branches are drawn from the lab's worldline at full separation. */
 const BRANCH_OFFSET_PX = 7;
 const CONE_LENGTH_PX = 34;
-const PADDING_PX = 48;
+/** Room round the diagram for its labels; de Sitter's square needs more at the sides (time labels, the far pole). */
+const PADDING = { left: 48, right: 48, top: 48, bottom: 48 };
+const DE_SITTER_PADDING = { left: 100, right: 64, top: 44, bottom: 44 };
 const LABEL_SLACK_PX = 24;
 
 function Boundary({ boundary, viewport, palette }: { boundary: SceneBoundary; viewport: DiagramViewport; palette: FigurePalette }) {
@@ -55,7 +57,7 @@ function Branches({ scene, viewport, palette }: { scene: DiagramScene; viewport:
   if (!samples || samples.length < 2) return null;
   const points = samples.map((s) => toPx(viewport, s.point));
   // A lab on the centre line r = 0 has nothing to its left: draw its branches beside the line, not across it.
-  const shift = scene.chart.background.labRadiusMetres === 0 ? BRANCH_OFFSET_PX + 2 : 0;
+  const shift = scene.chart.background.labRadiusMetres === 0 ? BRANCH_OFFSET_PX + 5 : 0;
   return (
     <Group listening={false}>
       <Line points={offsetPolyline(points, samples.map((s) => shift + s.b * BRANCH_OFFSET_PX))} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
@@ -83,7 +85,7 @@ function LightConeGizmo({ scene, viewport, palette, font }: { scene: DiagramScen
   const [fo, fi, po, pi] = [end(cone.outgoing, 1), end(cone.ingoing, 1), end(cone.ingoing, -1), end(cone.outgoing, -1)];
   return (
     <Group listening={false}>
-      <Line points={[at.x, at.y, fo.x, fo.y, fi.x, fi.y]} closed fill={palette.farFieldTint} />
+      <Line points={[at.x, at.y, fo.x, fo.y, fi.x, fi.y]} closed fill={palette.rule} opacity={0.45} />
       <Line points={[fi.x, fi.y, at.x, at.y, fo.x, fo.y]} stroke={palette.inkSoft} strokeWidth={1} />
       <Line points={[pi.x, pi.y, at.x, at.y, po.x, po.y]} stroke={palette.inkFaint} strokeWidth={1} dash={[2, 3]} />
       <Circle x={at.x} y={at.y} radius={2} fill={palette.ink} />
@@ -109,7 +111,7 @@ export default function DiagramStage({ width, height }: { width: number; height:
     );
   }
   const scene = outcome.scene;
-  const viewport = fitDiagramViewport(scene.bounds, { width, height }, PADDING_PX);
+  const viewport = fitDiagramViewport(scene.bounds, { width, height }, scene.chart.background.kind === "de-sitter" ? DE_SITTER_PADDING : PADDING);
   const labels = layoutLabels(diagramLabelCandidates(scene, viewport), { width, height });
   const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
 

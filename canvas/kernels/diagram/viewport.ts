@@ -27,17 +27,26 @@ export function boundsOf(points: DiagramPoint[]): DiagramBounds {
   };
 }
 
-/** The largest uniform scale that fits `bounds` in the stage with `paddingPx` all round, centred. */
-export function fitDiagramViewport(bounds: DiagramBounds, size: { width: number; height: number }, paddingPx: number): DiagramViewport {
+export interface Padding {
+  left: number;
+  right: number;
+  top: number;
+  bottom: number;
+}
+
+/** The largest uniform scale that fits `bounds` in the stage inside `padding`, centred in what is left. */
+export function fitDiagramViewport(bounds: DiagramBounds, size: { width: number; height: number }, padding: Padding): DiagramViewport {
   const spanX = bounds.maxX - bounds.minX;
   const spanT = bounds.maxT - bounds.minT;
-  const scale = Math.max(1e-6, Math.min((size.width - 2 * paddingPx) / spanX, (size.height - 2 * paddingPx) / spanT));
+  const innerWidth = size.width - padding.left - padding.right;
+  const innerHeight = size.height - padding.top - padding.bottom;
+  const scale = Math.max(1e-6, Math.min(innerWidth / spanX, innerHeight / spanT));
   return {
     width: size.width,
     height: size.height,
     scale,
-    originX: size.width / 2 - ((bounds.minX + bounds.maxX) / 2) * scale,
-    originY: size.height / 2 + ((bounds.minT + bounds.maxT) / 2) * scale,
+    originX: padding.left + innerWidth / 2 - ((bounds.minX + bounds.maxX) / 2) * scale,
+    originY: padding.top + innerHeight / 2 + ((bounds.minT + bounds.maxT) / 2) * scale,
   };
 }
 

@@ -46,10 +46,9 @@ function clamp(value: number, low: number, high: number): { value: number; clamp
   return { value, clamped: false };
 }
 
-export function planHandleDrag(start: DragStart, pointer: Pointer, options: { snap: boolean }): ProtocolPlan {
-  const { protocol, separation, viewport } = start;
-  const times = segmentTimes(protocol);
-  const unchanged: ProtocolPlan = {
+/** The plan that changes nothing: the protocol's own durations and separation. */
+export function unchangedPlan(protocol: SegmentsProtocol, separation: SeparationSpec): ProtocolPlan {
+  return {
     separationSeconds: protocol.separation.durationSeconds,
     holdSeconds: protocol.hold.durationSeconds,
     recombinationSeconds: protocol.recombination.durationSeconds,
@@ -57,6 +56,12 @@ export function planHandleDrag(start: DragStart, pointer: Pointer, options: { sn
     originSeconds: 0,
     clamped: false,
   };
+}
+
+export function planHandleDrag(start: DragStart, pointer: Pointer, options: { snap: boolean }): ProtocolPlan {
+  const { protocol, separation, viewport } = start;
+  const times = segmentTimes(protocol);
+  const unchanged = unchangedPlan(protocol, separation);
   if (start.grab && pointer.x === start.grab.pointer.x && pointer.y === start.grab.pointer.y) return unchanged;
   const target = start.grab
     ? { x: start.grab.handle.x + pointer.x - start.grab.pointer.x, y: start.grab.handle.y + pointer.y - start.grab.pointer.y }

@@ -6,7 +6,7 @@
 import type { SeparationSpec } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
 import { segmentTimes, type SegmentsProtocol } from "../timeline";
-import type { ProtocolPlan } from "./drag-plan";
+import { unchangedPlan, type ProtocolPlan } from "./drag-plan";
 import type { HandleId } from "./handles";
 
 export type TypedPlan = { ok: true; plan: ProtocolPlan } | { ok: false; message: string };
@@ -15,14 +15,7 @@ const time = (s: number) => formatQuantity(s, "time");
 
 export function planHandleValue(handle: HandleId, valueSI: number, protocol: SegmentsProtocol, separation: SeparationSpec): TypedPlan {
   const times = segmentTimes(protocol);
-  const base: ProtocolPlan = {
-    separationSeconds: protocol.separation.durationSeconds,
-    holdSeconds: protocol.hold.durationSeconds,
-    recombinationSeconds: protocol.recombination.durationSeconds,
-    distanceMetres: separation.distanceMetres,
-    originSeconds: 0,
-    clamped: false,
-  };
+  const base = unchangedPlan(protocol, separation);
   switch (handle) {
     case "separation-start":
       if (!(valueSI < times.separationEnd)) return { ok: false, message: `the separation must start before it ends (${time(times.separationEnd)})` };

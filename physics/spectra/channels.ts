@@ -41,6 +41,8 @@ export interface ChannelDefinition {
   /** The channel's source profile f(σ) and df/du from σ and dσ/du. */
   profile(sigma: number): number;
   profileRate(sigma: number, sigmaRate: number): number;
+  /** Whether profileRate reads σ (the quadrupole's 2σσ′ does, the dipole's σ′ does not): samplers skip σ otherwise. */
+  profileRateReadsProfile: boolean;
 }
 
 export const electromagneticChannel: ChannelDefinition = {
@@ -51,6 +53,7 @@ export const electromagneticChannel: ChannelDefinition = {
   smoothnessNeeded: 1,
   profile: (sigma) => sigma,
   profileRate: (_sigma, sigmaRate) => sigmaRate,
+  profileRateReadsProfile: false,
 };
 
 export const gravitationalChannel: ChannelDefinition = {
@@ -61,6 +64,7 @@ export const gravitationalChannel: ChannelDefinition = {
   smoothnessNeeded: 2,
   profile: (sigma) => sigma * sigma,
   profileRate: (sigma, sigmaRate) => 2 * sigma * sigmaRate,
+  profileRateReadsProfile: true,
 };
 
 /** Coefficients of P(Ω²) − P(0) as a polynomial in Ω² (index i ↔ Ω^{2i}, i ≥ 1), and P(0). */

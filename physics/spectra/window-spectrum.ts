@@ -64,7 +64,8 @@ function fillCompositeSamples(window: MotionWindow & { parts: readonly MotionWin
     const last = Math.min(samples - 1, Math.floor(to * samples - 0.5));
     for (let m = first; m <= last; m++) {
       const local = Math.min(1, Math.max(0, ((m + 0.5) / samples - from) * scale));
-      input[m] = definition.profileRate(part.fraction(local), rate(local)) * scale;
+      const sigma = definition.profileRateReadsProfile ? part.fraction(local) : 0;
+      input[m] = definition.profileRate(sigma, rate(local)) * scale;
     }
   }
 }
@@ -82,7 +83,7 @@ function fillSamples(window: MotionWindow, definition: ChannelDefinition, sample
   if (window.rate) {
     for (let m = 0; m < samples; m++) {
       const u = (m + 0.5) / samples;
-      input[m] = definition.profileRate(window.fraction(u), window.rate(u));
+      input[m] = definition.profileRate(definition.profileRateReadsProfile ? window.fraction(u) : 0, window.rate(u));
     }
     return;
   }
@@ -94,18 +95,30 @@ function fillSamples(window: MotionWindow, definition: ChannelDefinition, sample
   }
 }
 
-function moments(input: Float64Array, samples: number, stride: number): [number, number, number] {
-  let mu0 = 0;
-  let mu1 = 0;
-  let mu2 = 0;
-  for (let m = 0; m < samples; m += stride) {
+/** μ_k = (1/n) Σ g_m (u_m − ½)^k, k ≤ 2, from all samples (fine) and from the even-indexed ones (coarse), in one pass. */
+function levelMoments(input: Float64Array, samples: number): { fine: [number, number, number]; coarse: [number, number, number] } {
+  let even0 = 0;
+  let even1 = 0;
+  let even2 = 0;
+  let odd0 = 0;
+  let odd1 = 0;
+  let odd2 = 0;
+  for (let m = 0; m < samples; m += 2) {
     const x = (m + 0.5) / samples - 0.5;
-    mu0 += input[m];
-    mu1 += input[m] * x;
-    mu2 += input[m] * x * x;
+    even0 += input[m];
+    even1 += input[m] * x;
+    even2 += input[m] * x * x;
+    const y = (m + 1.5) / samples - 0.5;
+    odd0 += input[m + 1];
+    odd1 += input[m + 1] * y;
+    odd2 += input[m + 1] * y * y;
   }
-  const weight = stride / samples;
-  return [mu0 * weight, mu1 * weight, mu2 * weight];
+  const fineWeight = 1 / samples;
+  const coarseWeight = 2 / samples;
+  return {
+    fine: [(even0 + odd0) * fineWeight, (even1 + odd1) * fineWeight, (even2 + odd2) * fineWeight],
+    coarse: [even0 * coarseWeight, even1 * coarseWeight, even2 * coarseWeight],
+  };
 }
 
 /**
@@ -121,8 +134,7 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
   const length = PADDING_FACTOR * samples;
   const { fft, input, output } = transformOfSize(length);
   fillSamples(window, definition, samples, input);
-  const fineMoments = moments(input, samples, 1);
-  const coarseMoments = moments(input, samples, 2);
+  const levels = levelMoments(input, samples);
   fft.realTransform(output, input);
   const half = length / 2;
   const norm = 1 / (samples * samples);
@@ -155,8 +167,8 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
     samples,
     transformLength: length,
     frequencyStep: (2 * Math.PI * samples) / length,
-    fine: { power: fine, moments: fineMoments },
-    coarse: { power: coarse, moments: coarseMoments },
+    fine: { power: fine, moments: levels.fine },
+    coarse: { power: coarse, moments: levels.coarse },
   };
   if (key !== null) {
     if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);

@@ -26,15 +26,6 @@ function useInvalidateMembers(projectId: string) {
   return () => queryClient.invalidateQueries({ queryKey: projectKeys.one(projectId) });
 }
 
-export function useAddMember(projectId: string) {
-  const invalidate = useInvalidateMembers(projectId);
-  return useMutation({
-    mutationFn: (input: { email: string; role: ProjectRole }) =>
-      apiFetch<{ member: MemberDto }>(base(projectId), { method: "POST", json: input }).then((r) => r.member),
-    onSuccess: invalidate,
-  });
-}
-
 export function useChangeMemberRole(projectId: string) {
   const invalidate = useInvalidateMembers(projectId);
   return useMutation({

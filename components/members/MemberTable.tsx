@@ -20,9 +20,11 @@ interface MemberTableProps {
   pendingRole: { userId: string; role: ProjectRole } | null;
   onRoleChange: (member: MemberDto, role: ProjectRole) => void;
   onRemove: (member: MemberDto) => void;
+  /** Hands the caller's ownership to this member (owners only). */
+  onTransfer: (member: MemberDto) => void;
 }
 
-export function MemberTable({ projectName, members, currentUserId, manages, pendingRole, onRoleChange, onRemove }: MemberTableProps) {
+export function MemberTable({ projectName, members, currentUserId, manages, pendingRole, onRoleChange, onRemove, onTransfer }: MemberTableProps) {
   return (
     <table className={tableStyles.table}>
       <caption className="sr-only">Members of {projectName}</caption>
@@ -60,7 +62,12 @@ export function MemberTable({ projectName, members, currentUserId, manages, pend
               <td className={tableStyles.cell}>
                 <TimeStamp iso={member.joinedAt} />
               </td>
-              <td className={`${tableStyles.cell} text-right`}>
+              <td className={`${tableStyles.cell} whitespace-nowrap text-right`}>
+                {manages && !isSelf && (
+                  <button type="button" onClick={() => onTransfer(member)} className={buttonStyles.row} aria-label={`Hand ownership to ${member.name}`}>
+                    Hand ownership
+                  </button>
+                )}
                 {(isSelf || manages) && (
                   <button type="button" onClick={() => onRemove(member)} className={buttonStyles.row}>
                     {isSelf ? "Leave project" : "Remove"}

@@ -4,13 +4,17 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { messageOf } from "@/components/api/client";
+import { useTransferOwnership } from "@/components/api/invitations";
 import { useChangeMemberRole, useMembers, useRemoveMember, type MemberDto, type ProjectRole } from "@/components/api/members";
 import { projectKeys, useProject } from "@/components/api/projects";
 import { sentence } from "@/components/format/text";
+import { ScenarioSharingIndex } from "@/components/sharing/ScenarioSharingIndex";
 import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
-import { AddMemberForm } from "./AddMemberForm";
+import { AuditLog } from "./AuditLog";
+import { InvitationTable } from "./InvitationTable";
+import { InviteForm } from "./InviteForm";
 import { MemberTable } from "./MemberTable";
 
 /** The members tab. The project itself is loaded (and its 404 handled) by the frame around it. */
@@ -21,11 +25,14 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
   const members = useMembers(projectId);
   const changeRole = useChangeMemberRole(projectId);
   const remove = useRemoveMember(projectId);
+  const transfer = useTransferOwnership(projectId);
   const [removing, setRemoving] = useState<MemberDto | null>(null);
+  const [handingTo, setHandingTo] = useState<MemberDto | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
 
   if (!project) return null;
   const manages = project.can.includes("members:manage");
+  const invites = project.can.includes("members:invite");
   const leaving = removing?.userId === currentUserId;
 
   const onRoleChange = (member: MemberDto, role: ProjectRole) => {
@@ -47,8 +54,8 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
   };
 
   return (
-    <div className="space-y-10">
-      {manages && <AddMemberForm projectId={projectId} />}
+    <div className="space-y-12">
+      {invites && <InviteForm projectId={projectId} />}
 
       <section aria-labelledby="members-title" className="space-y-4">
         <h2 id="members-title" className="font-serif text-xl font-semibold">
@@ -69,14 +76,19 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
               pendingRole={changeRole.isPending ? changeRole.variables : null}
               onRoleChange={onRoleChange}
               onRemove={setRemoving}
+              onTransfer={setHandingTo}
             />
           )}
         </QueryView>
         <p className="text-sm text-ink-faint">
-          Owners manage members and may rename or delete the project; editors change scenarios; viewers only look. A project
-          always keeps at least one owner.
+          Owners manage members and may rename or delete the project; editors change scenarios and make share links; viewers
+          only look. A project always keeps at least one owner.
         </p>
       </section>
+
+      {invites && <InvitationTable projectId={projectId} />}
+      <ScenarioSharingIndex project={project} />
+      {project.can.includes("members:audit") && <AuditLog projectId={projectId} />}
 
       <ConfirmDialog
         open={removing !== null}
@@ -93,6 +105,22 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
         {leaving
           ? "You will no longer see this project or its scenarios, unless an owner adds you again."
           : "They will no longer see this project or its scenarios. Their past changes stay in the revisions."}
+      </ConfirmDialog>
+
+      <ConfirmDialog
+        open={handingTo !== null}
+        title={`Hand ownership of “${project.name}” to ${handingTo?.name ?? ""}?`}
+        confirmLabel="Hand ownership"
+        pending={transfer.isPending}
+        error={transfer.isError ? sentence(messageOf(transfer.error)) : null}
+        onCancel={() => {
+          setHandingTo(null);
+          transfer.reset();
+        }}
+        onConfirm={() => handingTo && transfer.mutate(handingTo.userId, { onSuccess: () => setHandingTo(null) })}
+      >
+        They become an owner and you become an editor: you will no longer manage members or invitations, unless an owner
+        makes you an owner again.
       </ConfirmDialog>
     </div>
   );

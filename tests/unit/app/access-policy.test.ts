@@ -1,8 +1,27 @@
 import { describe, expect, it } from "vitest";
-import { allowedProjectActions, assertProjectAccess, assertSiteAccess, roleAllows, type ProjectAction } from "@/db/access";
+import {
+  allowedProjectActions,
+  assertInvitationAcceptable,
+  assertProjectAccess,
+  assertShareLinkAccess,
+  assertSiteAccess,
+  roleAllows,
+  type ProjectAction,
+} from "@/db/access";
 import { AppError } from "@/db/errors";
 
-const actions: ProjectAction[] = ["project:read", "project:rename", "project:delete", "members:read", "members:manage", "scenario:read", "scenario:write"];
+const actions: ProjectAction[] = [
+  "project:read",
+  "project:rename",
+  "project:delete",
+  "members:read",
+  "members:manage",
+  "members:invite",
+  "members:audit",
+  "share:manage",
+  "scenario:read",
+  "scenario:write",
+];
 
 function codeOf(fn: () => void): string | null {
   try {
@@ -46,5 +65,48 @@ describe("the access policy", () => {
     expect(codeOf(() => assertSiteAccess(null, "users:list"))).toBe("unauthenticated");
     expect(codeOf(() => assertSiteAccess({ userId: "u", siteRole: "member" }, "users:list"))).toBe("forbidden");
     expect(codeOf(() => assertSiteAccess({ userId: "u", siteRole: "admin" }, "users:set-role"))).toBeNull();
+  });
+
+  it("lets editors and owners manage share links, and only owners invite or read the membership history", () => {
+    expect(roleAllows("viewer", "share:manage")).toBe(false);
+    expect(roleAllows("editor", "share:manage")).toBe(true);
+    expect(roleAllows("editor", "members:invite")).toBe(false);
+    expect(roleAllows("editor", "members:audit")).toBe(false);
+    expect(roleAllows("owner", "members:invite")).toBe(true);
+  });
+});
+
+describe("the share link holder", () => {
+  const now = new Date("2026-12-01T12:00:00Z");
+  const live = { expiresAt: new Date("2026-12-02T00:00:00Z"), revokedAt: null };
+
+  it("may read the scenario while the link is live, and nothing else", () => {
+    expect(codeOf(() => assertShareLinkAccess(live, "scenario:read", now))).toBeNull();
+    expect(codeOf(() => assertShareLinkAccess({ expiresAt: null, revokedAt: null }, "scenario:read", now))).toBeNull();
+    for (const action of actions.filter((a) => a !== "scenario:read")) {
+      expect(codeOf(() => assertShareLinkAccess(live, action, now)), action).toBe("forbidden");
+    }
+  });
+
+  it("finds nothing behind an unknown, revoked or expired link", () => {
+    expect(codeOf(() => assertShareLinkAccess(undefined, "scenario:read", now))).toBe("not_found");
+    expect(codeOf(() => assertShareLinkAccess({ ...live, revokedAt: now }, "scenario:read", now))).toBe("not_found");
+    expect(codeOf(() => assertShareLinkAccess({ ...live, expiresAt: now }, "scenario:read", now))).toBe("not_found");
+  });
+});
+
+describe("an invitation", () => {
+  const now = new Date("2026-12-01T12:00:00Z");
+  const open = { email: "invitee@example.test", expiresAt: new Date("2026-12-08T12:00:00Z"), revokedAt: null, acceptedAt: null };
+
+  it("may be accepted by the account with its address, in any letter case", () => {
+    expect(codeOf(() => assertInvitationAcceptable(open, "Invitee@Example.TEST", now))).toBeNull();
+    expect(codeOf(() => assertInvitationAcceptable(open, "someone.else@example.test", now))).toBe("forbidden");
+  });
+
+  it("is not found once used, revoked or expired, whoever asks", () => {
+    for (const dead of [{ ...open, acceptedAt: now }, { ...open, revokedAt: now }, { ...open, expiresAt: now }, undefined]) {
+      expect(codeOf(() => assertInvitationAcceptable(dead, open.email, now))).toBe("not_found");
+    }
   });
 });

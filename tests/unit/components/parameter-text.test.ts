@@ -1,0 +1,22 @@
+import { describe, expect, it } from "vitest";
+import { parameterLabel, parameterValue } from "@/components/history/parameterText";
+
+describe("parameter labels and values for comparing revisions", () => {
+  it("reads a path as words, dropping the SI unit from the name", () => {
+    expect(parameterLabel("protocol.hold.durationSeconds")).toBe("Protocol › hold › duration");
+    expect(parameterLabel("background.accelerationMetresPerSecondSquared")).toBe("Background › acceleration");
+    expect(parameterLabel("protocol.samples.0.timeSeconds")).toBe("Protocol › samples › #1 › time");
+    expect(parameterLabel("schemaVersion")).toBe("Schema version");
+  });
+
+  it("prints a value with the unit its name gives, and other values plainly", () => {
+    expect(parameterValue("protocol.hold.durationSeconds", 0.1)).toBe("100 ms");
+    expect(parameterValue("separation.distanceMetres", 1e-6)).toBe("1.00 µm");
+    expect(parameterValue("background.hubbleRatePerSecond", 2.2e-18)).toBe("2.20 × 10⁻¹⁸ s⁻¹");
+    expect(parameterValue("schemaVersion", 1)).toBe("1");
+    expect(parameterValue("source.labMassKg", null)).toBe("none");
+    expect(parameterValue("display.showGrid", true)).toBe("yes");
+    expect(parameterValue("protocol.samples", { items: 2000 })).toBe("2,000 items");
+    expect(parameterValue("background.massKg", 1, false)).toBe("—");
+  });
+});

@@ -45,11 +45,36 @@ function transformOfSize(size: number) {
   return entry;
 }
 
-const cache = new Map<string, WindowSpectrum>();
+/** Cached spectra with the one buffer that holds both of their power levels. */
+const cache = new Map<string, { spectrum: WindowSpectrum; storage: Float64Array }>();
 const CACHE_LIMIT = 64;
 
-/** Forget cached spectra (the bench uses it to time cold computations). */
+/**
+ * Buffers of spectra dropped from the cache, by length, for the next spectra of that length: a new 2^14 transform
+ * would otherwise allocate 100 kB outside the JavaScript heap each time, whose collection dominates a run of
+ * distinct documents (a sweep). At most CACHE_LIMIT are kept.
+ */
+const spareStorage = new Map<number, Float64Array[]>();
+let spareCount = 0;
+
+function recycle(storage: Float64Array): void {
+  if (spareCount >= CACHE_LIMIT) return;
+  const list = spareStorage.get(storage.length) ?? [];
+  list.push(storage);
+  spareStorage.set(storage.length, list);
+  spareCount++;
+}
+
+function storageOfLength(length: number): Float64Array {
+  const spare = spareStorage.get(length)?.pop();
+  if (spare === undefined) return new Float64Array(length);
+  spareCount--;
+  return spare;
+}
+
+/** Forget cached spectra (the bench uses it to time cold computations); their buffers are kept for reuse. */
 export function clearSpectrumCache(): void {
+  for (const entry of cache.values()) recycle(entry.storage);
   cache.clear();
 }
 
@@ -125,11 +150,13 @@ function levelMoments(input: Float64Array, samples: number): { fine: [number, nu
  * The fine level is |X_j|²/n². The coarse level uses that the transform of the even-indexed samples, padded to
  * M/2, is Y_j = (X_j + X_{j+M/2})/2 with X_{j+M/2} = conj(X_{M/2−j}) for real input: its power is
  * |X_j + conj(X_{M/2−j})|²/n², j = 0 … M/4, on the same Ω grid.
+ * A cached spectrum is valid until the next call of windowSpectrum or clearSpectrumCache, which may drop it from
+ * the cache and reuse its buffer: read it before asking for another (ramp-quanta.ts does, one group at a time).
  */
 export function windowSpectrum(window: MotionWindow, definition: ChannelDefinition, samples: number): WindowSpectrum {
   const key = window.cacheKey === null ? null : `${window.cacheKey}|${definition.channel}|${samples}`;
   const cached = key === null ? undefined : cache.get(key);
-  if (cached) return cached;
+  if (cached) return cached.spectrum;
 
   const length = PADDING_FACTOR * samples;
   const { fft, input, output } = transformOfSize(length);
@@ -139,8 +166,8 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
   const half = length / 2;
   const norm = 1 / (samples * samples);
   const quarter = length / 4;
-  // One allocation for both levels.
-  const powers = new Float64Array(half + 1 + quarter + 1);
+  // One buffer for both levels; every element is written below.
+  const powers = key === null ? new Float64Array(half + 1 + quarter + 1) : storageOfLength(half + 1 + quarter + 1);
   const fine = powers.subarray(0, half + 1);
   const coarse = powers.subarray(half + 1);
   for (let j = 0; j <= half; j++) {
@@ -171,8 +198,12 @@ export function windowSpectrum(window: MotionWindow, definition: ChannelDefiniti
     coarse: { power: coarse, moments: levels.coarse },
   };
   if (key !== null) {
-    if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
-    cache.set(key, spectrum);
+    if (cache.size >= CACHE_LIMIT) {
+      const oldest = cache.keys().next().value!;
+      recycle(cache.get(oldest)!.storage);
+      cache.delete(oldest);
+    }
+    cache.set(key, { spectrum, storage: powers });
   }
   return spectrum;
 }

@@ -5,6 +5,8 @@ import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 
 const BOUNDARY_OFFSET_PX = 13;
 const ROOM_FOR_TIME_LABELS_PX = 84;
+/** Time labels beside the lab's worldline start past the branches drawn along it. */
+const CLEAR_OF_BRANCHES_PX = 14;
 
 export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramViewport): LabelCandidate[] {
   const boundaryLabels = scene.boundaries.map((b, i): LabelCandidate => {
@@ -36,7 +38,7 @@ export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramVie
     return {
       id: `grid-${i}`,
       text: g.label,
-      x: outside ? at.x - 6 : at.x + 6,
+      x: outside ? at.x - 6 : at.x + CLEAR_OF_BRANCHES_PX,
       y: at.y,
       align: outside ? "right" : "left",
       verticalAlign: "middle",

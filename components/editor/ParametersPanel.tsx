@@ -18,7 +18,7 @@ const BACKGROUND_WORDS: Record<BackgroundKind, string> = {
   "de-sitter": "de Sitter static patch",
 };
 
-const selectClass = "mt-1 block w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm text-ink";
+const selectClass = "mt-1 block w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm text-ink disabled:cursor-not-allowed disabled:bg-paper-deep disabled:text-ink-soft";
 
 function Group({ title, children }: { title: string; children: ReactNode }) {
   return (

@@ -74,7 +74,7 @@ export function ProtocolStrip() {
                   <label className="block text-xs font-semibold text-ink-soft">
                     Ramp shape
                     <select
-                      className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1 text-sm font-normal text-ink"
+                      className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1 text-sm font-normal text-ink disabled:cursor-not-allowed disabled:bg-paper-deep disabled:text-ink-soft"
                       value={ramp.shape}
                       disabled={readOnly}
                       onChange={(e) => edit(`Set ${segment} shape`, (d) => withRampShape(d, segment as "separation" | "recombination", e.target.value as RampShape))}

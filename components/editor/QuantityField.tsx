@@ -67,7 +67,7 @@ export function QuantityField({ label, dimension, shown, onCommit, hint, disable
       <input
         id={id}
         data-testid={testId}
-        className={`${fieldStyles.control} tabular ${compact ? "px-2 py-1 text-sm" : ""}`}
+        className={`${fieldStyles.control} tabular disabled:cursor-not-allowed disabled:border-rule disabled:bg-paper-deep disabled:text-ink-soft ${compact ? "px-2 py-1 text-sm" : ""}`}
         value={draft ?? shown}
         disabled={disabled}
         spellCheck={false}

@@ -211,7 +211,7 @@ export function SweepPanel() {
                 />
                 <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
                 {current !== null && current > 0 && <ReferenceLine x={current} stroke="#E69F00" strokeWidth={2} label={{ value: "now", position: "top", fontSize: 11 }} />}
-                {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} label={{ value: "smallest 𝒟", position: "bottom", fontSize: 11 }} />}
+                {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
               </LineChart>
             </ResponsiveContainer>
           </div>

@@ -81,7 +81,7 @@ export function BudgetPanel() {
           Budget
         </h2>
         <span role="status" aria-live="polite" className="text-xs text-ink-faint">
-          {stale ? "⟳ updating…" : failedNow ? "" : result ? "up to date" : ""}
+          {stale ? "Updating… (numbers below are for the previous state)" : failedNow ? "" : result ? "Up to date" : ""}
         </span>
       </div>
       {failedNow && (

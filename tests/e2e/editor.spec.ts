@@ -101,3 +101,32 @@ test("dragging the recombination handle trades far-field for horizon quanta; und
   await expect(viewer.getByTestId("handle-field-recombination-end")).toBeDisabled();
   await expect(viewer.getByRole("button", { name: /^Undo/ })).toHaveCount(0);
 });
+
+test("a save that meets someone else's newer version asks what to do, and keeping mine makes a new scenario without touching theirs", async ({ browser }) => {
+  const stamp = Date.now();
+  const owner = await signedInAs(browser, "Conflict Owner", `conflict-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: "Conflicts" } })).json()).project;
+  const scenario = (
+    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Shared lab", document: blackHoleScenario() } })).json()
+  ).scenario;
+  await owner.goto(editorPath(project.id, scenario.id));
+  await expect(owner.getByTestId("lab-view")).toBeVisible();
+
+  // Someone else saves first (here, a rename through the API from the same account).
+  const elsewhere = await owner.request.put(`/api/projects/${project.id}/scenarios/${scenario.id}`, { data: { version: scenario.version, title: "Shared lab, renamed" } });
+  expect(elsewhere.status()).toBe(200);
+
+  const hold = owner.getByTestId("duration-hold");
+  await hold.fill("2.5 s");
+  await hold.press("Enter");
+  const dialog = owner.getByRole("dialog", { name: "Someone else saved this scenario" });
+  await expect(dialog).toBeVisible();
+  await expect(owner.getByTestId("save-state")).toContainText("Not saved");
+
+  await dialog.getByRole("button", { name: "Keep mine as a new scenario" }).click();
+  await expect(owner).not.toHaveURL(new RegExp(scenario.id));
+  await expect(owner.getByTestId("duration-hold")).toHaveValue("2.500 s");
+  const theirs = (await (await owner.request.get(`/api/projects/${project.id}/scenarios/${scenario.id}`)).json()).scenario;
+  expect(theirs.title).toBe("Shared lab, renamed");
+  expect(theirs.document.protocol.hold.durationSeconds).toBe(1);
+});

@@ -88,8 +88,13 @@ const isLive = (token: TokenState, now: Date) => token.revokedAt === null && (to
  * `action`. A revoked, expired or unknown link is not found; a live one never grants more than reading.
  */
 export function assertShareLinkAccess<T extends TokenState>(link: T | undefined, action: ProjectAction, now = new Date()): asserts link is T {
-  if (!link || !isLive(link, now)) throw new AppError("not_found", "this share link was not found, or it has expired or been revoked");
+  if (!shareLinkIsOpen(link, now)) throw new AppError("not_found", "this share link was not found, or it has expired or been revoked");
   if (!linkHolderGrants.has(action)) throw forbidden("a share link only lets you read the scenario it names");
+}
+
+/** Whether a share link (or undefined, for an unknown token) still works. */
+export function shareLinkIsOpen(link: TokenState | undefined, now = new Date()): link is TokenState {
+  return link !== undefined && isLive(link, now);
 }
 
 /**

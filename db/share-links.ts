@@ -1,7 +1,7 @@
 import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { type Actor, assertProjectAccess, assertShareLinkAccess } from "./access";
+import { type Actor, assertProjectAccess, assertShareLinkAccess, shareLinkIsOpen } from "./access";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { roleInProject } from "./members";
@@ -105,6 +105,12 @@ export async function revokeShareLink(db: Kysely<Database>, actor: Actor, projec
   const exists = await linkQuery(db, projectId, scenarioId).where("l.id", "=", linkId).executeTakeFirst();
   if (!exists) throw notFound("share link");
   throw conflict("this share link is already revoked");
+}
+
+/** Whether a token names a live share link, without counting a view (for answering 404 before a page renders). */
+export async function shareLinkIsLive(db: Kysely<Database>, token: string): Promise<boolean> {
+  const link = await db.selectFrom("shareLinks").select(["expiresAt", "revokedAt"]).where("tokenHash", "=", hashToken(token)).executeTakeFirst();
+  return shareLinkIsOpen(link);
 }
 
 /**

@@ -21,10 +21,12 @@ import * as revisionsRoute from "@/app/api/projects/[projectId]/scenarios/[scena
 import * as shareLinkRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/share-links/[linkId]/route";
 import * as shareLinksRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/share-links/route";
 import * as shareRoute from "@/app/api/share/[token]/route";
+import { NextRequest } from "next/server";
 import { getDb } from "@/db";
 import { previewInvitation } from "@/db/invitations";
 import { hashToken } from "@/db/tokens";
 import { createUser } from "@/db/users";
+import { proxy } from "@/proxy";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { projectFixture, type ProjectFixture } from "./fixtures";
 import { call, makeUser, sessionCookie, type TestUser } from "./harness";
@@ -436,6 +438,29 @@ describe("history: what changed, and restore", () => {
     expect(future.body.error.fields[0]).toMatchObject({ path: "document.schemaVersion" });
     const after = (await call(scenarioRoute.GET, "GET", "/x", { as: f.users.viewer, params: S() })).body.scenario.version;
     expect(after).toBe(latest);
+  });
+});
+
+describe("the proxy in front of the share and invitation pages", () => {
+  const status = async (path: string) => (await proxy(new NextRequest(new URL(path, "http://localhost:3999")))).status;
+
+  it("lets a live token through and answers 404 for a dead one before the page streams", async () => {
+    const f = await projectFixture();
+    const created = await call(shareLinksRoute.POST, "POST", "/x", { as: f.users.owner, params: { projectId: f.projectId, scenarioId: f.scenarioId }, body: { label: "x" } });
+    const token = new URL(created.body.url).pathname.split("/").pop()!;
+    expect(await status(`/share/${token}`)).toBe(200);
+    await call(shareLinkRoute.DELETE, "DELETE", "/x", { as: f.users.owner, params: { projectId: f.projectId, scenarioId: f.scenarioId, linkId: created.body.link.id } });
+    expect(await status(`/share/${token}`)).toBe(404);
+    const views = await getDb().selectFrom("shareLinks").select("viewCount").where("id", "=", created.body.link.id).executeTakeFirstOrThrow();
+    expect(views.viewCount).toBe(0);
+
+    const email = newAddress("proxied");
+    await invite(f, email);
+    const invitation = await invitationTokenFor(email);
+    expect(await status(`/invitations/${invitation}`)).toBe(200);
+    await call(acceptRoute.POST, "POST", "/x", { as: await accountWith(email), params: { token: invitation } });
+    expect(await status(`/invitations/${invitation}`)).toBe(404);
+    expect(await status("/invitations/never-issued")).toBe(404);
   });
 });
 

@@ -2,7 +2,7 @@
  * The segment protocol on the lab's clock: where separation, hold and recombination begin and end, and where each
  * branch is at a given lab proper time. Pure; the separation shapes come from physics/protocols.
  */
-import { rampShapes } from "@/physics/protocols/ramp-shapes";
+import { branchPositions, rampShapes } from "@/physics/protocols";
 import type { ProtocolSpec, ScenarioDocument, SeparationSpec } from "@/physics/scenario/schema";
 
 export type SegmentsProtocol = Extract<ProtocolSpec, { kind: "segments" }>;
@@ -49,17 +49,18 @@ export function separationFraction(protocol: SegmentsProtocol, times: SegmentTim
 }
 
 /**
- * Where each branch sits along the separation axis, metres from the lab's rest position, for a fraction σ:
- * symmetric split ±σd/2; one-branch-stays: branch A moves to σd, branch B stays at 0.
+ * Where each branch sits along the separation axis, metres from the lab's rest position, for a fraction σ
+ * (physics/protocols: symmetric split ±σd/2; one-branch-stays: branch A at σd, branch B at 0).
  */
 export function branchOffsetsMetres(separation: SeparationSpec, fraction: number): { a: number; b: number } {
+  const { aPerSeparation, bPerSeparation } = branchPositions(separation.split);
   const d = separation.distanceMetres * fraction;
-  return separation.split === "symmetric" ? { a: d / 2, b: -d / 2 } : { a: d, b: 0 };
+  return { a: aPerSeparation * d, b: bPerSeparation * d };
 }
 
 /** Branch A's offset per metre of full separation at the hold: ½ for a symmetric split, 1 when branch B stays. */
 export function branchAOffsetPerSeparation(separation: Pick<SeparationSpec, "split">): number {
-  return separation.split === "symmetric" ? 0.5 : 1;
+  return branchPositions(separation.split).aPerSeparation;
 }
 
 /**

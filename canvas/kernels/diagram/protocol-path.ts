@@ -8,7 +8,8 @@
  * needs neither (its scale L is chosen from the protocol's duration, see chart.ts).
  */
 import type { DiagramPoint } from "@/physics/backgrounds";
-import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, type SegmentsProtocol, type SegmentTimes } from "../timeline";
+import { branchPositions, fractionAt, separationHistory, type SeparationHistory } from "@/physics/protocols";
+import { ScenarioInputError } from "@/physics/scenario/input-error";
 import type { DiagramChart } from "./chart";
 import { bisect, clipToConvex } from "./geometry";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
@@ -41,7 +42,7 @@ export interface ProtocolOnDiagram {
   timeScale: TimeScale;
   /** Samples along the lab's worldline from just before the separation to just after the recombination. */
   branches: BranchSample[];
-  /** The instants of the protocol on the diagram (start of separation, end of separation, end of hold, end of recombination). */
+  /** Where each moving window starts and ends, on the diagram (for segments: the four instants of the protocol). */
   marks: DiagramPoint[];
   strips: RadiationStrip[];
 }
@@ -81,7 +82,6 @@ function horizonDirection(chart: DiagramChart): "outgoing" | "ingoing" | null {
 
 /** A strip between the null rays leaving the lab's worldline over [from, to], clipped to the diagram. */
 function strip(
-  chart: DiagramChart,
   at: (tau: number) => DiagramPoint,
   from: number,
   to: number,
@@ -96,38 +96,60 @@ function strip(
   return clipToConvex([...along, ...far], outline);
 }
 
+/** The protocol's history (every kind: segments, formula, samples), or null when it cannot be read. */
+function historyOf(document: ScenarioDocument): SeparationHistory | null {
+  try {
+    return separationHistory(document);
+  } catch (error) {
+    if (error instanceof ScenarioInputError) return null;
+    throw error;
+  }
+}
+
 export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocument, outline: DiagramPoint[]): ProtocolOnDiagram | null {
-  if (document.protocol.kind !== "segments") return null;
-  const protocol: SegmentsProtocol = document.protocol;
-  const times: SegmentTimes = segmentTimes(protocol);
-  const total = times.recombinationEnd;
+  const history = historyOf(document);
+  if (!history || history.windows.length === 0) return null;
+  const total = history.totalDurationSeconds;
   const timeScale = timeScaleOf(chart, total);
   const r = chart.background.labRadiusMetres;
   const at = (tau: number) => chart.background.conformal.toDiagram(drawnTime(chart, timeScale, total, tau), r);
+  const { aPerSeparation, bPerSeparation } = branchPositions(document.separation.split);
+  const largest = Math.max(Math.abs(aPerSeparation), Math.abs(bPerSeparation));
 
+  // Dense in each moving window (where the paths bend), and even across the whole protocol (the hold is a curve too).
   const pad = 0.05 * total;
-  const largest = Math.max(...Object.values(branchOffsetsMetres({ ...document.separation, distanceMetres: 1 }, 1)).map(Math.abs));
-  // The ramps' own samples, plus even ones across the whole protocol: on the diagram the hold is a curve too.
-  const even = Array.from({ length: 97 }, (_, i) => -pad + ((total + 2 * pad) * i) / 96);
-  const samples = [...new Set([...pathSampleTimes(times, -pad, total + pad, 32), ...even])].sort((x, y) => x - y);
-  const branches = samples.map((tau) => {
-    const offsets = branchOffsetsMetres({ ...document.separation, distanceMetres: 1 }, separationFraction(protocol, times, tau));
-    return { point: at(tau), a: offsets.a / largest, b: offsets.b / largest };
-  });
+  const times = new Set<number>(Array.from({ length: 97 }, (_, i) => -pad + ((total + 2 * pad) * i) / 96));
+  for (const w of history.windows) for (let i = 0; i <= 32; i++) times.add(w.startSeconds + (w.durationSeconds * i) / 32);
+  const branches = [...times]
+    .sort((x, y) => x - y)
+    .map((tau) => {
+      const fraction = tau < 0 || tau > total ? 0 : fractionAt(history, tau);
+      return { point: at(tau), a: (aPerSeparation * fraction) / largest, b: (bPerSeparation * fraction) / largest };
+    });
 
-  const strips: RadiationStrip[] = [
-    { kind: "far-field", polygon: strip(chart, at, times.separationStart, times.separationEnd, "outgoing", outline) },
-    { kind: "far-field", polygon: strip(chart, at, times.holdEnd, times.recombinationEnd, "outgoing", outline) },
-  ];
+  const windows = history.windows;
+  const strips: RadiationStrip[] = windows.map((w) => ({
+    kind: "far-field" as const,
+    polygon: strip(at, w.startSeconds, w.startSeconds + w.durationSeconds, "outgoing", outline),
+  }));
+  const firstMove = windows[0].startSeconds;
+  const lastWindow = windows[windows.length - 1];
+  const lastMove = lastWindow.startSeconds + lastWindow.durationSeconds;
   const toHorizon = horizonDirection(chart);
-  if (toHorizon === "ingoing") strips.push({ kind: "horizon", polygon: strip(chart, at, times.separationStart, times.recombinationEnd, "ingoing", outline) });
-  if (toHorizon === "outgoing" && times.holdEnd > times.separationEnd) {
-    strips.push({ kind: "horizon", polygon: strip(chart, at, times.separationEnd, times.holdEnd, "outgoing", outline) });
+  if (toHorizon === "ingoing") strips.push({ kind: "horizon", polygon: strip(at, firstMove, lastMove, "ingoing", outline) });
+  if (toHorizon === "outgoing") {
+    // Outward, the horizon's share leaves between the moving windows, while the branches are held apart.
+    windows.slice(1).forEach((w, i) => {
+      const heldFrom = windows[i].startSeconds + windows[i].durationSeconds;
+      if (w.startSeconds > heldFrom && windows[i].fraction(1) > 0) {
+        strips.push({ kind: "horizon", polygon: strip(at, heldFrom, w.startSeconds, "outgoing", outline) });
+      }
+    });
   }
   return {
     timeScale,
     branches,
-    marks: [times.separationStart, times.separationEnd, times.holdEnd, times.recombinationEnd].map(at),
+    marks: [...new Set(windows.flatMap((w) => [w.startSeconds, w.startSeconds + w.durationSeconds]))].map(at),
     strips: strips.filter((s) => s.polygon.length >= 3),
   };
 }

@@ -90,7 +90,6 @@ function notesFor(chart: DiagramChart, document: ScenarioDocument, protocol: Pro
       `Protocol time ${how}: it lasts ${compactNumber(protocolEfolds)} horizon e-folding times (1/κ = ${formatQuantity(efoldSeconds, "time")}), drawn as ${compactNumber(drawnEfolds)}.`,
     );
   }
-  if (document.protocol.kind !== "segments") notes.push("The branches are drawn for segment protocols only.");
   return notes;
 }
 

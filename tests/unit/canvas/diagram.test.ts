@@ -117,3 +117,26 @@ describe("label layout", () => {
     expect(layoutLabels([label("edge", 395, 1)], { width: 400, height: 100 })).toEqual([]);
   });
 });
+
+describe("the diagram of a protocol that is not made of segments", () => {
+  it("draws the branches apart while a sampled profile holds them apart, with a far-field strip per moving stretch", () => {
+    const sampled: ScenarioDocument = {
+      ...documents.Schwarzschild,
+      protocol: {
+        kind: "sampled",
+        interpolation: "linear",
+        samples: [
+          { timeSeconds: 0, separationMetres: 0 },
+          { timeSeconds: 0.02, separationMetres: 1e-6 },
+          { timeSeconds: 0.1, separationMetres: 1e-6 },
+          { timeSeconds: 0.12, separationMetres: 0 },
+        ],
+      },
+    };
+    const protocol = sceneOf(sampled).protocol!;
+    expect(Math.max(...protocol.branches.map((b) => b.a))).toBeCloseTo(1, 6);
+    expect(protocol.branches[0].a).toBe(0);
+    expect(protocol.strips.filter((s) => s.kind === "far-field").length).toBeGreaterThanOrEqual(1);
+    expect(protocol.strips.some((s) => s.kind === "horizon")).toBe(true);
+  });
+});

@@ -35,7 +35,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
           {invitation.role === "viewer" ? ": to look at its scenarios, not change them." : ": to look at and change its scenarios."}
         </p>
         <p className="mt-2 text-sm text-ink-faint">
-          The link works once, until <TimeStamp iso={invitation.expiresAt} layout="inline" />.
+          The link works once and expires <TimeStamp iso={invitation.expiresAt} layout="inline" />.
         </p>
       </div>
 

@@ -14,6 +14,7 @@ import { boundaryTicks, offsetTicks } from "../kernels/lab-view/axis-ticks";
 import type { HandlePlacement } from "../kernels/lab-view/handles";
 import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
+import { profilePaths } from "../kernels/profile";
 import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
 import { useFigureFonts } from "./useFigureFonts";
 
@@ -31,7 +32,19 @@ function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separati
     a.push(x, metresToPx(viewport, offsets.a));
     b.push(x, metresToPx(viewport, offsets.b));
   }
-  return { a, b, times };
+  return { a, b };
+}
+
+/** A formula or sampled profile, as the physics library samples it (shown, not edited: it has no handles). */
+function profileCurves(viewport: LabViewport, document: Parameters<typeof profilePaths>[0]) {
+  const a: number[] = [];
+  const b: number[] = [];
+  for (const p of profilePaths(document, 400)) {
+    const x = timeToPx(viewport, p.timeSeconds);
+    a.push(x, metresToPx(viewport, p.branchAMetres));
+    b.push(x, metresToPx(viewport, p.branchBMetres));
+  }
+  return { a, b };
 }
 
 function Handle({ handle, viewport, palette, state }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette; state: "plain" | "hover" | "selected" }) {
@@ -85,18 +98,17 @@ export default function LabViewStage({ width, height }: { width: number; height:
   const hovered = handles.find((h) => h.id === hover);
   const cursor = dragging ? "grabbing" : hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
 
-  if (!protocol || !viewport) {
-    return (
-      <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">
-        The Lab view edits segment protocols (separation, hold, recombination); this scenario uses a {document.protocol.kind} profile.
-      </div>
-    );
+  if (!viewport) {
+    return <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">This scenario's {document.protocol.kind} profile cannot be read.</div>;
   }
-  const { a, b, times } = branchPaths(viewport, protocol, document.separation, origin);
+  const drawn = protocol ? branchPaths(viewport, protocol, document.separation, origin) : profileCurves(viewport, document);
+  const { a, b } = drawn;
   const { plot } = viewport;
   const bottom = plot.top + plot.height;
   const zeroY = metresToPx(viewport, 0);
-  const bounds = boundaryTicks(viewport, times);
+  const bounds = protocol
+    ? boundaryTicks(viewport, segmentTimes(protocol, origin))
+    : [viewport.pieces[1].fromSeconds, viewport.pieces[viewport.pieces.length - 2].toSeconds].map((t) => ({ px: timeToPx(viewport, t), valueSI: t }));
   const axisWords = `offset along the ${document.separation.axis} axis`;
 
   return (
@@ -119,7 +131,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
       <Stage width={width} height={height} listening={false}>
         <Layer>
           <Rect x={0} y={0} width={width} height={height} fill={palette.paper} />
-          {SEGMENT_NAMES.map((name, i) => {
+          {protocol && SEGMENT_NAMES.map((name, i) => {
             const x0 = bounds[i].px;
             const x1 = bounds[i + 1].px;
             return (

@@ -8,6 +8,7 @@ import { fitLabViewport, type LabViewport } from "../kernels/lab-view/viewport";
 import { segmentTimes, segmentsProtocolOf, type SegmentsProtocol } from "../kernels/timeline";
 import type { ScenarioDocument, SeparationSpec } from "@/physics/scenario/schema";
 import { sameData } from "./patches";
+import { profileHistory } from "../kernels/profile";
 import type { EditorData } from "./state";
 
 export interface LabViewSelectors {
@@ -21,6 +22,14 @@ export function createLabViewSelectors(): LabViewSelectors {
   const fitted = memoizeLast((protocol: SegmentsProtocol, separation: SeparationSpec, width: number, height: number) =>
     fitLabViewport(segmentTimes(protocol), separation, { width, height }),
   );
+  // A formula or sampled profile is shown (not edited) on a plain linear time axis over its whole duration.
+  const profiled = memoizeLast((protocol: ScenarioDocument["protocol"], separation: SeparationSpec, width: number, height: number) => {
+    const history = profileHistory({ protocol, separation });
+    if (!history) return null;
+    const total = history.totalDurationSeconds;
+    const thirds = { separationStart: 0, separationEnd: total / 3, holdEnd: (2 * total) / 3, recombinationEnd: total };
+    return fitLabViewport(thirds, { split: separation.split, distanceMetres: history.peakSeparationMetres }, { width, height });
+  });
   const placed = memoizeLast((viewport: LabViewport, protocol: SegmentsProtocol, separation: SeparationSpec, origin: number, readOnly: boolean) =>
     readOnly ? [] : handlePlacements(viewport, protocol, separation, origin),
   );
@@ -28,14 +37,15 @@ export function createLabViewSelectors(): LabViewSelectors {
     viewport(state) {
       if (state.labTool.name === "dragging") return state.labTool.start.viewport;
       const protocol = segmentsProtocolOf(state.document);
-      return protocol ? fitted(protocol, state.document.separation, state.labViewSize.width, state.labViewSize.height) : null;
+      const { width, height } = state.labViewSize;
+      return protocol ? fitted(protocol, state.document.separation, width, height) : profiled(state.document.protocol, state.document.separation, width, height);
     },
     originSeconds(state) {
       return state.labTool.name === "dragging" ? (state.labTool.plan?.originSeconds ?? 0) : 0;
     },
     handles(state) {
-      const viewport = selectors.viewport(state);
       const protocol = segmentsProtocolOf(state.document);
+      const viewport = protocol ? selectors.viewport(state) : null;
       if (!viewport || !protocol) return [];
       return placed(viewport, protocol, state.document.separation, selectors.originSeconds(state), state.readOnly);
     },

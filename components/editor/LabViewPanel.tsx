@@ -58,6 +58,7 @@ function HandleFields() {
 export function LabViewPanel() {
   const store = useEditorStore();
   const readOnly = useEditor((s) => s.readOnly);
+  const editable = useEditor((s) => !s.readOnly && s.document.protocol.kind === "segments");
   const [ref, size] = useElementSize<HTMLDivElement>({ width: 600, height: HEIGHT });
   useEffect(() => {
     if (size.width > 0) store.getState().setLabViewSize({ width: size.width, height: HEIGHT });
@@ -69,7 +70,11 @@ export function LabViewPanel() {
           Lab view
         </h2>
         <p className="text-xs text-ink-faint">
-          {readOnly ? "Read-only." : "Drag a handle; Shift snaps to round values; arrow keys nudge the selected handle."}
+          {editable
+            ? "Drag a handle; Shift snaps to round values; arrow keys nudge the selected handle."
+            : readOnly
+              ? "Read-only."
+              : "A formula or sampled profile is shown, not edited: the handles belong to segment protocols."}
         </p>
       </div>
       <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height: HEIGHT }}>

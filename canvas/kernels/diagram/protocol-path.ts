@@ -8,8 +8,8 @@
  * needs neither (its scale L is chosen from the protocol's duration, see chart.ts).
  */
 import type { DiagramPoint } from "@/physics/backgrounds";
-import { branchPositions, fractionAt, separationHistory, type SeparationHistory } from "@/physics/protocols";
-import { ScenarioInputError } from "@/physics/scenario/input-error";
+import { branchPositions, fractionAt } from "@/physics/protocols";
+import { profileHistory } from "../profile";
 import type { DiagramChart } from "./chart";
 import { bisect, clipToConvex } from "./geometry";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
@@ -96,18 +96,8 @@ function strip(
   return clipToConvex([...along, ...far], outline);
 }
 
-/** The protocol's history (every kind: segments, formula, samples), or null when it cannot be read. */
-function historyOf(document: ScenarioDocument): SeparationHistory | null {
-  try {
-    return separationHistory(document);
-  } catch (error) {
-    if (error instanceof ScenarioInputError) return null;
-    throw error;
-  }
-}
-
 export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocument, outline: DiagramPoint[]): ProtocolOnDiagram | null {
-  const history = historyOf(document);
+  const history = profileHistory(document);
   if (!history || history.windows.length === 0) return null;
   const total = history.totalDurationSeconds;
   const timeScale = timeScaleOf(chart, total);

@@ -157,3 +157,29 @@ describe("saving state in the store", () => {
     expect(s.history.past).toHaveLength(0);
   });
 });
+
+describe("the Lab view of a profile that is not made of segments", () => {
+  it("gets axes over the whole profile but no handles, so a press changes nothing", () => {
+    const sampled = {
+      ...schwarzschildDocument(),
+      protocol: {
+        kind: "sampled" as const,
+        interpolation: "linear" as const,
+        samples: [
+          { timeSeconds: 0, separationMetres: 0 },
+          { timeSeconds: 0.5, separationMetres: 2e-6 },
+          { timeSeconds: 1, separationMetres: 0 },
+        ],
+      },
+    };
+    const h = createHarness({ document: sampled });
+    const s = h.store.getState();
+    const viewport = s.labView.viewport(s)!;
+    expect(viewport.pieces[1].fromSeconds).toBe(0);
+    expect(viewport.pieces[viewport.pieces.length - 2].toSeconds).toBe(1);
+    expect(s.labView.handles(s)).toEqual([]);
+    s.labPointerDown({ x: 300, y: 150, shiftKey: false });
+    s.labPointerUp({ x: 400, y: 150, shiftKey: false });
+    expect(h.document()).toBe(sampled);
+  });
+});

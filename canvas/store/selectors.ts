@@ -17,6 +17,9 @@ export interface LabViewSelectors {
   handles(state: EditorData): HandlePlacement[];
 }
 
+/** Shared, so that asking twice answers the same array (a new one each time would re-render subscribers forever). */
+const NO_HANDLES: HandlePlacement[] = [];
+
 /** One set per store (memoised values must not be shared between editors). */
 export function createLabViewSelectors(): LabViewSelectors {
   const fitted = memoizeLast((protocol: SegmentsProtocol, separation: SeparationSpec, width: number, height: number) =>
@@ -46,7 +49,7 @@ export function createLabViewSelectors(): LabViewSelectors {
     handles(state) {
       const protocol = segmentsProtocolOf(state.document);
       const viewport = protocol ? selectors.viewport(state) : null;
-      if (!viewport || !protocol) return [];
+      if (!viewport || !protocol) return NO_HANDLES;
       return placed(viewport, protocol, state.document.separation, selectors.originSeconds(state), state.readOnly);
     },
   };

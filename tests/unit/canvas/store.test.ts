@@ -178,6 +178,8 @@ describe("the Lab view of a profile that is not made of segments", () => {
     expect(viewport.pieces[1].fromSeconds).toBe(0);
     expect(viewport.pieces[viewport.pieces.length - 2].toSeconds).toBe(1);
     expect(s.labView.handles(s)).toEqual([]);
+    expect(s.labView.handles(s)).toBe(s.labView.handles(s));
+    expect(s.labView.viewport(s)).toBe(s.labView.viewport(s));
     s.labPointerDown({ x: 300, y: 150, shiftKey: false });
     s.labPointerUp({ x: 400, y: 150, shiftKey: false });
     expect(h.document()).toBe(sampled);

@@ -55,13 +55,16 @@ export function SweepPanel() {
   const revision = useEditor((s) => s.revision);
   const readOnly = useEditor((s) => s.readOnly);
   const sweep = useEditor((s) => s.sweep);
-  const parameter = sweep.parameter;
+  const available: SweepParameter[] = [
+    ...(document.protocol.kind === "segments" ? (["recombination-time", "hold-time"] as const) : []),
+    ...(document.background.kind === "minkowski" ? [] : (["lab-distance"] as const)),
+  ];
+  const parameter = available.includes(sweep.parameter) ? sweep.parameter : (available[0] ?? sweep.parameter);
   const dimension = dimensionOf(parameter);
   const [range, setRange] = useState<{ from: number; to: number } | null>(null);
   const shownRange = range ?? defaultSweepRange(document, parameter);
   const current = currentSweepValue(document, parameter);
   const showProgress = useShowAfter(sweep.status === "running", PROGRESS_AFTER_MS);
-  const available: SweepParameter[] = document.background.kind === "minkowski" ? ["recombination-time", "hold-time"] : ["recombination-time", "hold-time", "lab-distance"];
 
   const run = () => {
     if (!shownRange) return;
@@ -101,6 +104,16 @@ export function SweepPanel() {
   const stale = sweep.result !== null && sweep.requestRevision !== revision;
   const setTo = (x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x));
 
+  if (available.length === 0) {
+    return (
+      <section aria-labelledby="sweep-heading" data-testid="sweep">
+        <h2 id="sweep-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
+          Sweep
+        </h2>
+        <p className="text-sm text-ink-soft">Nothing to sweep here: a formula or sampled profile in flat spacetime has no segment times and no horizon distance.</p>
+      </section>
+    );
+  }
   return (
     <section aria-labelledby="sweep-heading" data-testid="sweep">
       <h2 id="sweep-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">

@@ -133,5 +133,6 @@ export function fitLabViewport(
 
 /** Pixel positions where the scale changes from one piece to the next (drawn as small breaks on the axis). */
 export function scaleBreaksPx(viewport: LabViewport): number[] {
-  return viewport.pieces.slice(1).map((p) => p.fromPx);
+  const { pieces } = viewport;
+  return pieces.slice(1).filter((p, i) => Math.abs(pieceScale(p) / pieceScale(pieces[i]) - 1) > 0.01).map((p) => p.fromPx);
 }

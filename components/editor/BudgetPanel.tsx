@@ -9,6 +9,7 @@ import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { budgetIsStale } from "@/canvas/store/selectors";
 import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
+import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
 import { quantityText } from "./quantity-text";
 
@@ -133,6 +134,7 @@ export function BudgetPanel() {
                 {c.channel === "electromagnetic" ? "Electromagnetic" : "Gravitational"}: exactly zero — {c.exactZeroReason}.
               </p>
             ))}
+          <EstimateComparison channels={channels} />
           <Flags flags={result.flags} />
         </div>
       )}

@@ -6,6 +6,7 @@
  */
 import { all, create, type Unit } from "mathjs";
 import { c, e as elementaryChargeCoulombs, epsilon0, G, hbar, planckLength, planckMass, planckTime, solarMass } from "./constants";
+import { superscript } from "./superscript";
 
 const math = create(all);
 math.createUnit("Msun", { definition: `${solarMass.value} kg` });
@@ -80,8 +81,6 @@ const PRINTING: Record<QuantityDimension, { symbol: string; perSI: number; prefi
   rate: { symbol: "s⁻¹", perSI: 1, prefixes: null },
 };
 
-const SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-const superscript = (n: number) => `${n < 0 ? "⁻" : ""}${[...String(Math.abs(n))].map((d) => SUPERSCRIPT_DIGITS[Number(d)]).join("")}`;
 
 /** value = mantissa × 10^exponent with exponent a multiple of `step` and |mantissa| ∈ [1, 10^step) after rounding. */
 function splitEngineering(value: number, step: number, digits: number): { mantissa: string; exponent: number } {

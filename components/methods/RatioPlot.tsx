@@ -1,5 +1,6 @@
 "use client";
 
+import { superscript } from "@/physics/superscript";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 
 export interface RatioPlotPoint {
@@ -8,8 +9,7 @@ export interface RatioPlotPoint {
   tangential: number;
 }
 
-const superscript: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
-const powerOfTen = (v: number) => `10${String(Math.round(Math.log10(v))).replace(/./g, (ch) => superscript[ch])}`;
+const powerOfTen = (v: number) => `10${superscript(Math.round(Math.log10(v)))}`;
 
 function decades(values: number[]): number[] {
   const lo = Math.floor(Math.log10(Math.min(...values)));

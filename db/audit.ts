@@ -5,22 +5,27 @@ import { roleInProject } from "./members";
 import type { AuditAction, Database, NewProjectAuditEntry, ProjectRole } from "./schema";
 import type { PersonDto } from "./scenarios";
 
-/** One membership change: who did what to whom, and when. */
+/** One change in the project: who did what to whom (a membership change) or to which scenario (a share link, a file), and when. */
 export interface AuditEntryDto {
   id: string;
   at: string;
   action: AuditAction;
   /** Null when the account that did it has since been deleted. */
   actor: PersonDto | null;
-  target: { userId: string | null; name: string | null; email: string };
+  /** The person concerned; null for entries about a scenario. */
+  target: { userId: string | null; name: string | null; email: string } | null;
   role: ProjectRole | null;
   previousRole: ProjectRole | null;
+  /** The scenario concerned (title as it is now; null once deleted, or for membership changes). */
+  scenario: { id: string; title: string } | null;
+  /** What was concerned, named at the time: a share link's label, a file's name. */
+  subject: string | null;
 }
 
 /** How many entries the members page shows, newest first. */
 export const AUDIT_PAGE_SIZE = 100;
 
-/** Records a membership change; call it inside the transaction that makes the change, so both or neither stay. */
+/** Records a change; call it inside the transaction that makes the change, so both or neither stay. */
 export async function recordAudit(db: Kysely<Database>, entry: Omit<NewProjectAuditEntry, "id" | "createdAt">): Promise<void> {
   await db.insertInto("projectAudit").values(entry).execute();
 }
@@ -31,6 +36,7 @@ export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: s
     .selectFrom("projectAudit as a")
     .leftJoin("users as actor", "actor.id", "a.actorId")
     .leftJoin("users as target", "target.id", "a.targetUserId")
+    .leftJoin("scenarios as s", "s.id", "a.scenarioId")
     .select([
       "a.id",
       "a.createdAt",
@@ -42,6 +48,9 @@ export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: s
       "a.targetEmail",
       "a.role",
       "a.previousRole",
+      "a.scenarioId",
+      "s.title as scenarioTitle",
+      "a.subject",
     ])
     .where("a.projectId", "=", projectId)
     .orderBy("a.createdAt", "desc")
@@ -53,8 +62,10 @@ export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: s
     at: r.createdAt.toISOString(),
     action: r.action,
     actor: r.actorId && r.actorName ? { id: r.actorId, name: r.actorName } : null,
-    target: { userId: r.targetUserId, name: r.targetName, email: r.targetEmail },
+    target: r.targetEmail === null ? null : { userId: r.targetUserId, name: r.targetName, email: r.targetEmail },
     role: r.role,
     previousRole: r.previousRole,
+    scenario: r.scenarioId && r.scenarioTitle ? { id: r.scenarioId, title: r.scenarioTitle } : null,
+    subject: r.subject,
   }));
 }

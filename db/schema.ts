@@ -127,7 +127,12 @@ export type AuditAction =
   | "role_changed"
   | "member_removed"
   | "member_left"
-  | "ownership_transferred";
+  | "ownership_transferred"
+  | "share_link_created"
+  | "share_link_revoked"
+  | "attachment_added"
+  | "attachment_deleted"
+  | "scenario_imported";
 
 export interface ProjectAuditTable {
   id: Generated<string>;
@@ -135,9 +140,13 @@ export interface ProjectAuditTable {
   actorId: string | null;
   action: AuditAction;
   targetUserId: string | null;
-  targetEmail: string;
+  /** The target's address at the time; null for entries about a scenario rather than a person. */
+  targetEmail: string | null;
   role: ProjectRole | null;
   previousRole: ProjectRole | null;
+  /** For entries about a scenario: which one (null once deleted) and what, named at the time (link label, file name). */
+  scenarioId: string | null;
+  subject: string | null;
   createdAt: Generated<Date>;
 }
 

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
+import { recordAudit } from "./audit";
 import { type Actor, assertProjectAccess, assertShareLinkAccess, shareLinkIsOpen } from "./access";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
@@ -82,26 +83,35 @@ export async function createShareLink(
   await assertManages(db, actor, projectId, scenarioId);
   const token = newToken();
   const expiresAt = input.expiresInDays ? new Date(Date.now() + input.expiresInDays * 24 * 3600_000) : null;
-  const { id } = await db
-    .insertInto("shareLinks")
-    .values({ projectId, scenarioId, label: input.label, tokenHash: hashToken(token), createdBy: actor.userId, expiresAt })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const id = await db.transaction().execute(async (trx) => {
+    const row = await trx
+      .insertInto("shareLinks")
+      .values({ projectId, scenarioId, label: input.label, tokenHash: hashToken(token), createdBy: actor.userId, expiresAt })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await recordAudit(trx, { projectId, actorId: actor.userId, action: "share_link_created", scenarioId, subject: input.label });
+    return row.id;
+  });
   return { link: toDto(await linkQuery(db, projectId, scenarioId).where("l.id", "=", id).executeTakeFirstOrThrow()), token };
 }
 
 export async function revokeShareLink(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string, linkId: string): Promise<void> {
   await assertManages(db, actor, projectId, scenarioId);
   if (!isUuid(linkId)) throw notFound("share link");
-  const revoked = await db
-    .updateTable("shareLinks")
-    .set({ revokedAt: new Date() })
-    .where("id", "=", linkId)
-    .where("projectId", "=", projectId)
-    .where("scenarioId", "=", scenarioId)
-    .where("revokedAt", "is", null)
-    .executeTakeFirst();
-  if (revoked.numUpdatedRows > 0n) return;
+  const revoked = await db.transaction().execute(async (trx) => {
+    const row = await trx
+      .updateTable("shareLinks")
+      .set({ revokedAt: new Date() })
+      .where("id", "=", linkId)
+      .where("projectId", "=", projectId)
+      .where("scenarioId", "=", scenarioId)
+      .where("revokedAt", "is", null)
+      .returning("label")
+      .executeTakeFirst();
+    if (row) await recordAudit(trx, { projectId, actorId: actor.userId, action: "share_link_revoked", scenarioId, subject: row.label });
+    return row;
+  });
+  if (revoked) return;
   const exists = await linkQuery(db, projectId, scenarioId).where("l.id", "=", linkId).executeTakeFirst();
   if (!exists) throw notFound("share link");
   throw conflict("this share link is already revoked");

@@ -323,6 +323,17 @@ describe("read-only share links", () => {
     expect(views.viewCount).toBe(0);
   });
 
+  it("records who made and who revoked each link in the project's history, with its label and scenario", async () => {
+    const { link } = await createLink({ label: "for the seminar" });
+    await call(shareLinkRoute.DELETE, "DELETE", "/x", { as: f.users.owner, params: { ...S(), linkId: link.id } });
+    const entries = (await call(auditRoute.GET, "GET", "/x", { as: f.users.owner, params: { projectId: f.projectId } })).body.entries;
+    const about = entries.filter((e: { subject: string | null }) => e.subject === "for the seminar");
+    expect(about).toEqual([
+      expect.objectContaining({ action: "share_link_revoked", actor: expect.objectContaining({ id: f.users.owner.id }), target: null, scenario: { id: f.scenarioId, title: "Fixture scenario" } }),
+      expect.objectContaining({ action: "share_link_created", actor: expect.objectContaining({ id: f.users.editor.id }), target: null, scenario: { id: f.scenarioId, title: "Fixture scenario" } }),
+    ]);
+  });
+
   it("answers 404 after its expiry", async () => {
     const { link, token } = await createLink({ label: "for a week", expiresInDays: 7 });
     const days = (Date.parse(link.expiresAt) - Date.now()) / 86_400_000;

@@ -3,7 +3,7 @@ import type { Kysely } from "kysely";
 import { type Actor, assertProjectAccess } from "./access";
 import { roleInProject } from "./members";
 import type { AuditAction, Database, NewProjectAuditEntry, ProjectRole } from "./schema";
-import type { PersonDto } from "./scenarios";
+import { person, type PersonDto } from "./people";
 
 /** One change in the project: who did what to whom (a membership change) or to which scenario (a share link, a file), and when. */
 export interface AuditEntryDto {
@@ -61,7 +61,7 @@ export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: s
     id: r.id,
     at: r.createdAt.toISOString(),
     action: r.action,
-    actor: r.actorId && r.actorName ? { id: r.actorId, name: r.actorName } : null,
+    actor: person(r.actorId, r.actorName),
     target: r.targetEmail === null ? null : { userId: r.targetUserId, name: r.targetName, email: r.targetEmail },
     role: r.role,
     previousRole: r.previousRole,

@@ -7,7 +7,7 @@ import { isUuid } from "./ids";
 import { insertMember, roleInProject } from "./members";
 import { hashToken, newToken } from "./tokens";
 import type { Database, InvitedRole, ProjectInvitationUpdate } from "./schema";
-import type { PersonDto } from "./scenarios";
+import { person, type PersonDto } from "./people";
 
 /** How long an invitation link works. */
 export const INVITATION_DAYS = 7;
@@ -69,7 +69,7 @@ function toDto(r: InvitationRow, now = new Date()): InvitationDto {
     email: r.email,
     role: r.role,
     status: r.expiresAt > now ? "pending" : "expired",
-    invitedBy: r.invitedBy && r.invitedByName ? { id: r.invitedBy, name: r.invitedByName } : null,
+    invitedBy: person(r.invitedBy, r.invitedByName),
     createdAt: r.createdAt.toISOString(),
     sentAt: r.sentAt.toISOString(),
     expiresAt: r.expiresAt.toISOString(),

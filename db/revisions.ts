@@ -6,7 +6,8 @@ import { diffDocuments, type DocumentDiff } from "../lib/document-diff";
 import { AppError, notFound } from "./errors";
 import { roleInProject } from "./members";
 import type { Database } from "./schema";
-import { assertScenarioInProject, type PersonDto, saveNextVersion, type ScenarioDto } from "./scenarios";
+import { person, type PersonDto } from "./people";
+import { assertScenarioInProject, saveNextVersion, type ScenarioDto } from "./scenarios";
 
 export interface RevisionSummaryDto {
   version: number;
@@ -49,7 +50,7 @@ function toSummary(r: RevisionRow): RevisionSummaryDto {
     title: r.title,
     schemaVersion: r.schemaVersion,
     createdAt: r.createdAt.toISOString(),
-    createdBy: r.createdBy && r.createdByName ? { id: r.createdBy, name: r.createdByName } : null,
+    createdBy: person(r.createdBy, r.createdByName),
   };
 }
 

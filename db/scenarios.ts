@@ -5,12 +5,10 @@ import { type Actor, assertProjectAccess } from "./access";
 import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { roleInProject } from "./members";
+import { person, type PersonDto } from "./people";
 import type { Database } from "./schema";
 
-export interface PersonDto {
-  id: string;
-  name: string;
-}
+export type { PersonDto };
 
 export interface ScenarioSummaryDto {
   id: string;
@@ -86,7 +84,6 @@ function baseQuery(db: Kysely<Database>) {
 
 type SummaryRow = Awaited<ReturnType<ReturnType<typeof baseQuery>["executeTakeFirstOrThrow"]>>;
 
-const person = (id: string | null, name: string | null): PersonDto | null => (id && name ? { id, name } : null);
 
 function toSummary(row: SummaryRow): ScenarioSummaryDto {
   return {

@@ -6,7 +6,8 @@ import { type Actor, assertProjectAccess, assertShareLinkAccess, shareLinkIsOpen
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { roleInProject } from "./members";
-import { assertScenarioInProject, type PersonDto } from "./scenarios";
+import { person, type PersonDto } from "./people";
+import { assertScenarioInProject } from "./scenarios";
 import { hashToken, newToken } from "./tokens";
 import type { Database } from "./schema";
 
@@ -52,7 +53,7 @@ function toDto(r: LinkRow, now = new Date()): ShareLinkDto {
     label: r.label,
     status,
     createdAt: r.createdAt.toISOString(),
-    createdBy: r.createdBy && r.createdByName ? { id: r.createdBy, name: r.createdByName } : null,
+    createdBy: person(r.createdBy, r.createdByName),
     expiresAt: r.expiresAt?.toISOString() ?? null,
     revokedAt: r.revokedAt?.toISOString() ?? null,
     viewCount: r.viewCount,

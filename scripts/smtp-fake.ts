@@ -1,26 +1,16 @@
 /**
  * A fake SMTP server for the demo and the tests, on loopback only. It accepts every message, keeps the newest
- * 500 in memory, and serves them as JSON over HTTP for the development mailbox page and the tests:
- *   GET    /messages        newest first: { id, from, to, subject, text, receivedAt }
- *   DELETE /messages        forget them all
+ * 500 in memory, and serves them as JSON over HTTP (the mailbox API of lib/mailbox.ts).
  * Ports: SMTP_FAKE_PORT (default 2525) and MAILBOX_PORT (default 2526).
  */
 import http from "node:http";
 import { simpleParser } from "mailparser";
 import { SMTPServer } from "smtp-server";
-
-interface StoredMessage {
-  id: number;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  receivedAt: string;
-}
+import type { MailboxMessage } from "../lib/mailbox";
 
 const smtpPort = Number(process.env.SMTP_FAKE_PORT ?? 2525);
 const httpPort = Number(process.env.MAILBOX_PORT ?? 2526);
-const messages: StoredMessage[] = [];
+const messages: MailboxMessage[] = [];
 let nextId = 1;
 
 const smtp = new SMTPServer({

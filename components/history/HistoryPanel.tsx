@@ -9,8 +9,8 @@ import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
-import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, tableStyles } from "@/components/ui/styles";
+import { RevisionCells, revisionColumns } from "@/components/scenario/RevisionCells";
 import { ParameterComparison } from "./ParameterComparison";
 
 interface Pair {
@@ -33,10 +33,7 @@ export function HistoryPanel({ scenario, canRestore }: { scenario: ScenarioDto; 
   const [restored, setRestored] = useState<string | null>(null);
 
   const columns = [
-    { label: "Version", className: "text-right" },
-    { label: "Title then" },
-    { label: "Saved by" },
-    { label: "When" },
+    ...revisionColumns,
     { label: "Compare: older" },
     { label: "Compare: newer" },
     ...(canRestore ? [{ label: "Restore", hiddenLabel: true }] : []),
@@ -68,15 +65,7 @@ export function HistoryPanel({ scenario, canRestore }: { scenario: ScenarioDto; 
                 <tbody>
                   {list.map((revision) => (
                     <tr key={revision.version} className={tableStyles.row}>
-                      <td className={`${tableStyles.cell} tabular text-right`}>
-                        v{revision.version}
-                        {revision.version === scenario.version && <span className="ml-2 font-sans text-xs text-ink-faint">current</span>}
-                      </td>
-                      <td className={tableStyles.cell}>{revision.title}</td>
-                      <td className={`${tableStyles.cell} text-ink-soft`}>{revision.createdBy?.name ?? "—"}</td>
-                      <td className={tableStyles.cell}>
-                        <TimeStamp iso={revision.createdAt} layout="inline" />
-                      </td>
+                      <RevisionCells revision={revision} currentVersion={scenario.version} />
                       {(["older", "newer"] as const).map((side) => (
                         <td key={side} className={`${tableStyles.cell} text-center`}>
                           <input

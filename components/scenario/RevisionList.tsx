@@ -2,11 +2,9 @@
 
 import { useRevisions } from "@/components/api/scenarios";
 import { QueryView } from "@/components/ui/QueryStates";
-import { TimeStamp } from "@/components/ui/TimeStamp";
 import { TableHead } from "@/components/ui/TableHead";
 import { tableStyles } from "@/components/ui/styles";
-
-const revisionColumns = [{ label: "Version", className: "text-right" }, { label: "Title then" }, { label: "Saved by" }, { label: "When" }];
+import { RevisionCells, revisionColumns } from "./RevisionCells";
 
 export function RevisionList({ projectId, scenarioId, currentVersion }: { projectId: string; scenarioId: string; currentVersion: number }) {
   const revisions = useRevisions(projectId, scenarioId);
@@ -23,15 +21,7 @@ export function RevisionList({ projectId, scenarioId, currentVersion }: { projec
             <tbody>
               {list.map((revision) => (
                 <tr key={revision.version} className={tableStyles.row}>
-                  <td className={`${tableStyles.cell} tabular text-right`}>
-                    v{revision.version}
-                    {revision.version === currentVersion && <span className="ml-2 font-sans text-xs text-ink-faint">current</span>}
-                  </td>
-                  <td className={tableStyles.cell}>{revision.title}</td>
-                  <td className={`${tableStyles.cell} text-ink-soft`}>{revision.createdBy?.name ?? "—"}</td>
-                  <td className={tableStyles.cell}>
-                    <TimeStamp iso={revision.createdAt} layout="inline" />
-                  </td>
+                  <RevisionCells revision={revision} currentVersion={currentVersion} />
                 </tr>
               ))}
             </tbody>

@@ -1,9 +1,7 @@
 /** Reads the fake SMTP server's mailbox API (scripts/smtp-fake.ts), which keeps every message it received. */
-export interface MailboxMessage {
-  to: string[];
-  subject: string;
-  text: string;
-}
+import type { MailboxMessage } from "@/lib/mailbox";
+
+export type { MailboxMessage };
 
 /** Every message to this address, newest first. */
 export async function mailboxMessagesTo(address: string): Promise<MailboxMessage[]> {

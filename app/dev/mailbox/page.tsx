@@ -1,17 +1,10 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import type { MailboxMessage } from "@/lib/mailbox";
 
 export const metadata: Metadata = { title: "Development mailbox" };
 export const dynamic = "force-dynamic";
 
-interface MailboxMessage {
-  id: number;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  receivedAt: string;
-}
 
 /**
  * The messages the local fake SMTP server received, for the demo and for development. Exists only when

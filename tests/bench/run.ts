@@ -101,3 +101,7 @@ const lines = [
   `target exact rate < 100 ms per 200-point sweep: ${verdict(exactSweep < 100)}`,
 ];
 console.log(lines.join("\n"));
+
+// The browser bench needs a running Branchline with the demo data, so it runs only when BRANCH_URL names one.
+if (process.env.BRANCH_URL) void import("./editor-browser");
+else console.log("editor in the browser: skipped (set BRANCH_URL to a running Branchline with the demo data)");

@@ -3,15 +3,17 @@
 /**
  * The Lab view: both branches' offsets along the separation axis against the lab's proper time, at a scale where
  * a micrometre reads, with the handles that set the protocol. Pointer events go to the store's drag-handle tool
- * (captured, so a drag may leave the stage); arrow keys nudge the selected handle.
+ * (captured, so a drag may leave the stage). From the keyboard, Tab and Shift+Tab walk the handles in protocol order
+ * (a ring marks the one selected while the view has focus, and a live line names it with its value), arrow keys
+ * nudge it, Escape lets it go.
  */
-import { useRef, type KeyboardEvent, type PointerEvent } from "react";
+import { useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { compactQuantity } from "../kernels/diagram/labels";
 import { boundaryTicks, offsetTicks } from "../kernels/lab-view/axis-ticks";
-import type { HandlePlacement } from "../kernels/lab-view/handles";
+import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/lab-view/handles";
 import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
 import { profilePaths } from "../kernels/profile";
@@ -47,6 +49,20 @@ function profileCurves(viewport: LabViewport, document: Parameters<typeof profil
   return { a, b };
 }
 
+/** A ring around the selected handle while the Lab view has keyboard focus: round on the point, tall on a rule's grip. */
+function FocusRing({ handle, viewport, palette }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette }) {
+  if (handle.axis === "distance") return <Circle x={handle.x} y={handle.y} radius={17} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
+  const bottom = viewport.plot.top + viewport.plot.height;
+  return <Rect x={handle.x - 9} y={bottom - 11} width={18} height={22} cornerRadius={4} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
+}
+
+/** What the live line says about the selected handle: its name and the value it sets. */
+function selectionWords(handle: HandleId | null, protocol: SegmentsProtocol | null, separation: Parameters<typeof handleValueSI>[2]): string {
+  if (!handle || !protocol) return "";
+  const value = formatQuantity(handleValueSI(handle, protocol, separation), isTimeHandle(handle) ? "time" : "length", { digits: 4 });
+  return `${HANDLE_WORDS[handle]} selected: ${value}${isTimeHandle(handle) ? " from the start of the separation" : ""}.`;
+}
+
 function Handle({ handle, viewport, palette, state }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette; state: "plain" | "hover" | "selected" }) {
   const colour = state === "selected" ? palette.focus : state === "hover" ? palette.ink : palette.inkSoft;
   const { plot } = viewport;
@@ -79,6 +95,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
   const dragging = useEditor((s) => s.labTool.name === "dragging");
   const fonts = useFigureFonts();
   const container = useRef<HTMLDivElement>(null);
+  const [focused, setFocused] = useState(false);
   const palette = FIGURE_PALETTES[document.display.theme];
   const protocol = document.protocol.kind === "segments" ? document.protocol : null;
 
@@ -96,6 +113,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
     if (store.getState().labKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
   };
   const hovered = handles.find((h) => h.id === hover);
+  const selected = handles.find((h) => h.id === selection);
   const cursor = dragging ? "grabbing" : hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
 
   if (!viewport) {
@@ -116,10 +134,15 @@ export default function LabViewStage({ width, height }: { width: number; height:
       ref={container}
       tabIndex={0}
       role="application"
-      aria-label="Lab view: branch offsets against lab time; drag or use the arrow keys to move the selected handle"
+      aria-label="Lab view: branch offsets against lab time; Tab selects the next handle, the arrow keys move it, Escape lets it go"
+      aria-describedby="lab-view-selection"
       data-testid="lab-view"
+      data-selected={selection ?? ""}
       data-handles={JSON.stringify(handles.map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })))}
-      style={{ cursor, touchAction: "none", outline: "none" }}
+      className="relative h-full rounded focus-visible:outline-2 focus-visible:outline-offset-[-2px] focus-visible:outline-focus"
+      style={{ cursor, touchAction: "none" }}
+      onFocus={() => setFocused(true)}
+      onBlur={() => setFocused(false)}
       onPointerDown={onPointerDown}
       onPointerMove={(e) => store.getState().labPointerMove(local(e))}
       onPointerUp={(e) => store.getState().labPointerUp(local(e))}
@@ -175,8 +198,12 @@ export default function LabViewStage({ width, height }: { width: number; height:
           {handles.map((h) => (
             <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
           ))}
+          {focused && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
         </Layer>
       </Stage>
+      <p id="lab-view-selection" aria-live="polite" className="sr-only" data-testid="lab-view-selection">
+        {selectionWords(selection, protocol, document.separation)}
+      </p>
     </div>
   );
 }

@@ -4,9 +4,8 @@ import dynamic from "next/dynamic";
 import { useEffect } from "react";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { withProtocolPlan } from "@/canvas/kernels/document-edits";
-import { HANDLE_IDS, HANDLE_WORDS, handleTimeSeconds, isTimeHandle, type HandleId } from "@/canvas/kernels/lab-view/handles";
+import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle } from "@/canvas/kernels/lab-view/handles";
 import { planHandleValue } from "@/canvas/kernels/lab-view/typed-plan";
-import { segmentTimes } from "@/canvas/kernels/timeline";
 import { formatQuantity } from "@/physics/units";
 import { BranchLegend } from "./BranchLegend";
 import { QuantityField } from "./QuantityField";
@@ -29,8 +28,6 @@ function HandleFields() {
   const edit = useEdit();
   if (document.protocol.kind !== "segments") return null;
   const protocol = document.protocol;
-  const times = segmentTimes(protocol);
-  const valueOf = (handle: HandleId) => (isTimeHandle(handle) ? handleTimeSeconds(handle, times) : document.separation.distanceMetres);
   return (
     <div className="mt-3 grid grid-cols-5 gap-2" role="group" aria-label="Handle values">
       {HANDLE_IDS.map((handle) => (
@@ -39,7 +36,7 @@ function HandleFields() {
             compact
             label={HANDLE_WORDS[handle]}
             dimension={isTimeHandle(handle) ? "time" : "length"}
-            shown={formatQuantity(valueOf(handle), isTimeHandle(handle) ? "time" : "length", { digits: 4 })}
+            shown={formatQuantity(handleValueSI(handle, protocol, document.separation), isTimeHandle(handle) ? "time" : "length", { digits: 4 })}
             disabled={readOnly}
             testId={`handle-field-${handle}`}
             onFocus={() => store.getState().select(handle)}
@@ -71,7 +68,7 @@ export function LabViewPanel() {
         </h2>
         <p className="text-xs text-ink-faint">
           {editable
-            ? "Drag a handle; Shift snaps to round values; arrow keys nudge the selected handle."
+            ? "Drag a handle; Shift snaps to round values; Tab walks the handles, arrow keys nudge the selected one."
             : readOnly
               ? "Read-only."
               : "A formula or sampled profile is shown, not edited: the handles belong to segment protocols."}

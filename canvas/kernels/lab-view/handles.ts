@@ -16,6 +16,21 @@ export const HANDLE_WORDS: Record<HandleId, string> = {
   "separation-size": "Separation",
 };
 
+/** The handles in the order the protocol meets them (the order Tab walks): the plateau's height sits inside the hold. */
+export const PROTOCOL_ORDER: readonly HandleId[] = ["separation-start", "separation-end", "separation-size", "hold-end", "recombination-end"];
+
+/**
+ * The handle Tab (or Shift+Tab, `backwards`) selects next among those on screen, in protocol order; from no
+ * selection, the first (the last going backwards). Null past either end: the selection is let go and focus leaves.
+ */
+export function cycleHandle(current: HandleId | null, onScreen: readonly HandleId[], backwards: boolean): HandleId | null {
+  const order = PROTOCOL_ORDER.filter((id) => onScreen.includes(id));
+  if (order.length === 0) return null;
+  const index = current === null ? -1 : order.indexOf(current);
+  if (index === -1) return backwards ? order[order.length - 1] : order[0];
+  return order[index + (backwards ? -1 : 1)] ?? null;
+}
+
 export function isTimeHandle(handle: HandleId): handle is TimeHandleId {
   return handle !== "separation-size";
 }
@@ -31,6 +46,11 @@ export function handleTimeSeconds(handle: TimeHandleId, times: SegmentTimes): nu
     case "recombination-end":
       return times.recombinationEnd;
   }
+}
+
+/** What a handle sets, in SI: its instant on the lab's clock from the start of the separation, or the separation. */
+export function handleValueSI(handle: HandleId, protocol: SegmentsProtocol, separation: SeparationSpec): number {
+  return isTimeHandle(handle) ? handleTimeSeconds(handle, segmentTimes(protocol)) : separation.distanceMetres;
 }
 
 export type HandlePlacement =

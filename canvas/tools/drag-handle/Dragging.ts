@@ -1,6 +1,7 @@
 /**
  * Drag-handle tool, dragging: every move asks the drag kernel for a plan from the document at pointer-down and
  * previews it; release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
+ * Tab is held back while dragging, so focus stays in the Lab view.
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
 import { planHandleDrag } from "../../kernels/lab-view/drag-plan";
@@ -35,6 +36,8 @@ export const Dragging: ToolStateHandlers<Dragging> = {
   },
 
   onKeyDown(ctx, _state, event) {
+    // Tab would take focus away mid-drag: keep it until the drag ends.
+    if (event.key === "Tab") return true;
     if (event.key !== "Escape") return false;
     stop(ctx, "cancel");
     return true;

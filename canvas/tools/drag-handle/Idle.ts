@@ -1,7 +1,11 @@
-/** Drag-handle tool, idle: hovering shows which handle is under the pointer; pressing on one starts a drag. */
+/**
+ * Drag-handle tool, idle: hovering shows which handle is under the pointer; pressing on one starts a drag. From the
+ * keyboard, Tab and Shift+Tab walk the handles in protocol order (past either end the selection is let go, and focus
+ * leaves the Lab view), arrows nudge the selected one, Escape lets it go.
+ */
 import { withProtocolPlan } from "../../kernels/document-edits";
 import { NUDGE_LARGE_PX, NUDGE_PX, planHandleDrag } from "../../kernels/lab-view/drag-plan";
-import { HANDLE_WORDS, type HandleId, type HandlePlacement } from "../../kernels/lab-view/handles";
+import { cycleHandle, HANDLE_WORDS, type HandleId, type HandlePlacement } from "../../kernels/lab-view/handles";
 import { hitTestLabView } from "../../kernels/lab-view/hit-test";
 import { segmentTimes, segmentsProtocolOf } from "../../kernels/timeline";
 import type { EditorState, LabToolState } from "../../store/state";
@@ -69,6 +73,12 @@ export const Idle: ToolStateHandlers<Idle> = {
     if (event.key === "Escape" && state.selection) {
       state.select(null);
       return true;
+    }
+    if (event.key === "Tab") {
+      const onScreen = state.labView.handles(state).map((h) => h.id);
+      const next = cycleHandle(state.selection, onScreen, event.shiftKey);
+      state.select(next);
+      return next !== null;
     }
     const direction = ARROWS[event.key];
     if (!direction || !state.selection || state.readOnly) return false;

@@ -7,19 +7,26 @@
  */
 import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
+import { bothChannels } from "@/canvas/kernels/budget/both-channels";
 import { budgetIsStale } from "@/canvas/store/selectors";
 import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
 import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
 import { quantityText } from "./quantity-text";
 
-type Row = { key: string; words: string; of(channel: ChannelResult): Quantity | null; combined?(result: ScenarioResult): Quantity | null };
+/** A Budget row: its number per channel and for both together (the physics' own where it has one, else the counts summed). */
+type Row = { key: string; words: string; of(channel: ChannelResult): Quantity | null; combined(result: ScenarioResult): Quantity | null };
+
+/** A count the physics reports per channel only: both together is the sum. */
+function countRow(key: string, words: string, of: Row["of"]): Row {
+  return { key, words, of, combined: (r) => bothChannels(of(r.electromagnetic), of(r.gravitational)) };
+}
 
 const ROWS: Row[] = [
-  { key: "far-field", words: "Quanta to infinity", of: (c) => c.farFieldQuanta },
-  { key: "horizon", words: "Quanta into the horizon", of: (c) => c.horizonQuanta },
-  { key: "ramp", words: "Ramp-driven", of: (c) => c.rampDrivenQuanta },
-  { key: "hold", words: "Hold-driven", of: (c) => c.holdDrivenQuanta },
+  countRow("far-field", "Quanta to infinity", (c) => c.farFieldQuanta),
+  countRow("horizon", "Quanta into the horizon", (c) => c.horizonQuanta),
+  countRow("ramp", "Ramp-driven", (c) => c.rampDrivenQuanta),
+  countRow("hold", "Hold-driven", (c) => c.holdDrivenQuanta),
   { key: "total", words: "Total ⟨N⟩", of: (c) => c.totalQuanta, combined: (r) => r.combined.totalQuanta },
   { key: "decoherence", words: "Decoherence 𝒟", of: (c) => c.decoherence, combined: (r) => r.combined.decoherence },
   { key: "decoherence-time", words: "Decoherence time", of: (c) => c.decoherenceTime, combined: (r) => r.combined.decoherenceTime },
@@ -116,7 +123,7 @@ export function BudgetPanel() {
                   {channels.map((c) => (
                     <Cell key={c.channel} quantity={row.of(c)} testId={`budget-${c.channel}-${row.key}`} label={`${row.words}, ${c.channel}`} />
                   ))}
-                  <Cell quantity={row.combined ? row.combined(result) : null} testId={`budget-combined-${row.key}`} label={`${row.words}, both`} />
+                  <Cell quantity={row.combined(result)} testId={`budget-combined-${row.key}`} label={`${row.words}, both`} />
                 </tr>
               ))}
             </tbody>

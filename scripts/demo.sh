@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# npm run demo: install if needed, start PostgreSQL and the fake SMTP server on loopback, migrate, seed,
+# npm run demo: install if needed, start PostgreSQL, the fake SMTP server and the fake S3 store on loopback, migrate, seed,
 # build, and serve Branchline on http://localhost:3000 (PORT to change). Ctrl-C stops everything it started.
 set -euo pipefail
 cd "$(dirname "$0")/.."
@@ -9,6 +9,12 @@ PORT="${PORT:-3000}"
 ensure_dependencies
 bash scripts/services.sh start
 trap 'bash scripts/services.sh stop' EXIT
+# Attachments go to the fake S3 store on loopback unless another S3-compatible store is configured.
+export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:${S3_FAKE_PORT:-4566}}"
+export S3_BUCKET="${S3_BUCKET:-branchline-demo}"
+export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-branchline-local}"
+export S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-branchline-local-secret}"
+export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
 
 npm run --silent db:migrate
 npm run --silent db:seed

@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Local services for the demo and the tests, all on loopback: PostgreSQL and the fake SMTP server.
+# Local services for the demo and the tests, all on loopback: PostgreSQL, the fake SMTP server and the fake S3 store.
 #   scripts/services.sh start | stop
 # PIDs and logs live in .data/run (git-ignored). Start is idempotent.
 set -euo pipefail
@@ -9,6 +9,7 @@ mkdir -p "$RUN"
 
 SMTP_FAKE_PORT="${SMTP_FAKE_PORT:-2525}"
 MAILBOX_PORT="${MAILBOX_PORT:-2526}"
+S3_FAKE_PORT="${S3_FAKE_PORT:-4566}"
 
 alive() { [ -f "$1" ] && kill -0 "$(cat "$1")" 2>/dev/null; }
 
@@ -32,13 +33,21 @@ start_smtp() {
   echo "[services] fake SMTP on 127.0.0.1:$SMTP_FAKE_PORT, mailbox on 127.0.0.1:$MAILBOX_PORT" >&2
 }
 
+start_s3() {
+  if alive "$RUN/s3.pid"; then echo "[services] fake S3 already running" >&2; return; fi
+  S3_FAKE_PORT="$S3_FAKE_PORT" nohup node_modules/.bin/tsx scripts/s3-fake.ts >"$RUN/s3.log" 2>&1 &
+  echo $! >"$RUN/s3.pid"
+  wait_for_port "$S3_FAKE_PORT" "fake S3"
+  echo "[services] fake S3 on 127.0.0.1:$S3_FAKE_PORT (objects in .data/s3)" >&2
+}
+
 stop_pid() {
   if alive "$1"; then kill "$(cat "$1")" 2>/dev/null || true; fi
   rm -f "$1"
 }
 
 case "${1:-}" in
-  start) bash scripts/pg.sh start; start_smtp ;;
-  stop) stop_pid "$RUN/smtp.pid"; bash scripts/pg.sh stop ;;
+  start) bash scripts/pg.sh start; start_smtp; start_s3 ;;
+  stop) stop_pid "$RUN/s3.pid"; stop_pid "$RUN/smtp.pid"; bash scripts/pg.sh stop ;;
   *) echo "usage: scripts/services.sh start|stop" >&2; exit 2 ;;
 esac

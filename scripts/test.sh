@@ -19,6 +19,8 @@ fi
 pg_was_running=$(bash scripts/pg.sh status 2>/dev/null || true)
 smtp_was_running=no
 [ -f .data/run/smtp.pid ] && kill -0 "$(cat .data/run/smtp.pid)" 2>/dev/null && smtp_was_running=yes
+s3_was_running=no
+[ -f .data/run/s3.pid ] && kill -0 "$(cat .data/run/s3.pid)" 2>/dev/null && s3_was_running=yes
 bash scripts/services.sh start
 cleanup() {
   [ -n "${E2E_DB:-}" ] && bash scripts/pg.sh dropdb "$E2E_DB" >/dev/null 2>&1 || true
@@ -26,9 +28,19 @@ cleanup() {
     kill "$(cat .data/run/smtp.pid)" 2>/dev/null || true
     rm -f .data/run/smtp.pid
   fi
+  if [ "$s3_was_running" = no ] && [ -f .data/run/s3.pid ]; then
+    kill "$(cat .data/run/s3.pid)" 2>/dev/null || true
+    rm -f .data/run/s3.pid
+  fi
   [ "$pg_was_running" = running ] || bash scripts/pg.sh stop
 }
 trap cleanup EXIT
+# The object store the app, the integration tests and the browser tests use: the fake on loopback unless set.
+export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:${S3_FAKE_PORT:-4566}}"
+export S3_BUCKET="${S3_BUCKET:-branchline-test}"
+export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-branchline-local}"
+export S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-branchline-local-secret}"
+export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
 
 echo "[test] type check" >&2
 node_modules/.bin/tsc --noEmit

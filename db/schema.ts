@@ -150,6 +150,20 @@ export interface ProjectAuditTable {
   createdAt: Generated<Date>;
 }
 
+/** A file kept with a scenario (figure, notes, data); its bytes are in object storage under objectKey. */
+export interface AttachmentsTable {
+  id: Generated<string>;
+  projectId: string;
+  scenarioId: string;
+  fileName: string;
+  /** Decided from the content, not the name (see lib/sniff.ts). */
+  mediaType: string;
+  sizeBytes: number;
+  objectKey: string;
+  uploadedBy: string | null;
+  createdAt: Generated<Date>;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -162,6 +176,7 @@ export interface Database {
   projectInvitations: ProjectInvitationsTable;
   shareLinks: ShareLinksTable;
   projectAudit: ProjectAuditTable;
+  attachments: AttachmentsTable;
 }
 
 export type User = Selectable<UsersTable>;
@@ -183,3 +198,5 @@ export type NewShareLink = Insertable<ShareLinksTable>;
 export type ShareLinkUpdate = Updateable<ShareLinksTable>;
 export type ProjectAuditEntry = Selectable<ProjectAuditTable>;
 export type NewProjectAuditEntry = Insertable<ProjectAuditTable>;
+export type Attachment = Selectable<AttachmentsTable>;
+export type NewAttachment = Insertable<AttachmentsTable>;

@@ -75,3 +75,28 @@ export const revisionDiffQuerySchema = z.object({
     .min(1, "revisions start at 1")
     .max(2_147_483_647, "no revision has so large a number"),
 });
+
+/** Largest scenario file imported, in bytes. */
+export const SCENARIO_FILE_MAX_BYTES = 2 * 1024 * 1024;
+/** Largest file kept with a scenario, in bytes. */
+export const ATTACHMENT_MAX_BYTES = 10 * 1024 * 1024;
+/** The endings of the files a scenario keeps (what they are is decided from their content). */
+export const ATTACHMENT_EXTENSIONS = [".pdf", ".png", ".svg", ".csv", ".json"] as const;
+
+const yes = z
+  .enum(["1", "0", "true", "false"], { error: "dryRun is 1 (preview, store nothing) or 0" })
+  .transform((v) => v === "1" || v === "true");
+
+/** The settings of a sequencer profile upload, from the query, the multipart fields or the JSON body. */
+export const sequencerProfileOptionsSchema = z.object({
+  timeUnit: z.string().trim().max(20, "a unit is at most 20 characters").optional(),
+  separationUnit: z.string().trim().max(20, "a unit is at most 20 characters").optional(),
+  interpolation: z.enum(["linear", "cubic-spline"], { error: "interpolation is linear or cubic-spline" }).default("linear"),
+  dryRun: z.union([z.boolean(), yes]).default(false),
+  /** The scenario version the caller edited; required unless dryRun. */
+  version: z.coerce.number({ error: "version must be the scenario version you edited" }).int().positive().optional(),
+});
+/** A sequencer profile as JSON: the CSV text beside the same settings. */
+export const sequencerProfileJsonSchema = sequencerProfileOptionsSchema.extend({
+  csv: z.string({ error: "csv must be the file's text" }).min(1, "the file is empty"),
+});

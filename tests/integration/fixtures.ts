@@ -1,9 +1,11 @@
 import { getDb } from "@/db";
+import { uploadAttachment } from "@/db/attachments";
 import { createInvitation } from "@/db/invitations";
 import { addMemberByEmail } from "@/db/members";
 import { createProject } from "@/db/projects";
 import { createScenario } from "@/db/scenarios";
 import { createShareLink, revokeShareLink } from "@/db/share-links";
+import { objectStore } from "@/lib/storage";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { makeUser, type TestUser } from "./harness";
 
@@ -46,6 +48,8 @@ export interface TeamExtras {
   linkId: string;
   linkToken: string;
   revokedLinkToken: string;
+  /** A small CSV kept with the fixture's scenario, in the fake S3 store (made by teamExtras). */
+  attachmentId?: string;
 }
 
 /** An invitation and share links in a fixture project, made by its owner through the data access layer. */
@@ -59,5 +63,17 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
   const live = await createShareLink(db, owner, f.projectId, f.scenarioId, { label: "for the referee" });
   const revoked = await createShareLink(db, owner, f.projectId, f.scenarioId, { label: "an old link" });
   await revokeShareLink(db, owner, f.projectId, f.scenarioId, revoked.link.id);
-  return { invitationId: invitation.id, invitationToken, linkId: live.link.id, linkToken: live.token, revokedLinkToken: revoked.token };
+  const attachment = await uploadAttachment(db, objectStore(), owner, f.projectId, f.scenarioId, {
+    fileName: "fixture-run.csv",
+    mediaType: "text/csv",
+    bytes: new TextEncoder().encode("t [ms],separation [um]\n0,0\n5,2\n10,0\n"),
+  });
+  return {
+    invitationId: invitation.id,
+    invitationToken,
+    linkId: live.link.id,
+    linkToken: live.token,
+    revokedLinkToken: revoked.token,
+    attachmentId: attachment.id,
+  };
 }

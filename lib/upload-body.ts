@@ -1,0 +1,136 @@
+import "server-only";
+/**
+ * Reading a file sent to a route handler: either the raw body (its name in the `name` query parameter or an
+ * X-File-Name header, URI-encoded) or multipart/form-data with the file in a `file` field. The body is read as a
+ * stream and abandoned as soon as it passes the limit, so an oversized upload costs no more than the limit.
+ *
+ * Refusals: too large 413, empty 422, a content type the route does not take 415 (in the one error shape).
+ */
+import { NextResponse, type NextRequest } from "next/server";
+import { AppError } from "../db/errors";
+import { route } from "./http";
+
+/** A request whose content type the route does not take, or a file whose content is not what it says. */
+export class UnsupportedMediaType extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "UnsupportedMediaType";
+  }
+}
+
+/** route(), plus 415 in the one error shape for UnsupportedMediaType. */
+export function uploadRoute<P>(handler: (req: NextRequest, params: P) => Promise<Response>) {
+  return route<P>(async (req, params) => {
+    try {
+      return await handler(req, params);
+    } catch (error) {
+      if (error instanceof UnsupportedMediaType) {
+        return NextResponse.json({ error: { code: "unsupported_media_type", message: error.message } }, { status: 415 });
+      }
+      throw error;
+    }
+  });
+}
+
+export interface UploadedFile {
+  /** The file name the client gave, or null. */
+  name: string | null;
+  bytes: Uint8Array;
+  /** The other fields of a multipart body, or the query parameters of a raw one. */
+  fields: Record<string, string>;
+}
+
+/** Room for the multipart boundaries and headers around the file itself. */
+const MULTIPART_OVERHEAD = 64 * 1024;
+
+export const formatBytes = (n: number) => (n >= 1024 * 1024 ? `${(n / 1024 / 1024).toFixed(1)} MB` : n >= 1024 ? `${(n / 1024).toFixed(1)} kB` : `${n} bytes`);
+
+const tooLarge = (what: string, maxBytes: number, size?: number) =>
+  new AppError("payload_too_large", `${what} is ${size === undefined ? "larger than the limit" : formatBytes(size)}; the limit is ${formatBytes(maxBytes)}`, undefined, {
+    limitBytes: maxBytes,
+  });
+
+async function readLimited(req: NextRequest, limit: number, what: string, maxBytes: number): Promise<Uint8Array> {
+  const declared = Number(req.headers.get("content-length") ?? NaN);
+  if (Number.isFinite(declared) && declared > limit) throw tooLarge(what, maxBytes, declared);
+  if (!req.body) return new Uint8Array();
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  try {
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      size += value.byteLength;
+      if (size > limit) {
+        await reader.cancel();
+        throw tooLarge(what, maxBytes);
+      }
+      chunks.push(value);
+    }
+  } catch (error) {
+    if (error instanceof AppError) throw error;
+    throw new AppError("bad_request", "the request body could not be read");
+  }
+  const bytes = new Uint8Array(size);
+  let at = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, at);
+    at += chunk.byteLength;
+  }
+  return bytes;
+}
+
+const mediaTypeOf = (req: NextRequest) => (req.headers.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
+
+/**
+ * Reads the uploaded file. `accept` lists the raw content types the route takes besides multipart/form-data
+ * (a trailing "*" matches any subtype, "*" anything); anything else is 415.
+ */
+export async function readUpload(req: NextRequest, options: { maxBytes: number; what: string; accept: string[] }): Promise<UploadedFile> {
+  const { maxBytes, what } = options;
+  const type = mediaTypeOf(req);
+  const query = Object.fromEntries(req.nextUrl.searchParams);
+  if (type === "multipart/form-data") {
+    const raw = await readLimited(req, maxBytes + MULTIPART_OVERHEAD, what, maxBytes);
+    let form: FormData;
+    try {
+      form = await new Response(raw as BodyInit, { headers: { "content-type": req.headers.get("content-type")! } }).formData();
+    } catch {
+      throw new AppError("bad_request", "the multipart body could not be read");
+    }
+    const file = form.get("file");
+    if (!(file instanceof Blob)) throw new AppError("bad_request", "a multipart upload needs the file in a field named 'file'", [{ path: "file", message: "choose a file" }]);
+    const bytes = new Uint8Array(await file.arrayBuffer());
+    if (bytes.byteLength > maxBytes) throw tooLarge(what, maxBytes, bytes.byteLength);
+    if (bytes.byteLength === 0) throw new AppError("unprocessable", `${what} is empty`, [{ path: "file", message: "the file is empty" }]);
+    const fields: Record<string, string> = { ...query };
+    for (const [key, value] of form.entries()) if (typeof value === "string") fields[key] = value;
+    return { name: "name" in file && typeof file.name === "string" && file.name ? file.name : (fields.name ?? null), bytes, fields };
+  }
+  const accepted = options.accept.some((a) => a === "*" || a === type || (a.endsWith("/*") && type.startsWith(a.slice(0, -1))));
+  if (!accepted) {
+    throw new UnsupportedMediaType(`${what} must be sent as ${[...options.accept, "multipart/form-data"].join(", ")}; this request is ${type || "without a content type"}`);
+  }
+  const bytes = await readLimited(req, maxBytes, what, maxBytes);
+  if (bytes.byteLength === 0) throw new AppError("unprocessable", `${what} is empty`, [{ path: "file", message: "the file is empty" }]);
+  const header = req.headers.get("x-file-name");
+  let name: string | null = query.name ?? null;
+  if (header) {
+    try {
+      name = decodeURIComponent(header);
+    } catch {
+      name = header;
+    }
+  }
+  return { name, bytes, fields: query };
+}
+
+/** The bytes as UTF-8 text (a byte-order mark kept for the parser to drop); 422 when they are not UTF-8. */
+export function utf8(bytes: Uint8Array, what: string): string {
+  try {
+    return new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+  } catch {
+    throw new AppError("unprocessable", `${what} is not UTF-8 text`);
+  }
+}

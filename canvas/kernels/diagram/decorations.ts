@@ -106,10 +106,14 @@ export function labelBox(label: LabelCandidate): PlacedLabel["box"] {
 const overlaps = (a: PlacedLabel["box"], b: PlacedLabel["box"], gap: number) =>
   a.left < b.left + b.width + gap && b.left < a.left + a.width + gap && a.top < b.top + b.height + gap && b.top < a.top + a.height + gap;
 
-/** Greedy layout: in priority order, keep each label that stays on the stage and clear of those already kept. */
+/**
+ * Greedy layout: in priority order, keep each label that stays on the stage and clear of those already kept. An
+ * empty text (a grid line drawn for context only) is no label.
+ */
 export function layoutLabels(candidates: LabelCandidate[], stage: { width: number; height: number }, gapPx = 2): PlacedLabel[] {
   const placed: PlacedLabel[] = [];
   for (const label of [...candidates].sort((a, b) => b.priority - a.priority)) {
+    if (label.text === "") continue;
     const box = labelBox(label);
     const onStage = box.left >= 0 && box.top >= 0 && box.left + box.width <= stage.width && box.top + box.height <= stage.height;
     if (onStage && !placed.some((p) => overlaps(p.box, box, gapPx))) placed.push({ ...label, box });

@@ -1,9 +1,12 @@
 /**
  * The faint grid of the diagram: curves of constant static time and of constant radius, chosen so that they spread
  * evenly over the diagram (not evenly in t or r, which would bunch them into the corners), then rounded to one
- * significant digit so each carries a round SI label.
+ * significant digit so each carries a round SI label. Inside a Schwarzschild black hole (region II, drawn for
+ * context) a few curves of constant r, spacelike there, spread evenly between the horizon and the singularity and
+ * left unlabelled.
  */
-import type { DiagramPoint } from "@/physics/backgrounds";
+import { blackHoleInteriorToDiagram, type DiagramPoint } from "@/physics/backgrounds";
+import { c } from "@/physics/constants";
 import { nearestLadderValue, significantDigits } from "../round-numbers";
 import type { DiagramChart } from "./chart";
 import { bisect, sampleCurve } from "./geometry";
@@ -12,6 +15,7 @@ import { radiusLabel, timeLabel, type RadiusLabelStyle } from "./labels";
 export interface GridLine {
   family: "time" | "radius";
   valueSI: number;
+  /** Empty for a line drawn for context only (inside the black hole). */
   label: string;
   points: DiagramPoint[];
   /** Where the label goes: for time lines, the lab's worldline or the centre; for radius lines, the slice t = 0. */
@@ -20,6 +24,9 @@ export interface GridLine {
 
 const TIME_LINES = 9;
 const RADIUS_LINES = 7;
+const INTERIOR_RADIUS_LINES = 3;
+/** Killing time reached along an interior curve, in units of r_s/c: there U or V is e^{−30} of the other, at a corner. */
+const INTERIOR_TIME_REACH = 60;
 
 function timeCurve(chart: DiagramChart, tSeconds: number): DiagramPoint[] {
   const { background } = chart;
@@ -89,6 +96,31 @@ function roundRadius(chart: DiagramChart, rMetres: number): number {
   }
 }
 
+/**
+ * Curves r = const inside the hole (0 < r < r_s), where r is a time: each runs from one end of the singularity to the
+ * other, bowing down toward the bifurcation point. They cross the symmetry line t = 0 at evenly spaced diagram
+ * heights between the horizon (T = 0) and the singularity (T = ½), so they do not bunch at either (their radii are
+ * not round: they carry no label).
+ */
+function interiorRadiusLines(chart: DiagramChart): GridLine[] {
+  const rs = chart.horizonRadiusMetres;
+  if (chart.background.kind !== "schwarzschild" || rs === null) return [];
+  const at = (tSeconds: number, rMetres: number) => blackHoleInteriorToDiagram(rs, tSeconds, rMetres);
+  const heightAtSymmetryLine = (r: number) => at(0, r)?.T ?? 0;
+  const radii = Array.from({ length: INTERIOR_RADIUS_LINES }, (_, i) => {
+    const target = (0.5 * (i + 1)) / (INTERIOR_RADIUS_LINES + 1);
+    return bisect((r) => heightAtSymmetryLine(r) - target, 0, rs);
+  });
+  const reach = (INTERIOR_TIME_REACH * rs) / c;
+  return radii.map((r) => ({
+    family: "radius",
+    valueSI: r,
+    label: "",
+    points: sampleCurve((t) => at(t, r), -reach, reach, { seeds: 96 }),
+    labelAt: at(0, r)!,
+  }));
+}
+
 export function gridLines(chart: DiagramChart): GridLine[] {
   const { background } = chart;
   const { conformal } = background;
@@ -115,5 +147,5 @@ export function gridLines(chart: DiagramChart): GridLine[] {
     points: radiusCurve(chart, r),
     labelAt: conformal.toDiagram(0, r),
   }));
-  return [...timeLines, ...radiusLines];
+  return [...timeLines, ...radiusLines, ...interiorRadiusLines(chart)];
 }

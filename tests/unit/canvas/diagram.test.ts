@@ -72,6 +72,75 @@ describe.each(Object.entries(documents))("the diagram of %s", (_name, document) 
   });
 });
 
+describe("the grid inside the black hole", () => {
+  const scene = sceneOf(schwarzschildDocument());
+  const rs = scene.chart.horizonRadiusMetres!;
+  const interior = scene.grid.filter((g) => g.family === "radius" && g.valueSI < rs);
+
+  /**
+   * r of a region II point from its Kruskal coordinates: UV = (1 − r/r_s) e^{r/r_s} (Kruskal, Phys. Rev. 119, 1743
+   * (1960); the form with U, V = e^{∓κu/c}, e^{κv/c} from memory), with U = tan(πP/2), V = tan(πQ/2), P = T − X,
+   * Q = T + X, inverted by bisection (the left side falls from 1 to 0 as r goes from 0 to r_s).
+   */
+  function radiusFromKruskal(p: { T: number; X: number }): number {
+    const uv = Math.tan((Math.PI / 2) * (p.T - p.X)) * Math.tan((Math.PI / 2) * (p.T + p.X));
+    let low = 0;
+    let high = rs;
+    for (let i = 0; i < 100; i++) {
+      const mid = (low + high) / 2;
+      if ((1 - mid / rs) * Math.exp(mid / rs) > uv) low = mid;
+      else high = mid;
+    }
+    return (low + high) / 2;
+  }
+
+  it("draws a few curves of constant r there, unlabelled, and none for backgrounds without a hole", () => {
+    expect(interior.length).toBe(3);
+    for (const g of interior) expect(g.label).toBe("");
+    for (const other of [base, documents["the Rindler wedge"], documents["the de Sitter static patch"]]) {
+      expect(sceneOf(other).grid.filter((g) => g.label === "")).toEqual([]);
+    }
+  });
+
+  it("keeps every point between the horizon (T = |X|) and the singularity (T = ½), at the radius the line stands for", () => {
+    for (const g of interior) {
+      expect(g.points.length).toBeGreaterThan(20);
+      for (const p of g.points) {
+        expect(p.T).toBeGreaterThanOrEqual(Math.abs(p.X) - 1e-9);
+        expect(p.T).toBeLessThanOrEqual(0.5 + 1e-9);
+      }
+      const middle = g.points.filter((p) => p.T - Math.abs(p.X) > 0.02 && 0.5 - p.T > 0.02);
+      expect(middle.length).toBeGreaterThan(10);
+      for (const p of middle) expect(radiusFromKruskal(p) / rs).toBeCloseTo(g.valueSI / rs, 6);
+    }
+  });
+
+  it("runs each curve from one end of the singularity to the other, spacelike all the way (r is a time inside)", () => {
+    for (const g of interior) {
+      const first = g.points[0];
+      const last = g.points[g.points.length - 1];
+      expect(first.X).toBeCloseTo(-0.5, 2);
+      expect(last.X).toBeCloseTo(0.5, 2);
+      g.points.slice(1).forEach((p, i) => {
+        const dX = Math.abs(p.X - g.points[i].X);
+        const dT = Math.abs(p.T - g.points[i].T);
+        if (dX + dT > 1e-9) expect(dX).toBeGreaterThan(dT);
+      });
+    }
+  });
+
+  it("spaces the curves evenly up the symmetry line, without bunching at the horizon or the singularity", () => {
+    const heights = interior.map((g) => g.labelAt.T).sort((a, b) => a - b);
+    expect(heights.map((h) => Math.round(h * 1e6) / 1e6)).toEqual([0.125, 0.25, 0.375]);
+    for (const g of interior) expect(Math.abs(g.labelAt.X)).toBeLessThan(1e-12);
+  });
+
+  it("leaves an empty label out of the layout", () => {
+    const empty: LabelCandidate = { id: "context", text: "", x: 10, y: 10, align: "left", verticalAlign: "top", rotation: 0, fontSize: 10, priority: 50, tone: "faint" };
+    expect(layoutLabels([empty], { width: 100, height: 100 })).toEqual([]);
+  });
+});
+
 describe("the diagram's radiation regions", () => {
   it("shade what the horizon takes only where there is a horizon", () => {
     expect(sceneOf(documents.Minkowski).protocol?.strips.some((s) => s.kind === "horizon")).toBe(false);

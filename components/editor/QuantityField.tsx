@@ -1,38 +1,37 @@
 "use client";
 
 /**
- * A number with its unit, typed as text ("250 ms", "3 us", "10 Msun") and parsed with physics/units. The value is
- * committed on Enter or when the field loses focus; a parse error or a refused edit shows under the field, in
- * words with an icon, and the typed text stays for correction. Escape puts back the current value.
+ * Fields that commit what is typed: on Enter or when the field loses focus the text is parsed and handed to the
+ * editor; a parse error or a refused edit shows under the field, in words with an icon, and the typed text stays for
+ * correction. Escape puts back the current value. QuantityField reads a number with its unit ("250 ms", "3 us",
+ * "10 Msun") with physics/units; DraftField takes any parse (a profile formula, say).
  */
-import { useId, useState, type KeyboardEvent } from "react";
-import { FieldMessage } from "@/components/ui/Field";
+import { useState, type KeyboardEvent } from "react";
+import { FieldFrame } from "@/components/ui/Field";
 import { fieldStyles } from "@/components/ui/styles";
 import { parseQuantity, type QuantityDimension } from "@/physics/units";
 
 export type CommitResult = { ok: true } | { ok: false; message: string };
+export type ParseResult<T> = { ok: true; value: T } | { ok: false; message: string };
 
-interface QuantityFieldProps {
+interface DraftFieldProps<T> {
   label: string;
-  dimension: QuantityDimension;
   /** How the current value reads when the field is not being edited. */
   shown: string;
-  onCommit(valueSI: number): CommitResult;
+  parse(text: string): ParseResult<T>;
+  onCommit(value: T): CommitResult;
   hint?: string;
   disabled?: boolean;
-  /** Unit assumed for a bare number, when there is an obvious one. */
-  defaultUnit?: string;
   testId?: string;
   onFocus?(): void;
   compact?: boolean;
+  /** Extra classes for the control (a formula's monospace, say). */
+  controlClassName?: string;
 }
 
-export function QuantityField({ label, dimension, shown, onCommit, hint, disabled, defaultUnit, testId, onFocus, compact }: QuantityFieldProps) {
-  const id = useId();
+export function DraftField<T>({ label, shown, parse, onCommit, hint, disabled, testId, onFocus, compact, controlClassName = "tabular" }: DraftFieldProps<T>) {
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const errorId = `${id}-error`;
-  const hintId = `${id}-hint`;
 
   const commit = () => {
     if (draft === null) return;
@@ -41,9 +40,9 @@ export function QuantityField({ label, dimension, shown, onCommit, hint, disable
       setError(null);
       return;
     }
-    const parsed = parseQuantity(draft, dimension, defaultUnit ? { defaultUnit } : {});
+    const parsed = parse(draft);
     if (!parsed.ok) return setError(parsed.message);
-    const result = onCommit(parsed.valueSI);
+    const result = onCommit(parsed.value);
     if (!result.ok) return setError(result.message);
     setDraft(null);
     setError(null);
@@ -60,31 +59,36 @@ export function QuantityField({ label, dimension, shown, onCommit, hint, disable
   };
 
   return (
-    <div className={compact ? "min-w-0" : undefined}>
-      <label htmlFor={id} className={compact ? "block text-xs font-semibold text-ink-soft" : fieldStyles.label}>
-        {label}
-      </label>
-      <input
-        id={id}
-        data-testid={testId}
-        className={`${fieldStyles.control} tabular disabled:cursor-not-allowed disabled:border-rule disabled:bg-paper-deep disabled:text-ink-soft ${compact ? "px-2 py-1 text-sm" : ""}`}
-        value={draft ?? shown}
-        disabled={disabled}
-        spellCheck={false}
-        autoComplete="off"
-        aria-invalid={Boolean(error)}
-        aria-describedby={error ? errorId : hint ? hintId : undefined}
-        onFocus={onFocus}
-        onChange={(e) => setDraft(e.target.value)}
-        onBlur={commit}
-        onKeyDown={onKeyDown}
-      />
-      {hint && !error && (
-        <p id={hintId} className={fieldStyles.hint}>
-          {hint}
-        </p>
+    <FieldFrame label={label} hint={hint} error={error ?? undefined} compact={compact}>
+      {(control) => (
+        <input
+          {...control}
+          data-testid={testId}
+          className={`${fieldStyles.control} ${controlClassName} disabled:cursor-not-allowed disabled:border-rule disabled:bg-paper-deep disabled:text-ink-soft ${compact ? "px-2 py-1 text-sm" : ""}`}
+          value={draft ?? shown}
+          disabled={disabled}
+          spellCheck={false}
+          autoComplete="off"
+          onFocus={onFocus}
+          onChange={(e) => setDraft(e.target.value)}
+          onBlur={commit}
+          onKeyDown={onKeyDown}
+        />
       )}
-      {error && <FieldMessage id={errorId}>{error}</FieldMessage>}
-    </div>
+    </FieldFrame>
   );
+}
+
+interface QuantityFieldProps extends Omit<DraftFieldProps<number>, "parse" | "controlClassName"> {
+  dimension: QuantityDimension;
+  /** Unit assumed for a bare number, when there is an obvious one. */
+  defaultUnit?: string;
+}
+
+export function QuantityField({ dimension, defaultUnit, ...field }: QuantityFieldProps) {
+  const parse = (text: string): ParseResult<number> => {
+    const parsed = parseQuantity(text, dimension, defaultUnit ? { defaultUnit } : {});
+    return parsed.ok ? { ok: true, value: parsed.valueSI } : parsed;
+  };
+  return <DraftField {...field} parse={parse} />;
 }

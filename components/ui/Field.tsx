@@ -13,27 +13,33 @@ export function FieldMessage({ id, children }: { id?: string; children: ReactNod
   );
 }
 
+/** The label of a compact field: small, above its control. */
+const COMPACT_LABEL = "block text-xs font-semibold text-ink-soft";
+
 interface FieldFrameProps {
   label: string;
   hint?: ReactNode;
   error?: string;
   className?: string;
+  /** A small label above a small control, for dense panels (the editor's). */
+  compact?: boolean;
   /** Renders the control with the id and aria attributes that tie it to its label and messages. */
   children: (control: { id: string; "aria-invalid": boolean; "aria-describedby"?: string }) => ReactNode;
 }
 
-export function FieldFrame({ label, hint, error, className, children }: FieldFrameProps) {
+export function FieldFrame({ label, hint, error, className, compact = false, children }: FieldFrameProps) {
   const id = useId();
-  const hintId = hint ? `${id}-hint` : undefined;
+  // The hint gives way to the error: describe the control by the one shown.
+  const hintId = hint && !error ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;
   const describedBy = [hintId, errorId].filter(Boolean).join(" ") || undefined;
   return (
-    <div className={className}>
-      <label htmlFor={id} className={fieldStyles.label}>
+    <div className={[compact ? "min-w-0" : "", className ?? ""].join(" ").trim() || undefined}>
+      <label htmlFor={id} className={compact ? COMPACT_LABEL : fieldStyles.label}>
         {label}
       </label>
       {children({ id, "aria-invalid": Boolean(error), "aria-describedby": describedBy })}
-      {hint && !error && (
+      {hintId && (
         <p id={hintId} className={fieldStyles.hint}>
           {hint}
         </p>

@@ -1,9 +1,12 @@
 /**
  * Edits of the scenario document as pure functions (document in, new document out, untouched parts shared), and
  * the check every edit passes before the store accepts it: the schema, then the background (a lab on or inside
- * a horizon is refused with the path of the offending field).
+ * a horizon is refused with the path of the offending field), then a profile formula (one the physics cannot
+ * read or evaluate is refused with its reason).
  */
 import { BackgroundInputError, makeBackground } from "@/physics/backgrounds";
+import { separationHistory } from "@/physics/protocols";
+import { ScenarioInputError } from "@/physics/scenario/input-error";
 import { c, G, solarMass } from "@/physics/constants";
 import { parseScenarioDocument, type LabPlacement, type RampShape, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
 import type { ProtocolPlan } from "./lab-view/drag-plan";
@@ -41,7 +44,21 @@ export function documentIssues(document: ScenarioDocument): SchemaIssue[] {
     if (error instanceof BackgroundInputError) return [{ path: error.path, message: error.message }];
     throw error;
   }
+  if (parsed.document.protocol.kind === "formula") {
+    try {
+      separationHistory(parsed.document);
+    } catch (error) {
+      if (error instanceof ScenarioInputError) return [{ path: error.path, message: error.message }];
+      throw error;
+    }
+  }
   return [];
+}
+
+/** A formula profile with a new expression or duration (a document of another protocol kind is left as it is). */
+export function withFormula(document: ScenarioDocument, change: { expression?: string; durationSeconds?: number }): ScenarioDocument {
+  if (document.protocol.kind !== "formula") return document;
+  return { ...document, protocol: { ...document.protocol, ...change } };
 }
 
 /** 10 M☉ with the lab at five horizon radii, outside the photon sphere; an accelerated lab at 10¹⁸ m/s²; today's Hubble rate. */

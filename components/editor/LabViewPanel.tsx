@@ -71,7 +71,7 @@ export function LabViewPanel() {
             ? "Drag a handle; Shift snaps to round values; Tab walks the handles, arrow keys nudge the selected one."
             : readOnly
               ? "Read-only."
-              : "A formula or sampled profile is shown, not edited: the handles belong to segment protocols."}
+              : "A formula or sampled profile has no handles: a formula is edited in the Protocol strip."}
         </p>
       </div>
       <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height: HEIGHT }}>

@@ -1,13 +1,16 @@
 "use client";
 
-/** The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape. */
+/**
+ * The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape; for a
+ * formula profile, its expression and duration. A sampled profile is shown in the Lab view and not edited here.
+ */
 import { useEditor } from "@/canvas/EditorProvider";
-import { withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
+import { withFormula, withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
 import { segmentShares } from "@/canvas/kernels/lab-view/viewport";
 import type { SegmentName } from "@/canvas/kernels/timeline";
-import { rampShapeSchema, type RampShape } from "@/physics/scenario/schema";
+import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
-import { QuantityField } from "./QuantityField";
+import { DraftField, QuantityField } from "./QuantityField";
 import { useEdit } from "./useEdit";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
@@ -19,15 +22,71 @@ const SHAPE_WORDS: Record<RampShape, string> = {
 
 const SEGMENT_WORDS: Record<SegmentName, string> = { separation: "Separation", hold: "Hold", recombination: "Recombination" };
 
+const FORMULA_HINT = "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration; t, pi, e, arithmetic and elementary functions.";
+
+/** A formula profile: its expression (checked by the physics on commit) and its duration, one undo step each. */
+function FormulaProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: "formula" }> }) {
+  const readOnly = useEditor((s) => s.readOnly);
+  const edit = useEdit();
+  return (
+    <div className="flex flex-wrap items-start gap-3 rounded border border-rule bg-paper-deep px-3 py-2" data-testid="formula-profile">
+      <div className="min-w-64 flex-1">
+        <DraftField
+          compact
+          label="Separation profile σ(t)"
+          shown={protocol.expression}
+          parse={(text) => ({ ok: true, value: text.trim() })}
+          controlClassName="font-mono"
+          hint={FORMULA_HINT}
+          disabled={readOnly}
+          testId="formula-expression"
+          onCommit={(expression) => edit("Set profile formula", (d) => withFormula(d, { expression }))}
+        />
+      </div>
+      <div className="w-32">
+        <QuantityField
+          compact
+          label="Duration"
+          dimension="time"
+          shown={formatQuantity(protocol.durationSeconds, "time", { digits: 4 })}
+          disabled={readOnly}
+          testId="formula-duration"
+          onCommit={(durationSeconds) => edit("Set profile duration", (d) => withFormula(d, { durationSeconds }))}
+        />
+      </div>
+    </div>
+  );
+}
+
+function StripHeading() {
+  return (
+    <h2 id="protocol-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
+      Protocol strip
+    </h2>
+  );
+}
+
 export function ProtocolStrip() {
   const protocol = useEditor((s) => s.document.protocol);
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useEditor((s) => s.selection);
   const edit = useEdit();
-  if (protocol.kind !== "segments") {
+  if (protocol.kind === "formula") {
     return (
-      <section aria-label="Protocol strip" className="rounded border border-rule p-3 text-sm text-ink-soft">
-        This scenario's protocol is a {protocol.kind} profile; the strip edits segment protocols.
+      <section aria-labelledby="protocol-heading">
+        <StripHeading />
+        <FormulaProfile protocol={protocol} />
+      </section>
+    );
+  }
+  if (protocol.kind === "sampled") {
+    return (
+      <section aria-labelledby="protocol-heading">
+        <StripHeading />
+        <p className="rounded border border-rule p-3 text-sm text-ink-soft" data-testid="sampled-profile">
+          A sampled profile of {protocol.samples.length.toLocaleString("en")} samples ({protocol.interpolation === "linear" ? "linear" : "cubic-spline"}{" "}
+          interpolation), shown in the Lab view; its samples are not edited here.
+        </p>
       </section>
     );
   }
@@ -41,9 +100,7 @@ export function ProtocolStrip() {
   };
   return (
     <section aria-labelledby="protocol-heading">
-      <h2 id="protocol-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
-        Protocol strip
-      </h2>
+      <StripHeading />
       <div className="flex gap-1">
         {segments.map((segment, i) => {
           const part = protocol[segment];

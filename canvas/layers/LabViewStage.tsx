@@ -12,7 +12,7 @@ import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { compactQuantity } from "../kernels/diagram/labels";
-import { boundaryTicks, offsetTicks } from "../kernels/lab-view/axis-ticks";
+import { boundaryTicks, offsetTicks, staggerTimeLabels, timeAxisTitleSide } from "../kernels/lab-view/axis-ticks";
 import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/lab-view/handles";
 import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
@@ -36,6 +36,11 @@ function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separati
   }
   return { a, b };
 }
+
+const TIME_AXIS_TITLE = "lab proper time";
+/** Estimated advance per character at 11 px: the monospace figures, and the sans title (a little wide, to be safe). */
+const MONO_EM_PX = 6.7;
+const SANS_EM_PX = 5.6;
 
 /** A formula or sampled profile, as the physics library samples it (shown, not edited: it has no handles). */
 function profileCurves(viewport: LabViewport, document: Parameters<typeof profilePaths>[0]) {
@@ -128,6 +133,9 @@ export default function LabViewStage({ width, height }: { width: number; height:
     ? boundaryTicks(viewport, segmentTimes(protocol, origin))
     : [viewport.pieces[1].fromSeconds, viewport.pieces[viewport.pieces.length - 2].toSeconds].map((t) => ({ px: timeToPx(viewport, t), valueSI: t }));
   const axisWords = `offset along the ${document.separation.axis} axis`;
+  const timeTexts = bounds.map((t) => formatQuantity(t.valueSI - origin, "time"));
+  const timeLabels = staggerTimeLabels(bounds.map((t, i) => ({ px: t.px, widthPx: timeTexts[i].length * MONO_EM_PX }))).map((l, i) => ({ ...l, text: timeTexts[i] }));
+  const titleSide = timeAxisTitleSide(timeLabels, { widthPx: TIME_AXIS_TITLE.length * SANS_EM_PX, leftEndPx: plot.left, rightEndPx: plot.left + plot.width });
 
   return (
     <div
@@ -178,20 +186,30 @@ export default function LabViewStage({ width, height }: { width: number; height:
               <Line points={[x, bottom + 4, x + 4, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
             </Group>
           ))}
-          {bounds.map((t, i) => (
+          {timeLabels.map((t, i) => (
             <Text
               key={i}
               x={t.px - 50}
-              y={bottom + 10 + (i % 2) * 13}
+              y={bottom + 10 + t.row * 13}
               width={100}
               align="center"
-              text={formatQuantity(t.valueSI - origin, "time")}
+              text={t.text}
               fontSize={11}
               fontFamily={fonts.mono}
               fill={palette.inkSoft}
             />
           ))}
-          <Text x={plot.left + plot.width - 200} y={height - 13} width={200} align="right" text="lab proper time" fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
+          <Text
+            x={titleSide === "right" ? plot.left + plot.width - 200 : plot.left}
+            y={bottom + 23}
+            width={200}
+            align={titleSide}
+            text={TIME_AXIS_TITLE}
+            fontSize={11}
+            fontFamily={fonts.sans}
+            fill={palette.inkFaint}
+            wrap="none"
+          />
           <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
           <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
           <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />

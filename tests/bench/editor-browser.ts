@@ -57,15 +57,19 @@ async function signIn(page: Page): Promise<void> {
   await page.waitForURL(/\/projects/);
 }
 
-/** The editor's address of the first Schwarzschild scenario the demo owner can see. */
+/** The editor's address of the first Schwarzschild scenario with a segment protocol (one with handles) the demo owner can see. */
 async function horizonScenarioPath(page: Page): Promise<{ path: string; title: string }> {
   const { projects } = (await (await page.request.get(`${BASE_URL}/api/projects`)).json()) as { projects: { id: string }[] };
   for (const project of projects) {
     const listed = await page.request.get(`${BASE_URL}/api/projects/${project.id}/scenarios?background=schwarzschild`);
     const { items } = (await listed.json()) as { items: { id: string; title: string }[] };
-    if (items.length > 0) return { path: `/projects/${project.id}/scenarios/${items[0].id}`, title: items[0].title };
+    for (const item of items) {
+      const path = `/projects/${project.id}/scenarios/${item.id}`;
+      const { scenario } = (await (await page.request.get(`${BASE_URL}/api${path}`)).json()) as { scenario: { document: { protocol: { kind: string } } | null } };
+      if (scenario.document?.protocol.kind === "segments") return { path, title: item.title };
+    }
   }
-  throw new Error("no Schwarzschild scenario found: is the demo data seeded (npm run db:seed)?");
+  throw new Error("no Schwarzschild scenario with a segment protocol found: is the demo data seeded (npm run db:seed)?");
 }
 
 async function budgetCurrent(page: Page): Promise<void> {

@@ -5,6 +5,7 @@ import { useProject } from "@/components/api/projects";
 import { roleNames } from "@/components/format/words";
 import { Notice } from "@/components/ui/Notice";
 import { Skeleton } from "@/components/ui/QueryStates";
+import { ImportScenarioFile } from "./ImportScenarioFile";
 import { NewScenarioForm } from "./NewScenarioForm";
 import { ScenarioTable } from "./ScenarioTable";
 
@@ -16,7 +17,10 @@ export function ProjectScenarios({ projectId }: { projectId: string }) {
   return (
     <>
       {canWrite ? (
-        <NewScenarioForm projectId={project.id} />
+        <>
+          <NewScenarioForm projectId={project.id} />
+          <ImportScenarioFile projectId={project.id} />
+        </>
       ) : (
         <div className="mb-8">
           <Notice>

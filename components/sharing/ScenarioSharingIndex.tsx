@@ -10,10 +10,11 @@ import { TableHead } from "@/components/ui/TableHead";
 import { linkStyles, tableStyles } from "@/components/ui/styles";
 
 const query: ScenarioListQuery = { page: 1, pageSize: 100, sort: "title", order: "asc" };
-const columns = [{ label: "Scenario" }, { label: "Background" }, { label: "Version", className: "text-right" }, { label: "Sharing and history", hiddenLabel: true }];
+const columns = [{ label: "Scenario" }, { label: "Background" }, { label: "Version", className: "text-right" }, { label: "Sharing, history and files", hiddenLabel: true }];
 
 export const sharingPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/sharing`;
 export const historyPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/history`;
+export const filesPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/files`;
 
 /** Each scenario of the project with the way to its share links (editors and owners) and its history (everyone). */
 export function ScenarioSharingIndex({ project }: { project: ProjectDto }) {
@@ -51,8 +52,11 @@ export function ScenarioSharingIndex({ project }: { project: ProjectDto }) {
                           Share links
                         </Link>
                       )}
-                      <Link href={historyPath(project.id, s.id)} className={linkStyles} aria-label={`History of ${s.title}`}>
+                      <Link href={historyPath(project.id, s.id)} className={`${linkStyles} mr-4`} aria-label={`History of ${s.title}`}>
                         History
+                      </Link>
+                      <Link href={filesPath(project.id, s.id)} className={linkStyles} aria-label={`Files of ${s.title}`}>
+                        Files
                       </Link>
                     </td>
                   </tr>

@@ -5,19 +5,19 @@ import type { ReactNode } from "react";
 import { useScenario, type ScenarioDto } from "@/components/api/scenarios";
 import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
 import { QueryView } from "@/components/ui/QueryStates";
-import { historyPath, sharingPath } from "./ScenarioSharingIndex";
+import { filesPath, historyPath, sharingPath } from "./ScenarioSharingIndex";
 
 interface ScenarioSubpageProps {
   projectId: string;
   scenarioId: string;
-  page: "sharing" | "history";
+  page: "sharing" | "history" | "files";
   /** Whether to offer the way to the share links (editors and owners). */
   showSharing: boolean;
   children: (scenario: ScenarioDto) => ReactNode;
 }
 
 /** A page about one scenario (its share links, its history): the scenario's title, the ways back and across, then the page. */
-const titles = { sharing: "Share links", history: "History" } as const;
+const titles = { sharing: "Share links", history: "History", files: "Files" } as const;
 
 export function ScenarioSubpage({ projectId, scenarioId, page: here, showSharing, children }: ScenarioSubpageProps) {
   const scenario = useScenario(projectId, scenarioId);
@@ -42,6 +42,9 @@ export function ScenarioSubpage({ projectId, scenarioId, page: here, showSharing
               )}
               <Link href={historyPath(projectId, scenarioId)} aria-current={here === "history" ? "page" : undefined} className={here === "history" ? "font-semibold" : "text-ink-soft hover:text-ink"}>
                 History
+              </Link>
+              <Link href={filesPath(projectId, scenarioId)} aria-current={here === "files" ? "page" : undefined} className={here === "files" ? "font-semibold" : "text-ink-soft hover:text-ink"}>
+                Files
               </Link>
               <Link href={`/projects/${projectId}/members`} className="text-ink-soft hover:text-ink">
                 Members

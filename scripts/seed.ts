@@ -1,15 +1,18 @@
 /**
  * Demo data, all invented: an owner and a viewer account, and a project of a fictitious research group with
- * three scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab).
+ * three scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab), and, when the
+ * object store is up (scripts/services.sh starts the fake one), a sequencer run kept with the flat-space scenario.
  * Idempotent: a second run finds the demo account and changes nothing. Run with the react-server condition
  * (npm run db:seed) so that the data access layer's server-only marker resolves.
  */
+import { uploadAttachment } from "../db/attachments";
 import { createDb } from "../db/connect";
 import { addMemberByEmail } from "../db/members";
 import { createProject } from "../db/projects";
 import { createScenario } from "../db/scenarios";
 import { createUser, findUserByEmail } from "../db/users";
 import { solarMass } from "../physics/constants";
+import { createObjectStore } from "../lib/storage";
 import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 
 export const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner", name: "Demo Owner (group lead)" };
@@ -47,6 +50,17 @@ function acceleratedLab(): ScenarioDocument {
   return doc;
 }
 
+/** An invented sequencer run: separate over 40 ms with a smooth ramp, hold 2.5 µm for 120 ms, recombine over 40 ms. */
+function sequencerRunCsv(): string {
+  const rows = ["t [ms],separation [um]"];
+  const ramp = (u: number) => u * u * (3 - 2 * u);
+  for (let t = 0; t <= 200; t += 5) {
+    const d = t < 40 ? ramp(t / 40) : t <= 160 ? 1 : ramp((200 - t) / 40);
+    rows.push(`${t},${(2.5 * d).toFixed(4)}`);
+  }
+  return `${rows.join("\n")}\n`;
+}
+
 async function seed(): Promise<void> {
   const db = createDb(undefined, 2);
   try {
@@ -62,10 +76,17 @@ async function seed(): Promise<void> {
       description: "Which-path budgets for a charged microsphere interferometer, from the bench to a lab near a horizon (invented demo data).",
     });
     await addMemberByEmail(db, actor, project.id, DEMO_VIEWER.email, "viewer");
-    await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
+    const flat = await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
     await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
     await createScenario(db, actor, project.id, { title: "Accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
     console.log("[seed] created the demo project with three scenarios");
+    try {
+      const bytes = new TextEncoder().encode(sequencerRunCsv());
+      await uploadAttachment(db, createObjectStore(), actor, project.id, flat.id, { fileName: "sequencer-run-0412.csv", mediaType: "text/csv", bytes });
+      console.log("[seed] kept an invented sequencer run with the flat-space scenario");
+    } catch (error) {
+      console.log(`[seed] no demo attachment: the object store is not reachable (${error instanceof Error ? error.message : error})`);
+    }
   } finally {
     await db.destroy();
   }

@@ -130,3 +130,51 @@ test("a save that meets someone else's newer version asks what to do, and keepin
   expect(theirs.title).toBe("Shared lab, renamed");
   expect(theirs.document.protocol.hold.durationSeconds).toBe(1);
 });
+
+test("the keyboard walks the Lab view's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
+  const stamp = Date.now();
+  const owner = await signedInAs(browser, "Keyboard Owner", `keyboard-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: "Keyboard and formulas" } })).json()).project;
+  const segments = (
+    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()
+  ).scenario;
+
+  await owner.goto(editorPath(project.id, segments.id));
+  const lab = owner.getByTestId("lab-view");
+  await expect(lab).toBeVisible();
+  await lab.focus();
+  const walked: string[] = [];
+  for (let i = 0; i < 5; i++) {
+    await owner.keyboard.press("Tab");
+    walked.push((await lab.getAttribute("data-selected")) ?? "");
+  }
+  expect(walked).toEqual(["separation-start", "separation-end", "separation-size", "hold-end", "recombination-end"]);
+  await expect(owner.getByTestId("lab-view-selection")).toHaveText("End of recombination selected: 1.100 s from the start of the separation.");
+  await owner.keyboard.press("ArrowRight");
+  await expect(owner.getByTestId("handle-field-recombination-end")).not.toHaveValue("1.100 s");
+  await owner.keyboard.press("Escape");
+  await expect(lab).toHaveAttribute("data-selected", "");
+
+  const formulaDocument = { ...blackHoleScenario(), protocol: { kind: "formula", expression: "sin(pi * t / 0.4)^2", durationSeconds: 0.4 } };
+  const formula = (
+    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Formula lab", document: formulaDocument } })).json()
+  ).scenario;
+  await owner.goto(editorPath(project.id, formula.id));
+  const expression = owner.getByTestId("formula-expression");
+  const first = await currentBudget(owner);
+  await expression.fill("sin(pi * y)");
+  await expression.press("Enter");
+  await expect(owner.getByTestId("formula-profile")).toContainText('unknown symbol "y"');
+  await expression.fill("sin(pi * t / 0.4)^4");
+  await expression.press("Enter");
+  await expect(owner.getByTestId("formula-profile")).not.toContainText("unknown symbol");
+  await owner.getByTestId("formula-duration").fill("800 ms");
+  await owner.getByTestId("formula-duration").press("Enter");
+  await expect(owner.getByTestId("save-state")).toHaveAttribute("data-saved", "true");
+  expect(await currentBudget(owner)).not.toEqual(first);
+  const saved = (await (await owner.request.get(`/api/projects/${project.id}/scenarios/${formula.id}`)).json()).scenario;
+  expect(saved.document.protocol).toEqual({ kind: "formula", expression: "sin(pi * t / 0.4)^4", durationSeconds: 0.8 });
+
+  await owner.getByRole("button", { name: /^Undo/ }).click();
+  await expect(owner.getByTestId("formula-duration")).toHaveValue("400.0 ms");
+});

@@ -92,6 +92,21 @@ export function cleanFileName(name: string): string {
   return cleaned || "file";
 }
 
+/** The project history's entry for a file added or deleted: about the scenario, naming the file, no person as target. */
+function auditFile(db: Kysely<Database>, actor: Actor, action: "attachment_added" | "attachment_deleted", file: { projectId: string; scenarioId: string; fileName: string }) {
+  return recordAudit(db, {
+    projectId: file.projectId,
+    actorId: actor.userId,
+    action,
+    scenarioId: file.scenarioId,
+    subject: file.fileName,
+    targetUserId: null,
+    targetEmail: null,
+    role: null,
+    previousRole: null,
+  });
+}
+
 export async function uploadAttachment(
   db: Kysely<Database>,
   store: ObjectStore,
@@ -111,7 +126,7 @@ export async function uploadAttachment(
         .insertInto("attachments")
         .values({ id, projectId, scenarioId, fileName, mediaType: input.mediaType, sizeBytes: input.bytes.byteLength, objectKey, uploadedBy: actor.userId })
         .execute();
-      await recordAudit(trx, { projectId, actorId: actor.userId, action: "attachment_added", scenarioId, subject: fileName, targetUserId: null, targetEmail: null, role: null, previousRole: null });
+      await auditFile(trx, actor, "attachment_added", { projectId, scenarioId, fileName });
       await store.put(objectKey, input.bytes, input.mediaType);
       stored = true;
     });
@@ -159,7 +174,7 @@ export async function deleteAttachment(
       .executeTakeFirst();
     if (!row) throw notFound("attachment");
     await trx.deleteFrom("attachments").where("id", "=", attachmentId).execute();
-    await recordAudit(trx, { projectId, actorId: actor.userId, action: "attachment_deleted", scenarioId, subject: row.fileName, targetUserId: null, targetEmail: null, role: null, previousRole: null });
+    await auditFile(trx, actor, "attachment_deleted", { projectId, scenarioId, fileName: row.fileName });
     await store.delete(row.objectKey);
   });
 }

@@ -1,0 +1,178 @@
+/**
+ * The Diagram as a list of shapes in stage pixels: what the Konva stage draws on screen and what the SVG and PNG
+ * exports write, from one DiagramScene and one viewport, so that an exported figure is the figure on screen.
+ * Pure: no Konva, no DOM.
+ */
+import { hatchTicks, layoutLabels, offsetPolyline, type LabelCandidate, type PlacedLabel } from "../kernels/diagram/decorations";
+import type { DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
+import { fitDiagramViewport, flatPx, toPx, type DiagramViewport, type Padding } from "../kernels/diagram/viewport";
+import { wavyLine } from "../kernels/diagram/decorations";
+import { diagramLabelCandidates } from "../layers/diagram-labels";
+import { DASHES, type FigurePalette } from "../theme";
+import { cutAtCursor, type TimeCursor } from "./time-cursor";
+
+/** How far, in pixels, the branches are drawn from the lab's worldline at full separation. */
+export const BRANCH_OFFSET_PX = 7;
+/** Room round the diagram for its labels; de Sitter's square needs more at the sides (time labels, the far pole). */
+const PADDING: Padding = { left: 48, right: 48, top: 48, bottom: 48 };
+const DE_SITTER_PADDING: Padding = { left: 100, right: 64, top: 44, bottom: 44 };
+
+export type FigureFont = "serif" | "mono";
+
+export type FigureShape =
+  /** A closed, filled region (no outline). */
+  | { kind: "area"; points: number[]; fill: string }
+  /** An open polyline, stroked. */
+  | { kind: "line"; points: number[]; stroke: string; width: number; dash: number[]; round: boolean }
+  | { kind: "dot"; x: number; y: number; radius: number; stroke: string | null; width: number; fill: string }
+  /**
+   * A one-line label: (x, y) is the anchor, at the middle of the line's height and at the start, middle or end of
+   * the text along its direction; rotation −90 runs the text upward, turning about the anchor.
+   */
+  | { kind: "text"; text: string; x: number; y: number; anchor: "start" | "middle" | "end"; rotation: 0 | -90; fontSize: number; font: FigureFont; fill: string };
+
+/** Groups in drawing order; the two branches have their own, so an exported file names them. */
+export type FigureGroupId =
+  | "background"
+  | "regions"
+  | "radiation"
+  | "grid"
+  | "boundaries"
+  | "lab-worldline"
+  | "branch-b"
+  | "branch-a"
+  | "protocol-marks"
+  | "time-cursor"
+  | "labels";
+
+export interface FigureGroup {
+  id: FigureGroupId;
+  shapes: FigureShape[];
+}
+
+export interface DiagramFigure {
+  width: number;
+  height: number;
+  viewport: DiagramViewport;
+  groups: FigureGroup[];
+}
+
+export interface FigureOptions {
+  /** Multiplies every label's size (1 on screen; larger for projection). */
+  labelScale?: number;
+  /** Draw the page and the lab's region in the paper colour (false: leave them transparent). Default true. */
+  paperBackground?: boolean;
+  /** Show the protocol only up to this instant of lab time (the embed's scrubber); null or absent: all of it. */
+  cursor?: TimeCursor | null;
+}
+
+export function diagramPadding(scene: DiagramScene, labelScale = 1): Padding {
+  const base = scene.chart.background.kind === "de-sitter" ? DE_SITTER_PADDING : PADDING;
+  const grow = (v: number) => Math.round(v * (1 + (labelScale - 1) * 0.6));
+  return { left: grow(base.left), right: grow(base.right), top: grow(base.top), bottom: grow(base.bottom) };
+}
+
+export function diagramViewport(scene: DiagramScene, size: { width: number; height: number }, labelScale = 1): DiagramViewport {
+  return fitDiagramViewport(scene.bounds, size, diagramPadding(scene, labelScale));
+}
+
+const line = (points: number[], stroke: string, width: number, dash: number[] = [], round = false): FigureShape => ({ kind: "line", points, stroke, width, dash, round });
+
+function boundaryShapes(boundary: SceneBoundary, viewport: DiagramViewport, palette: FigurePalette): FigureShape[] {
+  const pts = boundary.points.map((p) => toPx(viewport, p));
+  const context = !boundary.bordersLabRegion;
+  switch (boundary.kind) {
+    case "timelike-infinity":
+    case "spatial-infinity":
+      return [{ kind: "dot", x: pts[0].x, y: pts[0].y, radius: 3, stroke: palette.ink, width: 1.25, fill: palette.paper }];
+    case "singularity":
+      return [line(wavyLine(pts[0], pts[pts.length - 1], 2.5, 9), palette.ink, 1.5, [], true)];
+    case "null-infinity":
+      return [line(flatPx(viewport, boundary.points), context ? palette.inkSoft : palette.ink, 1, DASHES.nullInfinity)];
+    case "centre":
+      return [line(flatPx(viewport, boundary.points), context ? palette.inkFaint : palette.inkSoft, 1)];
+    case "horizon": {
+      const far = toPx(viewport, boundary.farSide);
+      const ticks = context ? [] : hatchTicks(pts[0], pts[pts.length - 1], far, 7, 6);
+      return [...ticks.map((t) => line(t, palette.inkFaint, 0.75)), line(flatPx(viewport, boundary.points), context ? palette.inkSoft : palette.ink, context ? 1 : 2)];
+    }
+  }
+}
+
+/** A placed label's anchor: mid-height, at its start, middle or end (see FigureShape "text"). */
+export function labelShape(label: PlacedLabel, fill: string): FigureShape {
+  const { box } = label;
+  const anchor = label.align === "left" ? "start" : label.align === "center" ? "middle" : "end";
+  if (label.rotation === 0) {
+    const x = anchor === "start" ? box.left : anchor === "middle" ? box.left + box.width / 2 : box.left + box.width;
+    return { kind: "text", text: label.text, x, y: box.top + box.height / 2, anchor, rotation: 0, fontSize: label.fontSize, font: "serif", fill };
+  }
+  // Running upward, the text starts at the bottom of its box.
+  const y = anchor === "start" ? box.top + box.height : anchor === "middle" ? box.top + box.height / 2 : box.top;
+  return { kind: "text", text: label.text, x: box.left + box.width / 2, y, anchor, rotation: -90, fontSize: label.fontSize, font: "serif", fill };
+}
+
+function scaled(candidates: LabelCandidate[], labelScale: number): LabelCandidate[] {
+  return labelScale === 1 ? candidates : candidates.map((c) => ({ ...c, fontSize: c.fontSize * labelScale }));
+}
+
+export function diagramFigure(scene: DiagramScene, size: { width: number; height: number }, palette: FigurePalette, options: FigureOptions = {}): DiagramFigure {
+  const { width, height } = size;
+  const labelScale = options.labelScale ?? 1;
+  const paper = options.paperBackground ?? true;
+  const viewport = diagramViewport(scene, size, labelScale);
+  const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
+  const protocol = scene.protocol && options.cursor ? cutAtCursor(scene, options.cursor) : scene.protocol;
+
+  const groups: FigureGroup[] = [
+    { id: "background", shapes: paper ? [area([0, 0, width, 0, width, height, 0, height], palette.paper)] : [] },
+    {
+      id: "regions",
+      shapes: [area(flatPx(viewport, scene.outline), palette.contextPaper), ...(paper ? [area(flatPx(viewport, scene.labRegion), palette.paper)] : [])],
+    },
+    {
+      id: "radiation",
+      shapes: (protocol?.strips ?? []).map((s) => area(flatPx(viewport, s.polygon), s.kind === "far-field" ? palette.farFieldTint : palette.horizonTint)),
+    },
+    { id: "grid", shapes: scene.grid.map((g) => line(flatPx(viewport, g.points), palette.rule, 0.75)) },
+    { id: "boundaries", shapes: scene.boundaries.flatMap((b) => boundaryShapes(b, viewport, palette)) },
+    { id: "lab-worldline", shapes: [line(flatPx(viewport, scene.labWorldline), palette.inkSoft, 1.25)] },
+  ];
+
+  const samples = protocol?.branches ?? [];
+  if (samples.length >= 2) {
+    const points = samples.map((s) => toPx(viewport, s.point));
+    // A lab on the centre line r = 0 has nothing to its left: draw its branches beside the line, not across it.
+    const shift = scene.chart.background.labRadiusMetres === 0 ? BRANCH_OFFSET_PX + 5 : 0;
+    const b = offsetPolyline(points, samples.map((s) => shift + s.b * BRANCH_OFFSET_PX));
+    const a = offsetPolyline(points, samples.map((s) => shift + s.a * BRANCH_OFFSET_PX));
+    groups.push({ id: "branch-b", shapes: [line(b, palette.branchB, 2, DASHES.branchB, true)] });
+    groups.push({ id: "branch-a", shapes: [line(a, palette.branchA, 2, DASHES.branchA, true)] });
+    groups.push({
+      id: "protocol-marks",
+      shapes: (protocol?.marks ?? []).map((m) => {
+        const p = toPx(viewport, m);
+        return line([p.x - 4, p.y, p.x + 4, p.y], palette.inkSoft, 1);
+      }),
+    });
+    if (options.cursor) {
+      const end = points[points.length - 1];
+      const tip = (offsets: number[]) => offsets.slice(-2);
+      const [ax, ay] = tip(a);
+      const [bx, by] = tip(b);
+      groups.push({
+        id: "time-cursor",
+        shapes: [
+          line([end.x - 9, end.y, end.x + 9 + shift, end.y], palette.ink, 1),
+          { kind: "dot", x: ax, y: ay, radius: 2.5, stroke: null, width: 0, fill: palette.branchA },
+          { kind: "dot", x: bx, y: by, radius: 2.5, stroke: null, width: 0, fill: palette.branchB },
+        ],
+      });
+    }
+  }
+
+  const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
+  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size);
+  groups.push({ id: "labels", shapes: labels.map((l) => labelShape(l, tone[l.tone])) });
+  return { width, height, viewport, groups };
+}

@@ -2,6 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useEditor } from "@/canvas/EditorProvider";
+import { useReportDiagramSize } from "@/components/export/diagram-size";
 import { BranchLegend } from "./BranchLegend";
 import { useElementSize } from "./useElementSize";
 
@@ -40,6 +41,7 @@ function useDiagramHeight(width: number): number {
 export function DiagramPanel() {
   const [ref, size] = useElementSize<HTMLDivElement>({ width: 480, height: MIN_HEIGHT });
   const height = useDiagramHeight(size.width);
+  useReportDiagramSize({ width: size.width, height });
   return (
     <section aria-labelledby="diagram-heading" className="min-w-0">
       <h2 id="diagram-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">

@@ -1,7 +1,8 @@
 "use client";
 
-/** Title, save state, undo and redo, and the figure switches (theme, grid). */
+/** Title, save state, undo and redo, the figure switches (theme, grid), and Export (for every role). */
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
+import { ExportMenu } from "@/components/export/ExportMenu";
 import { canRedo, canUndo, hasUnsavedChanges } from "@/canvas/store/selectors";
 import { buttonStyles } from "@/components/ui/styles";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
@@ -71,6 +72,7 @@ export function EditorToolbar({ title, onRetrySave }: { title: string; onRetrySa
             </label>
           </>
         )}
+        <ExportMenu title={title} />
       </div>
     </div>
   );

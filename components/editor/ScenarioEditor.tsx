@@ -8,6 +8,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { EditorProvider, useEditor, useEditorStore } from "@/canvas/EditorProvider";
+import { DiagramSizeProvider } from "@/components/export/diagram-size";
 import { useProject, type ProjectDto } from "@/components/api/projects";
 import { useScenario, type ScenarioDto } from "@/components/api/scenarios";
 import { NotFoundNotice } from "@/components/ui/NotFoundNotice";
@@ -44,7 +45,9 @@ export function ScenarioEditor({ projectId, scenarioId, editPath, footer }: Scen
       {(loaded) =>
         loaded.document ? (
           <EditorProvider key={loaded.id} document={loaded.document} version={loaded.version} readOnly={!project.can.includes("scenario:write")}>
-            <EditorBody project={project} scenario={loaded} document={loaded.document} editPath={(id) => editPath(projectId, id)} footer={footer} />
+            <DiagramSizeProvider>
+              <EditorBody project={project} scenario={loaded} document={loaded.document} editPath={(id) => editPath(projectId, id)} footer={footer} />
+            </DiagramSizeProvider>
           </EditorProvider>
         ) : (
           <Notice tone="invalid">

@@ -1,0 +1,78 @@
+/**
+ * The Budget as a CSV file (RFC 4180: comma-separated, CRLF line ends, fields quoted where they hold a comma, a
+ * quote or a line break, quotes doubled): one row per number the Budget shows, with its unit as the result spells
+ * it ("1" for a count), the formula it comes from, and the validity flags the computation raised.
+ */
+import { sources, type SourceKey } from "@/physics/estimators/sources";
+import type { ChannelResult, Quantity, ScenarioResult } from "@/physics/result";
+
+export const BUDGET_CSV_HEADER = ["quantity", "value", "unit", "source", "flags"] as const;
+
+/** One CSV field, quoted only where RFC 4180 needs it. */
+export function csvField(text: string): string {
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+export function csvText(rows: readonly (readonly string[])[]): string {
+  return rows.map((row) => row.map(csvField).join(",")).join("\r\n") + "\r\n";
+}
+
+/**
+ * A quantity's value as a number a spreadsheet or a script reads: the double in JavaScript's shortest round-trip
+ * form; beyond a double's range, mantissa and exponent from its log10 ("3.16e+400"); "0" for an exact zero.
+ */
+export function csvValue(q: Quantity): string {
+  if (q.value !== null) return String(q.value);
+  if (q.log10 === null) return "0";
+  const exponent = Math.floor(q.log10);
+  const mantissa = 10 ** (q.log10 - exponent);
+  return `${Number(mantissa.toPrecision(15))}e${exponent >= 0 ? "+" : ""}${exponent}`;
+}
+
+const CHANNEL_WORDS = { electromagnetic: "electromagnetic", gravitational: "gravitational" } as const;
+
+const CHANNEL_ROWS: { words: string; of(c: ChannelResult): Quantity | null }[] = [
+  { words: "Quanta to infinity", of: (c) => c.farFieldQuanta },
+  { words: "Quanta into the horizon", of: (c) => c.horizonQuanta },
+  { words: "Ramp-driven quanta", of: (c) => c.rampDrivenQuanta },
+  { words: "Hold-driven quanta", of: (c) => c.holdDrivenQuanta },
+  { words: "Total quanta <N>", of: (c) => c.totalQuanta },
+  { words: "Decoherence D", of: (c) => c.decoherence },
+  { words: "Decoherence time", of: (c) => c.decoherenceTime },
+];
+
+function sourceText(key: SourceKey): string {
+  const entry = sources[key];
+  return entry ? `${entry.title} [${key}]` : key;
+}
+
+/** The validity flags that were raised (not "ok", not "not applicable"), as "status code: message". */
+function raisedFlags(result: ScenarioResult): string {
+  return result.flags
+    .filter((f) => f.status === "note" || f.status === "caution" || f.status === "invalid")
+    .map((f) => `${f.status} ${f.code}: ${f.message}`)
+    .join("; ");
+}
+
+export function budgetCsvRows(result: ScenarioResult): string[][] {
+  const flags = raisedFlags(result);
+  const row = (words: string, q: Quantity | null): string[] | null => (q ? [words, csvValue(q), q.unit, sourceText(q.sourceKey), flags] : null);
+  const rows: (string[] | null)[] = [];
+  for (const channel of [result.electromagnetic, result.gravitational]) {
+    const name = CHANNEL_WORDS[channel.channel];
+    for (const r of CHANNEL_ROWS) rows.push(row(`${r.words} (${name})`, r.of(channel)));
+    if (channel.comparison) {
+      rows.push(row(`Hold rate into the horizon (${name})`, channel.holdRate));
+      rows.push(row(`Hold rate, published estimate (${name})`, channel.comparison.estimateHoldRate));
+      rows.push(row(`Hold rate, ratio computed to estimate (${name})`, channel.comparison.ratioExactToEstimate));
+    }
+  }
+  rows.push(row("Total quanta <N> (both channels)", result.combined.totalQuanta));
+  rows.push(row("Decoherence D (both channels)", result.combined.decoherence));
+  rows.push(row("Decoherence time (both channels)", result.combined.decoherenceTime));
+  return rows.filter((r): r is string[] => r !== null);
+}
+
+export function budgetCsv(result: ScenarioResult): string {
+  return csvText([[...BUDGET_CSV_HEADER], ...budgetCsvRows(result)]);
+}

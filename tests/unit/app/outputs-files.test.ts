@@ -1,0 +1,81 @@
+import { describe, expect, it } from "vitest";
+import { budgetCsv, budgetCsvRows, csvField, csvText, csvValue } from "@/components/export/budget-csv";
+import { embedOptions, embedPath, embedSnippet } from "@/components/export/embed-options";
+import { budgetFileName, diagramFileName, scenarioFileNameFor } from "@/components/export/file-names";
+import { computeScenario } from "@/physics/compute";
+import { defaultScenarioDocument } from "@/physics/scenario/schema";
+import { schwarzschildDocument } from "../canvas/harness";
+
+describe("CSV fields (RFC 4180 §2)", () => {
+  it("leave plain text alone and quote a field holding a comma, a quote or a line break, doubling its quotes", () => {
+    expect(csvField("Decoherence time")).toBe("Decoherence time");
+    expect(csvField("a, b")).toBe('"a, b"');
+    expect(csvField('the "exact" rate')).toBe('"the ""exact"" rate"');
+    expect(csvField("two\nlines")).toBe('"two\nlines"');
+  });
+
+  it("end every record with CRLF", () => {
+    expect(csvText([["a", "b"], ["1", "x,y"]])).toBe('a,b\r\n1,"x,y"\r\n');
+  });
+
+  it("write a value beyond a double from its log10, a zero as 0", () => {
+    expect(csvValue({ value: null, log10: 400.5, unit: "1", sourceKey: "combined-channels" })).toBe("3.16227766016838e+400");
+    expect(csvValue({ value: null, log10: null, unit: "1", sourceKey: "combined-channels" })).toBe("0");
+    expect(csvValue({ value: 1.5e-20, log10: Math.log10(1.5e-20), unit: "1", sourceKey: "combined-channels" })).toBe("1.5e-20");
+  });
+});
+
+describe("the Budget as CSV", () => {
+  const result = computeScenario(schwarzschildDocument());
+  const rows = budgetCsvRows(result);
+
+  it("has the header quantity, value, unit, source, flags", () => {
+    expect(budgetCsv(result).split("\r\n")[0]).toBe("quantity,value,unit,source,flags");
+  });
+
+  it("has one row per number of the Budget, each with the value and unit the result carries", () => {
+    const total = rows.find((r) => r[0] === "Total quanta <N> (electromagnetic)")!;
+    expect(Number(total[1])).toBe(result.electromagnetic.totalQuanta.value);
+    expect(total[2]).toBe("1");
+    const time = rows.find((r) => r[0] === "Decoherence time (both channels)")!;
+    expect(time[2]).toBe("s");
+    expect(rows.find((r) => r[0] === "Quanta into the horizon (gravitational)")).toBeDefined();
+    // Schwarzschild has an exact electromagnetic hold rate beside the published estimate.
+    expect(rows.find((r) => r[0] === "Hold rate, published estimate (electromagnetic)")?.[2]).toBe("s^-1");
+    for (const r of rows) expect(r).toHaveLength(5);
+  });
+
+  it("leaves out what the background does not have (Minkowski has no horizon)", () => {
+    const flat = budgetCsvRows(computeScenario(defaultScenarioDocument()));
+    expect(flat.some((r) => r[0].startsWith("Quanta into the horizon"))).toBe(false);
+    expect(flat.some((r) => r[0].startsWith("Quanta to infinity"))).toBe(true);
+  });
+
+  it("names the formula of each number", () => {
+    const total = rows.find((r) => r[0] === "Total quanta <N> (electromagnetic)")!;
+    expect(total[3]).toContain(`[${result.electromagnetic.totalQuanta.sourceKey}]`);
+  });
+});
+
+describe("file names", () => {
+  it("say the scenario, what the file holds and its type", () => {
+    expect(diagramFileName("Slow recombination", { kind: "svg" })).toBe("slow-recombination-diagram.svg");
+    expect(diagramFileName("Slow recombination", { kind: "png", pixelRatio: 4 })).toBe("slow-recombination-diagram-4x.png");
+    expect(budgetFileName("Rindler wedge, hold 2 s")).toBe("rindler-wedge-hold-2-s-budget.csv");
+    expect(scenarioFileNameFor("Équilibre")).toBe("equilibre.json");
+  });
+});
+
+describe("embed options", () => {
+  it("read theme, large type and scrubbing, ignoring what they do not know", () => {
+    expect(embedOptions({ theme: "dark", type: "large", scrub: "1" })).toEqual({ theme: "dark", largeType: true, scrub: true });
+    expect(embedOptions({ theme: "purple", type: ["small"], scrub: "0" })).toEqual({ theme: null, largeType: false, scrub: false });
+  });
+
+  it("write the embed path and an iframe snippet with the ampersands escaped", () => {
+    expect(embedPath("tok_en", { theme: "dark", scrub: true })).toBe("/embed/tok_en?theme=dark&scrub=1");
+    const snippet = embedSnippet("https://branchline.example", "tok", { largeType: true, scrub: true });
+    expect(snippet).toContain('src="https://branchline.example/embed/tok?type=large&amp;scrub=1"');
+    expect(snippet).toMatch(/^<iframe [^>]*><\/iframe>$/);
+  });
+});

@@ -1,0 +1,113 @@
+import { describe, expect, it } from "vitest";
+import { diagramFigure } from "@/canvas/export/diagram-figure";
+import { diagramSvg, escapeXml, svgPaint } from "@/canvas/export/diagram-svg";
+import { exportFigure } from "@/canvas/export/export-figure";
+import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
+import { FIGURE_PALETTES } from "@/canvas/theme";
+import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
+import { schwarzschildDocument } from "../harness";
+import { descendants, parseXml, type XmlElement } from "./xml-check";
+
+const base = defaultScenarioDocument();
+const documents: Record<string, { document: ScenarioDocument; labels: string[] }> = {
+  Minkowski: { document: base, labels: ["ℐ⁺", "ℐ⁻", "i⁰", "i⁺", "i⁻"] },
+  Schwarzschild: { document: schwarzschildDocument(), labels: ["H⁺", "ℐ⁺"] },
+};
+
+function sceneOf(document: ScenarioDocument): DiagramScene {
+  const outcome = buildDiagramScene(document);
+  if (!outcome.ok) throw new Error(outcome.issue.message);
+  return outcome.scene;
+}
+
+const group = (svg: XmlElement, id: string) => descendants(svg).find((e) => e.name === "g" && e.attributes.id === id);
+
+describe.each(Object.entries(documents))("the SVG of the %s diagram", (_name, { document, labels }) => {
+  const scene = sceneOf(document);
+  const size = { width: 520, height: 480 };
+  const svg = diagramSvg(exportFigure(scene, size, "light", "solid"), { title: "Slow <recombination> & co", description: scene.notes.join(" ") });
+  const root = parseXml(svg);
+
+  it("is well-formed XML with an svg root in the SVG namespace, sized like the stage", () => {
+    expect(root.name).toBe("svg");
+    expect(root.attributes.xmlns).toBe("http://www.w3.org/2000/svg");
+    expect(root.attributes.viewBox).toBe("0 0 520 480");
+  });
+
+  it("names the two branches in their own groups, each one stroked path in the branch colours, B dashed", () => {
+    const a = group(root, "branch-a")!.children;
+    const b = group(root, "branch-b")!.children;
+    expect(a).toHaveLength(1);
+    expect(b).toHaveLength(1);
+    expect(a[0].name).toBe("path");
+    expect(a[0].attributes.stroke).toBe(FIGURE_PALETTES.light.branchA);
+    expect(a[0].attributes["stroke-dasharray"]).toBeUndefined();
+    expect(b[0].attributes.stroke).toBe(FIGURE_PALETTES.light.branchB);
+    expect(b[0].attributes["stroke-dasharray"]).toBe("7 4");
+    // One point per branch sample of the scene.
+    expect(a[0].attributes.d.match(/[ML]/g)).toHaveLength(scene.protocol!.branches.length);
+  });
+
+  it("writes the boundary labels as text in the figure's serif, by name", () => {
+    const texts = descendants(group(root, "labels")!).filter((e) => e.name === "text");
+    for (const label of labels) expect(texts.map((t) => t.text)).toContain(label);
+    for (const t of texts) expect(t.attributes["font-family"]).toMatch(/^'Source Serif 4'/);
+  });
+
+  it("draws every line as a path, with no raster image and no rgba() colour", () => {
+    const elements = descendants(root);
+    expect(elements.some((e) => e.name === "image")).toBe(false);
+    expect(elements.filter((e) => e.name === "path").length).toBeGreaterThan(10);
+    expect(svg).not.toMatch(/rgba\(/);
+  });
+
+  it("escapes the title", () => {
+    expect(descendants(root).find((e) => e.name === "title")?.text).toBe("Slow <recombination> & co");
+  });
+
+  it("leaves the ground out when asked for a transparent figure, and paints it white for a light solid one", () => {
+    const transparent = parseXml(diagramSvg(exportFigure(scene, size, "light", "transparent"), { title: "t" }));
+    expect(group(transparent, "background")).toBeUndefined();
+    expect(group(root, "background")!.children[0].attributes.fill).toBe("#ffffff");
+  });
+});
+
+describe("the figure shapes", () => {
+  it("are the same for the stage and the export at the same size, so an exported figure is the one on screen", () => {
+    const scene = sceneOf(base);
+    const onScreen = diagramFigure(scene, { width: 500, height: 500 }, FIGURE_PALETTES.dark);
+    const exported = exportFigure(scene, { width: 500, height: 500 }, "dark", "solid");
+    expect(exported.viewport).toEqual(onScreen.viewport);
+    expect(exported.groups.find((g) => g.id === "branch-a")).toEqual(onScreen.groups.find((g) => g.id === "branch-a"));
+  });
+
+  it("grow the labels with the label scale", () => {
+    const scene = sceneOf(base);
+    const sizes = (scale: number) =>
+      diagramFigure(scene, { width: 900, height: 900 }, FIGURE_PALETTES.light, { labelScale: scale })
+        .groups.find((g) => g.id === "labels")!
+        .shapes.flatMap((s) => (s.kind === "text" && s.text === "ℐ⁺" ? [s.fontSize] : []));
+    expect(sizes(1.5)[0]).toBeCloseTo(sizes(1)[0] * 1.5, 9);
+  });
+});
+
+describe("SVG paint and text", () => {
+  it("splits rgba() into a hex colour and an opacity, since many PDF converters ignore rgba()", () => {
+    expect(svgPaint("rgba(230, 159, 0, 0.16)")).toEqual({ colour: "#e69f00", opacity: 0.16 });
+    expect(svgPaint("#1c2024")).toEqual({ colour: "#1c2024", opacity: null });
+  });
+
+  it("escapes the five XML special characters", () => {
+    expect(escapeXml(`a<b>&"c'`)).toBe("a&lt;b&gt;&amp;&quot;c&apos;");
+  });
+});
+
+describe("the XML check used above", () => {
+  it("refuses what is not well-formed", () => {
+    expect(() => parseXml("<a><b></a></b>")).toThrow();
+    expect(() => parseXml('<a x="1" x="2"/>')).toThrow();
+    expect(() => parseXml("<a>R&D</a>")).toThrow();
+    expect(() => parseXml("<a/><b/>")).toThrow();
+    expect(parseXml('<a x="&lt;"><b/>t</a>').attributes.x).toBe("<");
+  });
+});

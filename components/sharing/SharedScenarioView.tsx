@@ -6,7 +6,7 @@ import { TimeStamp } from "@/components/ui/TimeStamp";
 import { linkStyles } from "@/components/ui/styles";
 import type { SharedScenarioDto } from "@/db/share-links";
 import type { ComputeIssue, ScenarioResult } from "@/physics/result";
-import { SharedBudget } from "./SharedBudget";
+import { SharedFigures } from "./SharedFigures";
 
 function IssueList({ issues }: { issues: { path: string; message: string }[] }) {
   return (
@@ -21,8 +21,8 @@ function IssueList({ issues }: { issues: { path: string; message: string }[] }) 
 }
 
 /**
- * A scenario as a share link shows it: read-only, with no controls and nothing of its project but the scenario
- * itself (no project name, no members, no other scenarios).
+ * A scenario as a share link shows it: read-only, with nothing of its project but the scenario itself (no project
+ * name, no members, no other scenarios): the Diagram, Lab view, Protocol strip and Budget, then every parameter.
  */
 export function SharedScenarioView({ scenario, result, resultIssues }: { scenario: SharedScenarioDto; result: ScenarioResult | null; resultIssues: ComputeIssue[] | null }) {
   return (
@@ -57,8 +57,22 @@ export function SharedScenarioView({ scenario, result, resultIssues }: { scenari
         page.
       </Notice>
 
+      {scenario.document && (result || resultIssues) && (
+        <SharedFigures
+          title={scenario.title}
+          document={scenario.document}
+          version={scenario.version}
+          outcome={result ? { ok: true, result } : { ok: false, issues: resultIssues ?? [] }}
+        />
+      )}
+
       {scenario.document ? (
-        <DocumentDetails document={scenario.document} />
+        <section aria-labelledby="parameters-title" className="space-y-4">
+          <h2 id="parameters-title" className="font-serif text-xl font-semibold">
+            Parameters
+          </h2>
+          <DocumentDetails document={scenario.document} />
+        </section>
       ) : (
         <Notice tone="caution">
           <p>This scenario’s stored document cannot be read by this version of Branchline.</p>
@@ -66,13 +80,6 @@ export function SharedScenarioView({ scenario, result, resultIssues }: { scenari
         </Notice>
       )}
 
-      {result && <SharedBudget result={result} />}
-      {resultIssues && (
-        <Notice tone="invalid">
-          <p>This scenario cannot be computed:</p>
-          <IssueList issues={resultIssues} />
-        </Notice>
-      )}
     </article>
   );
 }

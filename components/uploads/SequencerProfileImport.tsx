@@ -88,7 +88,8 @@ export function SequencerProfileImport({ projectId, scenarioId, onUse, triggerLa
       await onUse({ protocol: preview.protocol, profile: preview.profile, file, settings });
       close();
     } catch (error) {
-      setUsing({ pending: false, error: messageOf(error) });
+      // An ApiError carries the server's words; an edit the editor refused carries its own.
+      setUsing({ pending: false, error: error instanceof Error ? error.message : messageOf(error) });
     }
   };
 

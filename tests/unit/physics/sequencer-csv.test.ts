@@ -6,6 +6,7 @@ import { describe, expect, it } from "vitest";
 import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
 import { separationHistory } from "@/physics/protocols";
 import { defaultScenarioDocument, parseScenarioDocument } from "@/physics/scenario/schema";
+import { createEditorStore } from "@/canvas/store/createEditorStore";
 
 const ramp = ["t [ms], separation [um]", "0, 0", "10, 1.5", "20, 3", "30, 1.5", "40, 0"].join("\n");
 
@@ -135,5 +136,16 @@ describe("sequencer CSV", () => {
     const history = separationHistory(document);
     expect(history.totalDurationSeconds).toBeCloseTo(40e-3, 15);
     expect(history.peakSeparationMetres).toBeCloseTo(3e-6, 18);
+  });
+
+  it("is one undo step when the editor applies it", () => {
+    const store = createEditorStore({ document: defaultScenarioDocument(), version: 1, readOnly: false });
+    const before = store.getState().document;
+    const protocol = toSampledProtocol(ok(ramp).samples);
+    const result = store.getState().edit("Use a sequencer profile", (document) => withSampledProtocol(document, protocol));
+    expect(result.ok).toBe(true);
+    expect(store.getState().document.protocol).toEqual(protocol);
+    store.getState().undo();
+    expect(store.getState().document).toEqual(before);
   });
 });

@@ -1,0 +1,26 @@
+"use client";
+
+import { useEdit } from "@/components/editor/useEdit";
+import { withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { SequencerProfileImport } from "./SequencerProfileImport";
+
+/**
+ * The sequencer dialog inside the editor (mount it within the editor's provider): the server reads the file as a
+ * preview only, and "Use this profile" applies it through the editor's own edit, so it is one undo step and the
+ * autosave stores it like any other change.
+ */
+export function EditorSequencerImport({ projectId, scenarioId, disabled }: { projectId: string; scenarioId: string; disabled?: boolean }) {
+  const edit = useEdit();
+  return (
+    <SequencerProfileImport
+      projectId={projectId}
+      scenarioId={scenarioId}
+      disabled={disabled}
+      triggerLabel="Profile from a sequencer file…"
+      onUse={({ protocol }) => {
+        const result = edit("Use a sequencer profile", (document) => withSampledProtocol(document, protocol));
+        if (!result.ok) throw new Error(result.message);
+      }}
+    />
+  );
+}

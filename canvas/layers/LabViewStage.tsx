@@ -54,11 +54,11 @@ function profileCurves(viewport: LabViewport, document: Parameters<typeof profil
   return { a, b };
 }
 
-/** A ring around the selected handle while the Lab view has keyboard focus: round on the point, tall on a rule's grip. */
+/** A ring around the selected handle while the Lab view has focus: round on the point, tall on a rule's grip. */
 function FocusRing({ handle, viewport, palette }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette }) {
   if (handle.axis === "distance") return <Circle x={handle.x} y={handle.y} radius={17} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
   const bottom = viewport.plot.top + viewport.plot.height;
-  return <Rect x={handle.x - 9} y={bottom - 11} width={18} height={22} cornerRadius={4} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
+  return <Rect x={handle.x - 9} y={bottom - 11} width={18} height={20} cornerRadius={4} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
 }
 
 /** What the live line says about the selected handle: its name and the value it sets. */
@@ -100,7 +100,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
   const dragging = useEditor((s) => s.labTool.name === "dragging");
   const fonts = useFigureFonts();
   const container = useRef<HTMLDivElement>(null);
-  const [focused, setFocused] = useState(false);
+  const [focus, setFocus] = useState<"none" | "pointer" | "keyboard">("none");
   const palette = FIGURE_PALETTES[document.display.theme];
   const protocol = document.protocol.kind === "segments" ? document.protocol : null;
 
@@ -147,10 +147,9 @@ export default function LabViewStage({ width, height }: { width: number; height:
       data-testid="lab-view"
       data-selected={selection ?? ""}
       data-handles={JSON.stringify(handles.map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })))}
-      className="relative h-full rounded focus-visible:outline-2 focus-visible:outline-offset-[-2px] focus-visible:outline-focus"
-      style={{ cursor, touchAction: "none" }}
-      onFocus={() => setFocused(true)}
-      onBlur={() => setFocused(false)}
+      style={{ cursor, touchAction: "none", outline: "none" }}
+      onFocus={(e) => setFocus(e.currentTarget.matches(":focus-visible") ? "keyboard" : "pointer")}
+      onBlur={() => setFocus("none")}
       onPointerDown={onPointerDown}
       onPointerMove={(e) => store.getState().labPointerMove(local(e))}
       onPointerUp={(e) => store.getState().labPointerUp(local(e))}
@@ -216,7 +215,9 @@ export default function LabViewStage({ width, height }: { width: number; height:
           {handles.map((h) => (
             <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
           ))}
-          {focused && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
+          {focus !== "none" && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
+          {/* The page's focus outline would sit under the canvas: the stage draws its own when focus came from the keyboard. */}
+          {focus === "keyboard" && <Rect x={1} y={1} width={width - 2} height={height - 2} stroke={palette.focus} strokeWidth={2} cornerRadius={3} />}
         </Layer>
       </Stage>
       <p id="lab-view-selection" aria-live="polite" className="sr-only" data-testid="lab-view-selection">

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import type { ReactNode } from "react";
+import { PageChrome } from "@/components/export/PageChrome";
 import { SiteHeader } from "@/components/layout/SiteHeader";
 import { currentUser } from "@/lib/session";
 import { mono, sans, serif } from "./fonts";
@@ -17,8 +18,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
     <html lang="en" className={`${sans.variable} ${serif.variable} ${mono.variable}`}>
       <body className="min-h-screen bg-paper text-ink antialiased">
         <Providers>
-          <SiteHeader user={user ? { name: user.name, email: user.email, siteRole: user.siteRole } : null} />
-          <main className="mx-auto w-full max-w-6xl px-6 py-8">{children}</main>
+          <PageChrome header={<SiteHeader user={user ? { name: user.name, email: user.email, siteRole: user.siteRole } : null} />}>{children}</PageChrome>
         </Providers>
       </body>
     </html>

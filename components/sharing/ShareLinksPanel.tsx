@@ -13,6 +13,7 @@ import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
+import { embedSnippet, type EmbedOptions } from "@/components/export/embed-options";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
 import { shareLinkCreateSchema } from "@/lib/contracts";
 
@@ -39,8 +40,14 @@ const statusWords: Record<ShareLinkDto["status"], { text: string; className: str
   revoked: { text: "revoked", className: "text-ink-faint", icon: "✕" },
 };
 
+/** The embed code of a share link's URL (the embed takes the same token). */
+function embedCodeOf(url: string, options: Partial<EmbedOptions> = {}): string {
+  const parsed = new URL(url);
+  return embedSnippet(parsed.origin, decodeURIComponent(parsed.pathname.split("/").pop() ?? ""), options);
+}
+
 /** Copies to the clipboard, saying so; where the browser refuses, the URL stays selectable on the page. */
-function CopyButton({ url, label }: { url: string; label: string }) {
+function CopyButton({ url, label, words = "Copy URL" }: { url: string; label: string; words?: string }) {
   const [copied, setCopied] = useState<"yes" | "failed" | null>(null);
   return (
     <button
@@ -54,8 +61,40 @@ function CopyButton({ url, label }: { url: string; label: string }) {
         )
       }
     >
-      {copied === "yes" ? "Copied ✓" : copied === "failed" ? "Copy by hand" : "Copy URL"}
+      {copied === "yes" ? "Copied ✓" : copied === "failed" ? "Copy by hand" : words}
     </button>
+  );
+}
+
+/**
+ * The <iframe> code that shows the link's Diagram alone in a page or a slide, with its options: the dark figure
+ * theme for a dark room, large labels for projection, and a time scrubber that plays the protocol.
+ */
+function EmbedCode({ url }: { url: string }) {
+  const [options, setOptions] = useState<Pick<EmbedOptions, "largeType" | "scrub"> & { dark: boolean }>({ dark: false, largeType: false, scrub: false });
+  const code = embedCodeOf(url, { theme: options.dark ? "dark" : null, largeType: options.largeType, scrub: options.scrub });
+  const toggle = (key: keyof typeof options, words: string) => (
+    <label className="flex items-center gap-1.5 text-sm">
+      <input type="checkbox" checked={options[key]} onChange={(e) => setOptions((o) => ({ ...o, [key]: e.target.checked }))} />
+      {words}
+    </label>
+  );
+  return (
+    <div className="mt-4 space-y-2">
+      <p>To show the Diagram alone in a page or a slide, paste this embed code (the embed stops working when the link does):</p>
+      <div className="flex flex-wrap gap-4">
+        {toggle("dark", "Dark figure")}
+        {toggle("largeType", "Large labels")}
+        {toggle("scrub", "Time scrubber")}
+      </div>
+      <div className="flex flex-wrap items-start gap-2">
+        <label htmlFor="new-embed-code" className="sr-only">
+          Embed code
+        </label>
+        <textarea id="new-embed-code" readOnly rows={3} value={code} onFocus={(e) => e.currentTarget.select()} className={`${fieldStyles.control} mt-0 min-w-72 flex-1 font-mono text-xs`} />
+        <CopyButton url={code} label="Copy the embed code" words="Copy code" />
+      </div>
+    </div>
   );
 }
 
@@ -73,7 +112,8 @@ function CreateLinkForm({ projectId, scenarioId, onCreated }: { projectId: strin
       <div>
         <h2 className="font-serif text-xl font-semibold">New share link</h2>
         <p className="mt-1 text-sm text-ink-soft">
-          Anyone with the link sees this scenario read-only, with its Budget, and nothing else of the project. No account needed.
+          Anyone with the link sees this scenario read-only, with its Diagram and Budget, and nothing else of the project; they can export the
+          figure, the numbers and the scenario file. No account needed. The same link can be embedded in a page or a slide.
         </p>
       </div>
       <FormProblem problem={problem} />
@@ -133,6 +173,7 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
             <input id="new-share-url" readOnly value={latest.url} onFocus={(e) => e.currentTarget.select()} className={`${fieldStyles.control} mt-0 min-w-72 flex-1 font-mono text-sm`} />
             <CopyButton url={latest.url} label="Copy the new link's URL" />
           </div>
+          <EmbedCode url={latest.url} />
         </Notice>
       )}
 
@@ -167,7 +208,12 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
                           {status.text}
                         </td>
                         <td className={`${tableStyles.cell} whitespace-nowrap text-right`}>
-                          {link.status === "active" && urls[link.id] && <CopyButton url={urls[link.id]} label={`Copy the URL of “${link.label}”`} />}
+                          {link.status === "active" && urls[link.id] && (
+                            <>
+                              <CopyButton url={urls[link.id]} label={`Copy the URL of “${link.label}”`} />
+                              <CopyButton url={embedCodeOf(urls[link.id])} label={`Copy the embed code of “${link.label}”`} words="Copy embed code" />
+                            </>
+                          )}
                           {link.status === "active" && (
                             <button type="button" onClick={() => setRevoking(link)} className={buttonStyles.row} aria-label={`Revoke “${link.label}”`}>
                               Revoke

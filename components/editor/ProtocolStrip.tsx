@@ -10,7 +10,7 @@ import { segmentShares } from "@/canvas/kernels/lab-view/viewport";
 import type { SegmentName } from "@/canvas/kernels/timeline";
 import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
-import { DraftField, QuantityField } from "./QuantityField";
+import { DraftField, QuantityField, type CommitResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
@@ -23,6 +23,24 @@ const SHAPE_WORDS: Record<RampShape, string> = {
 const SEGMENT_WORDS: Record<SegmentName, string> = { separation: "Separation", hold: "Hold", recombination: "Recombination" };
 
 const FORMULA_HINT = "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration; t, pi, e, arithmetic and elementary functions.";
+
+/** A duration typed with its unit, read-only for a viewer. */
+function DurationField({ seconds, testId, onCommit }: { seconds: number; testId: string; onCommit(seconds: number): CommitResult }) {
+  const readOnly = useEditor((s) => s.readOnly);
+  return (
+    <div className="w-32">
+      <QuantityField
+        compact
+        label="Duration"
+        dimension="time"
+        shown={formatQuantity(seconds, "time", { digits: 4 })}
+        disabled={readOnly}
+        testId={testId}
+        onCommit={onCommit}
+      />
+    </div>
+  );
+}
 
 /** A formula profile: its expression (checked by the physics on commit) and its duration, one undo step each. */
 function FormulaProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: "formula" }> }) {
@@ -43,17 +61,11 @@ function FormulaProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: 
           onCommit={(expression) => edit("Set profile formula", (d) => withFormula(d, { expression }))}
         />
       </div>
-      <div className="w-32">
-        <QuantityField
-          compact
-          label="Duration"
-          dimension="time"
-          shown={formatQuantity(protocol.durationSeconds, "time", { digits: 4 })}
-          disabled={readOnly}
-          testId="formula-duration"
-          onCommit={(durationSeconds) => edit("Set profile duration", (d) => withFormula(d, { durationSeconds }))}
-        />
-      </div>
+      <DurationField
+        seconds={protocol.durationSeconds}
+        testId="formula-duration"
+        onCommit={(durationSeconds) => edit("Set profile duration", (d) => withFormula(d, { durationSeconds }))}
+      />
     </div>
   );
 }
@@ -116,17 +128,11 @@ export function ProtocolStrip() {
             >
               <div className="mb-1 text-xs font-semibold text-ink">{SEGMENT_WORDS[segment]}</div>
               <div className="flex flex-wrap items-start gap-2">
-                <div className="w-32">
-                  <QuantityField
-                    compact
-                    label="Duration"
-                    dimension="time"
-                    shown={formatQuantity(part.durationSeconds, "time", { digits: 4 })}
-                    disabled={readOnly}
-                    testId={`duration-${segment}`}
-                    onCommit={(seconds) => edit(`Set ${segment} duration`, (d) => withSegmentDuration(d, segment, seconds))}
-                  />
-                </div>
+                <DurationField
+                  seconds={part.durationSeconds}
+                  testId={`duration-${segment}`}
+                  onCommit={(seconds) => edit(`Set ${segment} duration`, (d) => withSegmentDuration(d, segment, seconds))}
+                />
                 {ramp && (
                   <label className="block text-xs font-semibold text-ink-soft">
                     Ramp shape

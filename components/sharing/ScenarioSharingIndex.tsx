@@ -16,7 +16,7 @@ export const sharingPath = (projectId: string, scenarioId: string) => `/projects
 export const historyPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/history`;
 export const filesPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}/files`;
 
-/** Each scenario of the project with the way to its share links (editors and owners) and its history (everyone). */
+/** Each scenario of the project with the way to its share links (editors and owners), its history and its files (everyone). */
 export function ScenarioSharingIndex({ project }: { project: ProjectDto }) {
   const scenarios = useScenarioPage(project.id, query);
   const shares = project.can.includes("share:manage");
@@ -24,12 +24,12 @@ export function ScenarioSharingIndex({ project }: { project: ProjectDto }) {
     <section aria-labelledby="sharing-title" className="space-y-4">
       <div>
         <h2 id="sharing-title" className="font-serif text-xl font-semibold">
-          Share links and history
+          Share links, history and files
         </h2>
         <p className="mt-1 text-sm text-ink-soft">
           {shares
-            ? "A share link shows one scenario, read-only, to anyone who has it: no account needed. Every saved version stays in the history and can be restored."
-            : "Every saved version of a scenario stays in its history."}
+            ? "A share link shows one scenario, read-only, to anyone who has it: no account needed. Every saved version stays in the history and can be restored. Figures, notes and data travel with a scenario as its files."
+            : "Every saved version of a scenario stays in its history; its figures, notes and data are among its files."}
         </p>
       </div>
       <QueryView query={scenarios} what="the scenarios" lines={3}>
@@ -38,7 +38,7 @@ export function ScenarioSharingIndex({ project }: { project: ProjectDto }) {
             <EmptyState title="No scenarios yet" />
           ) : (
             <table className={tableStyles.table}>
-              <caption className="sr-only">Share links and history of each scenario</caption>
+              <caption className="sr-only">Share links, history and files of each scenario</caption>
               <TableHead columns={columns} />
               <tbody>
                 {page.items.map((s) => (

@@ -1,0 +1,172 @@
+import { expect, test, type Browser, type Page } from "@playwright/test";
+import { readFile } from "node:fs/promises";
+import { createServer } from "node:http";
+import type { AddressInfo } from "node:net";
+
+// The machine running these is small and shared: every wait is generous.
+test.setTimeout(300_000);
+test.use({ navigationTimeout: 90_000, actionTimeout: 60_000 });
+const slow = { timeout: 60_000 };
+const password = "a long enough password";
+
+/** A researcher of our own (the e2e database has no demo data), signed in through the sign-in page. */
+async function signedInAs(browser: Browser, name: string, email: string): Promise<Page> {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  expect((await page.request.post("/api/users", { data: { email, name, password } })).status()).toBe(201);
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: /sign in/i }).first().click();
+  await expect(page).toHaveURL(/\/projects/, slow);
+  return page;
+}
+
+/** A lab at five horizon radii from a 10 M☉ black hole, one branch staying: far-field and horizon counts in both channels. */
+function blackHoleScenario() {
+  return {
+    schemaVersion: 1,
+    background: { kind: "schwarzschild", massKg: 1.988_409_870_698_051e31 },
+    lab: { placement: "areal-radius", arealRadiusMetres: 1.5e5 },
+    source: { chargeCoulombs: 1.602_176_634e-17, massKg: 1e-14, labMassKg: null },
+    separation: { axis: "radial", split: "one-branch-stays", distanceMetres: 1e-5 },
+    protocol: {
+      kind: "segments",
+      separation: { durationSeconds: 0.05, shape: "minimum-jerk" },
+      hold: { durationSeconds: 1 },
+      recombination: { durationSeconds: 0.05, shape: "minimum-jerk" },
+    },
+    display: { theme: "light", showGrid: true },
+    numerics: { kinkTimeResolutionSeconds: null },
+  };
+}
+
+/** How many pixels of a canvas differ from its top-left pixel (the ground): a drawn figure has many. */
+const inkedPixels = (canvas: HTMLCanvasElement) => {
+  const context = canvas.getContext("2d")!;
+  const { data } = context.getImageData(0, 0, canvas.width, canvas.height);
+  let count = 0;
+  for (let i = 0; i < data.length; i += 4) if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) count++;
+  return count;
+};
+
+test("a share link shows the Diagram signed out and exports a vector figure; its embed draws inside another site's frame, with a time scrubber", async ({ browser, baseURL }) => {
+  const stamp = Date.now();
+  const owner = await signedInAs(browser, "Figure Owner", `figure-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: "Talk figures" } })).json()).project;
+  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()).scenario;
+  const created = await owner.request.post(`/api/projects/${project.id}/scenarios/${scenario.id}/share-links`, { data: { label: "for the colloquium" } });
+  expect(created.status()).toBe(201);
+  const { url, link } = (await created.json()) as { url: string; link: { id: string } };
+  const token = url.split("/").pop()!;
+
+  // Signed out: the share page draws the Diagram, with the Protocol strip and the Budget.
+  const outsiderContext = await browser.newContext({ acceptDownloads: true });
+  const outsider = await outsiderContext.newPage();
+  const opened = await outsider.goto(`/share/${token}`);
+  expect(opened?.status()).toBe(200);
+  expect(opened?.headers()["content-security-policy"]).toBe("frame-ancestors 'none'");
+  expect(opened?.headers()["x-frame-options"]).toBe("DENY");
+  const diagram = outsider.getByTestId("diagram").locator("canvas").first();
+  await expect(diagram).toBeVisible(slow);
+  await expect.poll(() => diagram.evaluate(inkedPixels), slow).toBeGreaterThan(2000);
+  await expect(outsider.getByRole("heading", { name: "Protocol strip" })).toBeVisible();
+  await expect(outsider.getByTestId("budget")).toHaveAttribute("data-state", "current", slow);
+  await expect(outsider.getByTestId("duration-hold")).toBeDisabled();
+
+  // Export the SVG through the menu; the downloaded file parses as XML and names both branches.
+  await outsider.getByRole("button", { name: "Export ▾" }).click();
+  const [svgDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download SVG" }).click()]);
+  expect(svgDownload.suggestedFilename()).toBe("hovering-lab-diagram.svg");
+  const svgText = await readFile((await svgDownload.path())!, "utf8");
+  const parsed = await outsider.evaluate((text) => {
+    const doc = new DOMParser().parseFromString(text, "image/svg+xml");
+    const path = (id: string) => doc.querySelector(`g#${id} path`)?.getAttribute("d") ?? null;
+    return {
+      error: doc.querySelector("parsererror")?.textContent ?? null,
+      root: doc.documentElement.localName,
+      branchA: path("branch-a"),
+      branchB: path("branch-b"),
+      labels: [...doc.querySelectorAll("g#labels text")].map((t) => t.textContent),
+    };
+  }, svgText);
+  expect(parsed.error).toBeNull();
+  expect(parsed.root).toBe("svg");
+  expect(parsed.branchA).toMatch(/^M[\d.]+ [\d.]+ L/);
+  expect(parsed.branchB).toMatch(/^M[\d.]+ [\d.]+ L/);
+  expect(parsed.labels).toEqual(expect.arrayContaining(["H⁺", "ℐ⁺"]));
+
+  // A PNG at 2× is twice the stage in each direction (read from the file's IHDR chunk, PNG spec §11.2.2).
+  await outsider.getByLabel("2×").check();
+  const [pngDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download PNG" }).click()]);
+  expect(pngDownload.suggestedFilename()).toBe("hovering-lab-diagram-2x.png");
+  const png = await readFile((await pngDownload.path())!);
+  expect(png.subarray(1, 4).toString("ascii")).toBe("PNG");
+  const stage = (await diagram.boundingBox())!;
+  expect(png.readUInt32BE(16)).toBe(2 * Math.round(stage.width));
+  expect(png.readUInt32BE(20)).toBe(2 * Math.round(stage.height));
+
+  // The embed answers any origin's frame, and draws inside a page of another site.
+  const embedAnswer = await outsider.request.get(`/embed/${token}`);
+  expect(embedAnswer.status()).toBe(200);
+  expect(embedAnswer.headers()["content-security-policy"]).toBe("frame-ancestors *");
+  expect(embedAnswer.headers()["x-frame-options"]).toBeUndefined();
+  // The slides come from another origin: a tiny page served on loopback at a port of its own (a page served by
+  // Playwright itself counts as public, and Chromium keeps public pages from framing loopback addresses).
+  const slides = createServer((_req, res) => {
+    res.writeHead(200, { "content-type": "text/html; charset=utf-8" });
+    res.end(`<!doctype html><title>Slides</title><iframe src="${baseURL}/embed/${token}?theme=dark&amp;type=large&amp;scrub=1" width="720" height="560"></iframe>`);
+  });
+  await new Promise<void>((resolve) => slides.listen(0, "127.0.0.1", resolve));
+  await outsider.goto(`http://127.0.0.1:${(slides.address() as AddressInfo).port}/`);
+  const frame = outsider.frameLocator("iframe");
+  await expect(frame.getByTestId("embed")).toHaveAttribute("data-theme", "dark", slow);
+  const frameCanvas = frame.getByTestId("embed-diagram").locator("canvas").first();
+  await expect(frameCanvas).toBeVisible(slow);
+  await expect.poll(() => frameCanvas.evaluate(inkedPixels), slow).toBeGreaterThan(2000);
+  await expect(frame.getByRole("banner")).toHaveCount(0);
+
+  // Scrubbing back to the middle of the hold: quanta have gone to ℐ⁺ and into H⁺, fewer than at the end.
+  const slider = frame.getByLabel("Lab time");
+  const atEnd = Number(await frame.getByTestId("running-horizon").getAttribute("data-log10"));
+  await slider.fill("500");
+  await expect(frame.getByTestId("scrub-time")).toContainText("τ = 550 ms");
+  const midHorizon = Number(await frame.getByTestId("running-horizon").getAttribute("data-log10"));
+  const midFar = Number(await frame.getByTestId("running-far-field").getAttribute("data-log10"));
+  expect(midHorizon).toBeLessThan(atEnd);
+  expect(Number.isFinite(midFar)).toBe(true);
+  await expect(frame.getByText(/approximation/)).toBeVisible();
+  await frame.getByRole("button", { name: /Play/ }).click();
+  await expect(frame.getByRole("button", { name: /Pause/ })).toBeVisible();
+
+  // Revoked, the embed is not found too.
+  expect((await owner.request.delete(`/api/projects/${project.id}/scenarios/${scenario.id}/share-links/${link.id}`)).status()).toBe(204);
+  expect((await outsider.request.get(`/embed/${token}`)).status()).toBe(404);
+  await outsiderContext.close();
+  await owner.context().close();
+  slides.close();
+});
+
+test("an editor's toolbar exports the scenario file and the Budget as CSV", async ({ browser }) => {
+  const stamp = Date.now();
+  const owner = await signedInAs(browser, "Export Owner", `export-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: "Exports" } })).json()).project;
+  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()).scenario;
+  await owner.goto(`/projects/${project.id}/scenarios/${scenario.id}`);
+  await expect(owner.getByTestId("budget")).toHaveAttribute("data-state", "current", slow);
+  await owner.getByRole("button", { name: "Export ▾" }).click();
+
+  const [file] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download scenario file (JSON)" }).click()]);
+  expect(file.suggestedFilename()).toBe("hovering-lab.json");
+  const scenarioFile = JSON.parse(await readFile((await file.path())!, "utf8"));
+  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: blackHoleScenario() });
+
+  const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
+  expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");
+  const lines = (await readFile((await csv.path())!, "utf8")).split("\r\n");
+  expect(lines[0]).toBe("quantity,value,unit,source,flags");
+  const horizon = lines.find((l) => l.startsWith("Quanta into the horizon (electromagnetic),"))!;
+  const shown = Number(await owner.getByTestId("budget-electromagnetic-horizon").getAttribute("data-value"));
+  expect(Number(horizon.split(",")[1])).toBe(shown);
+  await owner.context().close();
+});

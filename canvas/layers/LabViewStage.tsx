@@ -7,7 +7,7 @@
  * (a ring marks the one selected while the view has focus, and a live line names it with its value), arrow keys
  * nudge it, Escape lets it go.
  */
-import { useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
@@ -101,6 +101,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
   const fonts = useFigureFonts();
   const container = useRef<HTMLDivElement>(null);
   const [focus, setFocus] = useState<"none" | "pointer" | "keyboard">("none");
+  const selectionLineId = useId();
   const palette = FIGURE_PALETTES[document.display.theme];
   const protocol = document.protocol.kind === "segments" ? document.protocol : null;
 
@@ -143,7 +144,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
       tabIndex={0}
       role="application"
       aria-label="Lab view: branch offsets against lab time; Tab selects the next handle, the arrow keys move it, Escape lets it go"
-      aria-describedby="lab-view-selection"
+      aria-describedby={selectionLineId}
       data-testid="lab-view"
       data-selected={selection ?? ""}
       data-handles={JSON.stringify(handles.map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })))}
@@ -220,8 +221,9 @@ export default function LabViewStage({ width, height }: { width: number; height:
           {focus === "keyboard" && <Rect x={1} y={1} width={width - 2} height={height - 2} stroke={palette.focus} strokeWidth={2} cornerRadius={3} />}
         </Layer>
       </Stage>
-      <p id="lab-view-selection" aria-live="polite" className="sr-only" data-testid="lab-view-selection">
-        {selectionWords(selection, protocol, document.separation)}
+      {/* Quiet while dragging (a value every frame would flood a screen reader): the value it settles on is read out. */}
+      <p id={selectionLineId} aria-live="polite" className="sr-only" data-testid="lab-view-selection">
+        {dragging ? "" : selectionWords(selection, protocol, document.separation)}
       </p>
     </div>
   );

@@ -5,12 +5,12 @@ import { messageOf } from "@/components/api/client";
 import { useInvitations, useResendInvitation, useRevokeInvitation, type InvitationDto } from "@/components/api/invitations";
 import { sentence } from "@/components/format/text";
 import { roleNames } from "@/components/format/words";
-import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { EmptyState } from "@/components/ui/EmptyState";
 import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
+import { RevokeButton, RevokeDialog, useRevokeConfirmation } from "@/components/sharing/RevokeRowAction";
 import { buttonStyles, tableStyles } from "@/components/ui/styles";
 
 const columns = [{ label: "E-mail" }, { label: "Role" }, { label: "Invited by" }, { label: "Sent" }, { label: "Link" }, { label: "Actions", hiddenLabel: true }];
@@ -20,7 +20,7 @@ export function InvitationTable({ projectId }: { projectId: string }) {
   const invitations = useInvitations(projectId);
   const resend = useResendInvitation(projectId);
   const revoke = useRevokeInvitation(projectId);
-  const [revoking, setRevoking] = useState<InvitationDto | null>(null);
+  const revoking = useRevokeConfirmation();
   const [message, setMessage] = useState<{ tone: "success" | "caution"; text: string } | null>(null);
 
   const onResend = (invitation: InvitationDto) => {
@@ -79,9 +79,7 @@ export function InvitationTable({ projectId }: { projectId: string }) {
                       >
                         Send again
                       </button>
-                      <button type="button" onClick={() => setRevoking(invitation)} className={buttonStyles.row} aria-label={`Revoke the invitation to ${invitation.email}`}>
-                        Revoke
-                      </button>
+                      <RevokeButton target={{ id: invitation.id, name: `the invitation to ${invitation.email}` }} onAsk={revoking.ask} />
                     </td>
                   </tr>
                 ))}
@@ -90,20 +88,9 @@ export function InvitationTable({ projectId }: { projectId: string }) {
           )
         }
       </QueryView>
-      <ConfirmDialog
-        open={revoking !== null}
-        title={`Revoke the invitation to ${revoking?.email ?? ""}?`}
-        confirmLabel="Revoke invitation"
-        pending={revoke.isPending}
-        error={revoke.isError ? sentence(messageOf(revoke.error)) : null}
-        onCancel={() => {
-          setRevoking(null);
-          revoke.reset();
-        }}
-        onConfirm={() => revoking && revoke.mutate(revoking.id, { onSuccess: () => setRevoking(null) })}
-      >
+      <RevokeDialog target={revoking.target} onClose={revoking.close} revoke={revoke} confirmLabel="Revoke invitation">
         The link in their e-mail stops working at once. You can invite the address again later.
-      </ConfirmDialog>
+      </RevokeDialog>
     </section>
   );
 }

@@ -1,12 +1,9 @@
 "use client";
 
 import { useState } from "react";
-import { messageOf } from "@/components/api/client";
 import { useCreateShareLink, useRevokeShareLink, useShareLinks, type ShareLinkDto } from "@/components/api/share-links";
-import { sentence } from "@/components/format/text";
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
-import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { EmptyState } from "@/components/ui/EmptyState";
 import { SelectField, TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
@@ -16,6 +13,7 @@ import { TimeStamp } from "@/components/ui/TimeStamp";
 import { embedSnippet, type EmbedOptions } from "@/components/export/embed-options";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
 import { shareLinkCreateSchema } from "@/lib/contracts";
+import { RevokeButton, RevokeDialog, useRevokeConfirmation } from "./RevokeRowAction";
 
 const expiryChoices: { days: number | null; label: string }[] = [
   { days: null, label: "Until revoked" },
@@ -148,7 +146,7 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
   const revoke = useRevokeShareLink(projectId, scenarioId);
   const [urls, setUrls] = useState<Record<string, string>>({});
   const [latest, setLatest] = useState<{ label: string; url: string } | null>(null);
-  const [revoking, setRevoking] = useState<ShareLinkDto | null>(null);
+  const revoking = useRevokeConfirmation();
 
   return (
     <div className="space-y-10">
@@ -214,11 +212,7 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
                               <CopyButton url={embedCodeOf(urls[link.id])} label={`Copy the embed code of “${link.label}”`} words="Copy embed code" />
                             </>
                           )}
-                          {link.status === "active" && (
-                            <button type="button" onClick={() => setRevoking(link)} className={buttonStyles.row} aria-label={`Revoke “${link.label}”`}>
-                              Revoke
-                            </button>
-                          )}
+                          {link.status === "active" && <RevokeButton target={{ id: link.id, name: `“${link.label}”` }} onAsk={revoking.ask} />}
                         </td>
                       </tr>
                     );
@@ -230,20 +224,9 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
         </QueryView>
       </section>
 
-      <ConfirmDialog
-        open={revoking !== null}
-        title={`Revoke “${revoking?.label ?? ""}”?`}
-        confirmLabel="Revoke link"
-        pending={revoke.isPending}
-        error={revoke.isError ? sentence(messageOf(revoke.error)) : null}
-        onCancel={() => {
-          setRevoking(null);
-          revoke.reset();
-        }}
-        onConfirm={() => revoking && revoke.mutate(revoking.id, { onSuccess: () => setRevoking(null) })}
-      >
+      <RevokeDialog target={revoking.target} onClose={revoking.close} revoke={revoke} confirmLabel="Revoke link">
         Whoever has this link will get “not found” from now on. It stays listed here with its view count.
-      </ConfirmDialog>
+      </RevokeDialog>
     </div>
   );
 }

@@ -107,6 +107,24 @@ function auditFile(db: Kysely<Database>, actor: Actor, action: "attachment_added
   });
 }
 
+/**
+ * The object keys of every file of a project, or of one of its scenarios. Read before deleting the project or the
+ * scenario (the rows go with them by cascade), so that the objects can be removed from the store afterwards.
+ */
+export async function attachmentObjectKeys(db: Kysely<Database>, projectId: string, scenarioId?: string): Promise<string[]> {
+  if (!isUuid(projectId) || (scenarioId !== undefined && !isUuid(scenarioId))) return [];
+  let query = db.selectFrom("attachments").select("objectKey").where("projectId", "=", projectId);
+  if (scenarioId !== undefined) query = query.where("scenarioId", "=", scenarioId);
+  return (await query.execute()).map((r) => r.objectKey);
+}
+
+/** Removes objects whose rows are gone; a failure is logged, not raised (the deletion the caller asked for is done). */
+export async function removeStoredObjects(store: ObjectStore, keys: string[]): Promise<void> {
+  for (const key of keys) {
+    await store.delete(key).catch((error: unknown) => console.error("[attachments] could not remove an object whose row is gone", key, error));
+  }
+}
+
 export async function uploadAttachment(
   db: Kysely<Database>,
   store: ObjectStore,

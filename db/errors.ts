@@ -8,6 +8,7 @@ export type ErrorCode =
   | "conflict"
   | "version_conflict"
   | "payload_too_large"
+  | "unsupported_media_type"
   | "unprocessable"
   | "rate_limited"
   | "service_unavailable";

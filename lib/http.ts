@@ -14,6 +14,7 @@ const statusOf: Record<ErrorCode, number> = {
   conflict: 409,
   version_conflict: 409,
   payload_too_large: 413,
+  unsupported_media_type: 415,
   unprocessable: 422,
   rate_limited: 429,
   service_unavailable: 503,

@@ -6,31 +6,11 @@ import "server-only";
  *
  * Refusals: too large 413, empty 422, a content type the route does not take 415 (in the one error shape).
  */
-import { NextResponse, type NextRequest } from "next/server";
+import type { NextRequest } from "next/server";
 import { AppError } from "../db/errors";
-import { route } from "./http";
 
-/** A request whose content type the route does not take, or a file whose content is not what it says. */
-export class UnsupportedMediaType extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = "UnsupportedMediaType";
-  }
-}
-
-/** route(), plus 415 in the one error shape for UnsupportedMediaType. */
-export function uploadRoute<P>(handler: (req: NextRequest, params: P) => Promise<Response>) {
-  return route<P>(async (req, params) => {
-    try {
-      return await handler(req, params);
-    } catch (error) {
-      if (error instanceof UnsupportedMediaType) {
-        return NextResponse.json({ error: { code: "unsupported_media_type", message: error.message } }, { status: 415 });
-      }
-      throw error;
-    }
-  });
-}
+/** A request whose content type the route does not take, or a file whose content is not what it says (415). */
+export const unsupportedMediaType = (message: string) => new AppError("unsupported_media_type", message);
 
 export interface UploadedFile {
   /** The file name the client gave, or null. */
@@ -110,7 +90,7 @@ export async function readUpload(req: NextRequest, options: { maxBytes: number; 
   }
   const accepted = options.accept.some((a) => a === "*" || a === type || (a.endsWith("/*") && type.startsWith(a.slice(0, -1))));
   if (!accepted) {
-    throw new UnsupportedMediaType(`${what} must be sent as ${[...options.accept, "multipart/form-data"].join(", ")}; this request is ${type || "without a content type"}`);
+    throw unsupportedMediaType(`${what} must be sent as ${[...options.accept, "multipart/form-data"].join(", ")}; this request is ${type || "without a content type"}`);
   }
   const bytes = await readLimited(req, maxBytes, what, maxBytes);
   if (bytes.byteLength === 0) throw new AppError("unprocessable", `${what} is empty`, [{ path: "file", message: "the file is empty" }]);

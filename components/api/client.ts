@@ -50,7 +50,8 @@ export async function apiFetch<T>(path: string, init: ApiInit = {}): Promise<T> 
   return body as T;
 }
 
-function errorFromBody(status: number, body: unknown): ApiError {
+/** The ApiError for a failed answer's parsed body (anything: a body that is not our error shape says so). */
+export function errorFromBody(status: number, body: unknown): ApiError {
   const error = (body as { error?: Record<string, unknown> } | undefined)?.error;
   if (!error || typeof error.message !== "string") {
     return new ApiError(status, "unexpected", `the server answered with status ${status}; try again in a moment`);

@@ -7,7 +7,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { AttachmentDto } from "@/db/attachments";
 import type { ScenarioDto } from "@/db/scenarios";
 import type { ProfileFlag, SampledProtocol, SequencerSample, ColumnReading } from "@/physics/protocols/sequencer-csv";
-import { ApiError, apiFetch } from "./client";
+import { ApiError, apiFetch, errorFromBody } from "./client";
 import { projectKeys } from "./projects";
 import { scenarioKeys } from "./scenarios";
 
@@ -16,16 +16,13 @@ export type { AttachmentDto };
 const scenarioPath = (projectId: string, scenarioId: string) => `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}`;
 
 function errorOf(status: number, text: string): ApiError {
-  let body: { error?: Record<string, unknown> } | undefined;
+  let body: unknown;
   try {
     body = JSON.parse(text);
   } catch {
     body = undefined;
   }
-  const error = body?.error;
-  if (!error || typeof error.message !== "string") return new ApiError(status, "unexpected", `the server answered with status ${status}; try again in a moment`);
-  const { code, message, fields, ...details } = error;
-  return new ApiError(status, String(code ?? "unexpected"), message, Array.isArray(fields) ? fields : [], details);
+  return errorFromBody(status, body);
 }
 
 /** POSTs a form, reporting the share of it sent (0 to 1). */

@@ -307,6 +307,24 @@ describe("attachments", () => {
     expect((await attachmentRows(f)).map((r) => r.id)).not.toContain(up.body.attachment.id);
   });
 
+  it("removes a scenario's objects from the store when the scenario, or its whole project, is deleted", async () => {
+    const own = await projectFixture();
+    const ownBase = `/api/projects/${own.projectId}/scenarios/${own.scenarioId}`;
+    const up = await rawUpload(own, "fit.json", '{"fringe": "invented"}', "application/json");
+    expect(up.status, JSON.stringify(up.body)).toBe(201);
+    expect(await objectKeysUnder(scenarioPrefix(own))).toHaveLength(1);
+    const scenarioRoute = await import("@/app/api/projects/[projectId]/scenarios/[scenarioId]/route");
+    expect((await call(scenarioRoute.DELETE, "DELETE", ownBase, { as: own.users.editor, params: S(own) })).status).toBe(204);
+    expect(await objectKeysUnder(scenarioPrefix(own))).toEqual([]);
+
+    const other = await projectFixture();
+    const again = await rawUpload(other, "notes.csv", "t [s],separation [m]\n0,0\n1,0\n", "text/csv");
+    expect(again.status, JSON.stringify(again.body)).toBe(201);
+    const projectRoute = await import("@/app/api/projects/[projectId]/route");
+    expect((await call(projectRoute.DELETE, "DELETE", `/api/projects/${other.projectId}`, { as: other.users.owner, params: { projectId: other.projectId } })).status).toBe(204);
+    expect(await objectKeysUnder(`projects/${other.projectId}/`)).toEqual([]);
+  });
+
   describe("refusals store nothing", () => {
     const refusals: { name: string; file: string; bytes: () => Uint8Array | string; contentType?: string; status: number; reason: RegExp }[] = [
       { name: "a PDF named .png", file: "figure.png", bytes: () => "%PDF-1.7\n%...", status: 415, reason: /named as a PNG image but its content is a PDF/ },

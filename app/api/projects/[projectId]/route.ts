@@ -1,7 +1,9 @@
 import { getDb } from "@/db";
+import { attachmentObjectKeys, removeStoredObjects } from "@/db/attachments";
 import { deleteProject, getProject, updateProject } from "@/db/projects";
 import { projectUpdateSchema } from "@/lib/contracts";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
+import { objectStore } from "@/lib/storage";
 
 type Params = { projectId: string };
 
@@ -18,6 +20,8 @@ export const PATCH = route<Params>(async (req, { projectId }) => {
 
 export const DELETE = route<Params>(async (req, { projectId }) => {
   const actor = await requireActor(req);
+  const files = await attachmentObjectKeys(getDb(), projectId);
   await deleteProject(getDb(), actor, projectId);
+  await removeStoredObjects(objectStore(), files);
   return noContent();
 });

@@ -1,7 +1,9 @@
 import { getDb } from "@/db";
+import { attachmentObjectKeys, removeStoredObjects } from "@/db/attachments";
 import { deleteScenario, getScenario, updateScenario, validDocument } from "@/db/scenarios";
 import { scenarioUpdateSchema } from "@/lib/contracts";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
+import { objectStore } from "@/lib/storage";
 
 type Params = { projectId: string; scenarioId: string };
 
@@ -20,6 +22,8 @@ export const PUT = route<Params>(async (req, { projectId, scenarioId }) => {
 
 export const DELETE = route<Params>(async (req, { projectId, scenarioId }) => {
   const actor = await requireActor(req);
+  const files = await attachmentObjectKeys(getDb(), projectId, scenarioId);
   await deleteScenario(getDb(), actor, projectId, scenarioId);
+  await removeStoredObjects(objectStore(), files);
   return noContent();
 });

@@ -4,8 +4,8 @@ import { AppError } from "@/db/errors";
 import { createScenario } from "@/db/scenarios";
 import { recordAudit } from "@/db/audit";
 import { SCENARIO_FILE_MAX_BYTES } from "@/lib/contracts";
-import { json, requireActor } from "@/lib/http";
-import { readUpload, uploadRoute, utf8 } from "@/lib/upload-body";
+import { json, requireActor, route } from "@/lib/http";
+import { readUpload, utf8 } from "@/lib/upload-body";
 import { parseScenarioFileText } from "@/physics/scenario/exchange";
 
 type Params = { projectId: string };
@@ -14,7 +14,7 @@ type Params = { projectId: string };
  * Creates a scenario from a scenario file (editors and owners): the file as the JSON body, or multipart with a
  * `file` field. A file that is not a scenario file answers 422 with every problem by its path in the file.
  */
-export const POST = uploadRoute<Params>(async (req, { projectId }) => {
+export const POST = route<Params>(async (req, { projectId }) => {
   const actor = await requireActor(req);
   await assertMayWriteScenarios(getDb(), actor, projectId);
   const upload = await readUpload(req, { maxBytes: SCENARIO_FILE_MAX_BYTES, what: "the scenario file", accept: ["application/json", "text/plain"] });

@@ -3,8 +3,8 @@ import { assertMayWriteScenarios } from "@/db/attachments";
 import { AppError } from "@/db/errors";
 import { getScenario, updateScenario } from "@/db/scenarios";
 import { sequencerProfileJsonSchema, sequencerProfileOptionsSchema } from "@/lib/contracts";
-import { json, requireActor } from "@/lib/http";
-import { readUpload, uploadRoute, utf8 } from "@/lib/upload-body";
+import { json, requireActor, route } from "@/lib/http";
+import { readUpload, utf8 } from "@/lib/upload-body";
 import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
 import type { z } from "zod";
 
@@ -27,7 +27,7 @@ function options<T extends z.ZodType>(schema: T, input: unknown): z.infer<T> {
  * timeUnit, separationUnit (when the header has none, or to override it), interpolation (linear, cubic-spline),
  * dryRun=1 to preview and store nothing, else version (the scenario version edited) to save a new revision.
  */
-export const POST = uploadRoute<Params>(async (req, { projectId, scenarioId }) => {
+export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
   const actor = await requireActor(req);
   const db = getDb();
   await assertMayWriteScenarios(db, actor, projectId, scenarioId);

@@ -4,6 +4,7 @@ import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenari
 import { type Actor, assertProjectAccess } from "./access";
 import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
+import { recordAudit } from "./audit";
 import { roleInProject } from "./members";
 import { person, type PersonDto } from "./people";
 import type { Database } from "./schema";
@@ -187,7 +188,8 @@ export async function createScenario(
   db: Kysely<Database>,
   actor: Actor,
   projectId: string,
-  input: { title: string; document: ScenarioDocument },
+  /** `importedFrom`: the scenario file's name, recorded in the project's history with the new scenario. */
+  input: { title: string; document: ScenarioDocument; importedFrom?: string },
 ): Promise<ScenarioDto> {
   assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
   const id = await db.transaction().execute(async (trx) => {
@@ -204,7 +206,10 @@ export async function createScenario(
       })
       .returning(["id", "version"])
       .executeTakeFirstOrThrow();
-    await insertRevision(trx, { id: row.id, version: row.version, ...input }, actor.userId);
+    await insertRevision(trx, { id: row.id, version: row.version, title: input.title, document: input.document }, actor.userId);
+    if (input.importedFrom !== undefined) {
+      await recordAudit(trx, { projectId, actorId: actor.userId, action: "scenario_imported", scenarioId: row.id, subject: input.importedFrom });
+    }
     await trx.updateTable("projects").set({ updatedAt: new Date() }).where("id", "=", projectId).execute();
     return row.id;
   });

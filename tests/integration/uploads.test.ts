@@ -112,6 +112,8 @@ describe("scenario file import", () => {
     const res = await multipart(importRoute.POST, `/api/projects/${f.projectId}/scenarios/import`, f.users.owner, { projectId: f.projectId }, form);
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.scenario.title).toBe("From a form");
+    const history = await getDb().selectFrom("projectAudit").select(["action", "actorId", "subject"]).where("scenarioId", "=", res.body.scenario.id).execute();
+    expect(history).toEqual([{ action: "scenario_imported", actorId: f.users.owner.id, subject: "pair.json" }]);
   });
 
   it("answers 422 with every problem by its path, and stores nothing", async () => {

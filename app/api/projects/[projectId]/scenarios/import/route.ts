@@ -2,7 +2,6 @@ import { getDb } from "@/db";
 import { assertMayWriteScenarios } from "@/db/attachments";
 import { AppError } from "@/db/errors";
 import { createScenario } from "@/db/scenarios";
-import { recordAudit } from "@/db/audit";
 import { SCENARIO_FILE_MAX_BYTES } from "@/lib/contracts";
 import { json, requireActor, route } from "@/lib/http";
 import { readUpload, utf8 } from "@/lib/upload-body";
@@ -26,17 +25,6 @@ export const POST = route<Params>(async (req, { projectId }) => {
       parsed.issues.map((i) => ({ path: i.path || "(file)", message: i.message })),
     );
   }
-  const scenario = await createScenario(getDb(), actor, projectId, { title: parsed.title, document: parsed.document });
-  await recordAudit(getDb(), {
-    projectId,
-    actorId: actor.userId,
-    action: "scenario_imported",
-    scenarioId: scenario.id,
-    subject: upload.name ?? scenario.title,
-    targetUserId: null,
-    targetEmail: null,
-    role: null,
-    previousRole: null,
-  });
+  const scenario = await createScenario(getDb(), actor, projectId, { title: parsed.title, document: parsed.document, importedFrom: upload.name ?? parsed.title });
   return json({ scenario }, 201);
 });

@@ -7,11 +7,15 @@
  */
 import { uploadAttachment } from "../db/attachments";
 import { createDb } from "../db/connect";
+import { createInvitation } from "../db/invitations";
 import { addMemberByEmail } from "../db/members";
 import { createProject } from "../db/projects";
 import { createScenario } from "../db/scenarios";
+import { createShareLink } from "../db/share-links";
 import { createUser, findUserByEmail } from "../db/users";
 import { solarMass } from "../physics/constants";
+import { sendInvitationMail } from "../lib/invitation-mail";
+import { shareUrl } from "../lib/links";
 import { createObjectStore } from "../lib/storage";
 import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 
@@ -77,9 +81,17 @@ async function seed(): Promise<void> {
     });
     await addMemberByEmail(db, actor, project.id, DEMO_VIEWER.email, "viewer");
     const flat = await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
-    await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
+    const hovering = await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
     await createScenario(db, actor, project.id, { title: "Accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
     console.log("[seed] created the demo project with three scenarios");
+    const link = await createShareLink(db, actor, project.id, hovering.id, { label: "for the seminar slides", expiresInDays: 30 });
+    console.log(`[seed] a read-only share link of the black-hole scenario: ${shareUrl(link.token)}`);
+    try {
+      await createInvitation(db, actor, project.id, { email: "new-postdoc@lindenbrook.example", role: "editor" }, sendInvitationMail);
+      console.log("[seed] invited new-postdoc@lindenbrook.example as editor (the letter is in the demo mailbox)");
+    } catch (error) {
+      console.log(`[seed] no demo invitation: the mail server is not reachable (${error instanceof Error ? error.message : error})`);
+    }
     try {
       const bytes = new TextEncoder().encode(sequencerRunCsv());
       await uploadAttachment(db, createObjectStore(), actor, project.id, flat.id, { fileName: "sequencer-run-0412.csv", mediaType: "text/csv", bytes });

@@ -112,8 +112,17 @@ export function labelShape(label: PlacedLabel, fill: string): FigureShape {
   return { kind: "text", text: label.text, x: box.left + box.width / 2, y, anchor, rotation: -90, fontSize: label.fontSize, font: "serif", fill };
 }
 
+/** Label priority from which a label names a boundary (the grid's labels rank below; see diagram-labels.ts). */
+const BOUNDARY_LABEL_PRIORITY = 90;
+
+/**
+ * Larger labels: the boundaries' by the whole scale; the grid's, which sit between close lines, by half as much
+ * (at full scale they crowd each other out of the layout, and the boundaries are what a far audience must read).
+ */
 function scaled(candidates: LabelCandidate[], labelScale: number): LabelCandidate[] {
-  return labelScale === 1 ? candidates : candidates.map((c) => ({ ...c, fontSize: c.fontSize * labelScale }));
+  if (labelScale === 1) return candidates;
+  const gridScale = 1 + (labelScale - 1) / 2;
+  return candidates.map((c) => ({ ...c, fontSize: c.fontSize * (c.priority >= BOUNDARY_LABEL_PRIORITY ? labelScale : gridScale) }));
 }
 
 export function diagramFigure(scene: DiagramScene, size: { width: number; height: number }, palette: FigurePalette, options: FigureOptions = {}): DiagramFigure {

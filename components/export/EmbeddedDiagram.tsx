@@ -102,7 +102,7 @@ function RunningCounts({ running, result }: { running: RunningQuanta; result: Sc
     <span className="flex flex-wrap items-baseline gap-x-4" data-testid="running-counts">
       {rows.map((r) => (
         <span key={r.key} data-testid={`running-${r.key}`} data-log10={Number.isFinite(r.now) ? r.now : ""}>
-          quanta {r.words}: <span className="tabular">≈ {countText(r.now)}</span> <span className="opacity-70">of {countText(r.of)}</span>
+          quanta {r.words}: <span className="tabular">≈ {countText(r.now)}</span> <span className="tabular opacity-70">of {countText(r.of)}</span>
         </span>
       ))}
     </span>

@@ -81,13 +81,18 @@ describe("the figure shapes", () => {
     expect(exported.groups.find((g) => g.id === "branch-a")).toEqual(onScreen.groups.find((g) => g.id === "branch-a"));
   });
 
-  it("grow the labels with the label scale", () => {
+  it("grow the boundary labels with the label scale, and the grid's by half as much", () => {
     const scene = sceneOf(base);
     const sizes = (scale: number) =>
-      diagramFigure(scene, { width: 900, height: 900 }, FIGURE_PALETTES.light, { labelScale: scale })
-        .groups.find((g) => g.id === "labels")!
-        .shapes.flatMap((s) => (s.kind === "text" && s.text === "ℐ⁺" ? [s.fontSize] : []));
-    expect(sizes(1.5)[0]).toBeCloseTo(sizes(1)[0] * 1.5, 9);
+      new Map(
+        diagramFigure(scene, { width: 1400, height: 1400 }, FIGURE_PALETTES.light, { labelScale: scale })
+          .groups.find((g) => g.id === "labels")!
+          .shapes.flatMap((s) => (s.kind === "text" ? [[s.text, s.fontSize] as const] : [])),
+      );
+    const [normal, large] = [sizes(1), sizes(1.5)];
+    expect(large.get("ℐ⁺")).toBeCloseTo(normal.get("ℐ⁺")! * 1.5, 9);
+    const grid = scene.grid.map((g) => g.label).find((label) => normal.has(label) && large.has(label))!;
+    expect(large.get(grid)).toBeCloseTo(normal.get(grid)! * 1.25, 9);
   });
 });
 

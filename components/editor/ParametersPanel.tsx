@@ -1,7 +1,7 @@
 "use client";
 
 /** Parameters: the background and its parameter, where the lab is, the source, and how the branches separate. */
-import type { ReactNode } from "react";
+import { useMemo, type ReactNode } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
@@ -47,7 +47,10 @@ function Choice<T extends string>({ label, value, options, onChange, disabled, n
   );
 }
 
-function BackgroundFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+/** What the Parameters set: everything but the protocol (so a drag in the Lab view leaves this panel alone). */
+type PhysicalSetup = Pick<ScenarioDocument, "background" | "lab" | "source" | "separation">;
+
+function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const bg = document.background;
   return (
@@ -109,7 +112,7 @@ const PLACEMENT_WORDS: Record<BackgroundKind, Partial<Record<LabPlacement["place
   "de-sitter": { inertial: "at the centre", "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance inward from the horizon" },
 };
 
-function LabFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const summary = useEditor((s) => s.budget.result?.background ?? null);
   const placements = PLACEMENT_WORDS[document.background.kind];
@@ -168,7 +171,7 @@ function LabFields({ document, readOnly }: { document: ScenarioDocument; readOnl
   );
 }
 
-function SourceFields({ document, readOnly }: { document: ScenarioDocument; readOnly: boolean }) {
+function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const { source, separation } = document;
   return (
@@ -226,7 +229,11 @@ function SourceFields({ document, readOnly }: { document: ScenarioDocument; read
 }
 
 export function ParametersPanel() {
-  const document = useEditor((s) => s.document);
+  const background = useEditor((s) => s.document.background);
+  const lab = useEditor((s) => s.document.lab);
+  const source = useEditor((s) => s.document.source);
+  const separation = useEditor((s) => s.document.separation);
+  const document = useMemo(() => ({ background, lab, source, separation }), [background, lab, source, separation]);
   const readOnly = useEditor((s) => s.readOnly);
   return (
     <section aria-labelledby="parameters-heading" className="space-y-4">

@@ -63,6 +63,11 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   // Signed out: the share page draws the Diagram, with the Protocol strip and the Budget.
   const outsiderContext = await browser.newContext({ acceptDownloads: true });
   const outsider = await outsiderContext.newPage();
+  // Nothing on the share page or the embed ever writes: no request but GET or HEAD leaves it.
+  const writes: string[] = [];
+  outsider.on("request", (r) => {
+    if (r.method() !== "GET" && r.method() !== "HEAD") writes.push(`${r.method()} ${r.url()}`);
+  });
   const opened = await outsider.goto(`/share/${token}`);
   expect(opened?.status()).toBe(200);
   expect(opened?.headers()["content-security-policy"]).toBe("frame-ancestors 'none'");
@@ -138,6 +143,8 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   await expect(frame.getByText(/approximation/)).toBeVisible();
   await frame.getByRole("button", { name: /Play/ }).click();
   await expect(frame.getByRole("button", { name: /Pause/ })).toBeVisible();
+
+  expect(writes).toEqual([]);
 
   // Revoked, the embed is not found too.
   expect((await owner.request.delete(`/api/projects/${project.id}/scenarios/${scenario.id}/share-links/${link.id}`)).status()).toBe(204);

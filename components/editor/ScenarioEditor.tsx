@@ -22,6 +22,8 @@ import { EditorToolbar } from "./EditorToolbar";
 import { LabViewPanel } from "./LabViewPanel";
 import { ParametersPanel } from "./ParametersPanel";
 import { ProtocolStrip } from "./ProtocolStrip";
+import { filesPath, historyPath, sharingPath } from "@/components/sharing/ScenarioSharingIndex";
+import { EditorSequencerImport } from "@/components/uploads/EditorSequencerImport";
 import { SweepPanel } from "./SweepPanel";
 import { useAutosave } from "./useAutosave";
 import { useBudgetWorker } from "./useBudgetWorker";
@@ -80,15 +82,33 @@ function EditorBody({
   return (
     <article className="space-y-6" aria-label={`Editor for ${scenario.title}`}>
       <title>{`${scenario.title} · Branchline`}</title>
-      <Link href={`/projects/${project.id}`} className="text-sm text-ink-faint hover:text-ink">
-        ← All scenarios
-      </Link>
+      <nav aria-label="Around this scenario" className="flex flex-wrap items-baseline justify-between gap-x-6 gap-y-1 text-sm">
+        <Link href={`/projects/${project.id}`} className="text-ink-faint hover:text-ink">
+          ← All scenarios
+        </Link>
+        <span className="flex gap-4">
+          {project.can.includes("share:manage") && (
+            <Link href={sharingPath(project.id, scenario.id)} className="text-ink-soft hover:text-ink">
+              Share links
+            </Link>
+          )}
+          <Link href={historyPath(project.id, scenario.id)} className="text-ink-soft hover:text-ink">
+            History
+          </Link>
+          <Link href={filesPath(project.id, scenario.id)} className="text-ink-soft hover:text-ink">
+            Files
+          </Link>
+        </span>
+      </nav>
       <EditorToolbar title={scenario.title} onRetrySave={saveNow} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <DiagramPanel />
         <LabViewPanel />
       </div>
-      <ProtocolStrip />
+      <div className="space-y-2">
+        <ProtocolStrip />
+        {project.can.includes("scenario:write") && <EditorSequencerImport projectId={project.id} scenarioId={scenario.id} />}
+      </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,4fr)_minmax(0,8fr)]">
         <ParametersPanel />
         <div className="space-y-8">

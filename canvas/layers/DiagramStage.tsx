@@ -4,6 +4,7 @@
  * The Diagram: the conformal diagram of the scenario's background with the lab, the two branches and where their
  * radiation goes. Client-only (Konva); it reads the store and draws, and reports the pointer for the light cone.
  */
+import { memo } from "react";
 import { Circle, Group, Layer, Line, Stage, Text } from "react-konva";
 import type { KonvaEventObject } from "konva/lib/Node";
 import { useEditor, useEditorStore } from "../EditorProvider";
@@ -15,7 +16,7 @@ import { lightConeAt } from "../kernels/diagram/light-cone";
 import type { DiagramScene } from "../kernels/diagram/scene";
 import { fromPx, toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 import { FIGURE_PALETTES, type FigurePalette } from "../theme";
-import type { FigureShape } from "../export/diagram-figure";
+import type { FigureGroup, FigureGroupId, FigureShape } from "../export/diagram-figure";
 import { useFigureFonts } from "./useFigureFonts";
 
 const CONE_LENGTH_PX = 34;
@@ -27,6 +28,54 @@ function Shape({ shape, fonts }: { shape: FigureShape; fonts: KonvaFonts }) {
   if (className === "Text") return <Text {...(attrs as { text: string })} />;
   return <Line {...attrs} />;
 }
+
+/**
+ * The figure's groups in stacked Konva layers, bottom to top. A drag changes only the protocol's layers (the
+ * radiation and the branches); the others keep equal shapes, are not touched, and so are not redrawn.
+ */
+const LAYERS: FigureGroupId[][] = [
+  ["background", "regions"],
+  ["radiation"],
+  ["grid", "boundaries", "lab-worldline"],
+  ["branch-b", "branch-a", "protocol-marks", "time-cursor"],
+  ["labels"],
+];
+
+function sameValue(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (Array.isArray(a) && Array.isArray(b)) return a.length === b.length && a.every((x, i) => sameValue(x, b[i]));
+  return false;
+}
+
+/** Two lists of figure shapes with the same content (shapes are flat records of numbers, strings and number arrays). */
+export function sameShapes(a: FigureShape[], b: FigureShape[]): boolean {
+  if (a.length !== b.length) return false;
+  return a.every((shape, i) => {
+    const other = b[i] as unknown as Record<string, unknown>;
+    const entries = Object.entries(shape);
+    return entries.length === Object.keys(other).length && entries.every(([key, value]) => sameValue(value, other[key]));
+  });
+}
+
+const FigureLayer = memo(
+  function FigureLayer({ groups, fonts }: { groups: FigureGroup[]; fonts: KonvaFonts }) {
+    return (
+      <Layer listening={false}>
+        {groups.map((group) => (
+          <Group key={group.id} name={group.id}>
+            {group.shapes.map((shape, i) => (
+              <Shape key={i} shape={shape} fonts={fonts} />
+            ))}
+          </Group>
+        ))}
+      </Layer>
+    );
+  },
+  (before, after) =>
+    before.fonts === after.fonts &&
+    before.groups.length === after.groups.length &&
+    before.groups.every((g, i) => g.id === after.groups[i].id && sameShapes(g.shapes, after.groups[i].shapes)),
+);
 
 function pointerReadout(scene: DiagramScene, cone: ReturnType<typeof lightConeAt>): string {
   if (!cone.coordinates) return "outside the lab's static region";
@@ -88,15 +137,9 @@ export default function DiagramStage({ width, height, labelScale = 1, cursor = n
 
   return (
     <Stage width={width} height={height} onMouseMove={onMove} onMouseLeave={() => store.getState().setDiagramPointer(null)}>
-      <Layer listening={false}>
-        {figure.groups.map((group) => (
-          <Group key={group.id} name={group.id}>
-            {group.shapes.map((shape, i) => (
-              <Shape key={i} shape={shape} fonts={fonts} />
-            ))}
-          </Group>
-        ))}
-      </Layer>
+      {LAYERS.map((ids) => (
+        <FigureLayer key={ids[0]} groups={figure.groups.filter((g) => ids.includes(g.id))} fonts={fonts} />
+      ))}
       <Layer listening={false}>
         <LightConeGizmo scene={scene} viewport={viewport} palette={palette} font={fonts.mono} />
       </Layer>

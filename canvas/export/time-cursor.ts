@@ -4,7 +4,7 @@
  * only what was emitted before it (for light leaving outward, T − X stays constant along a ray; inward, T + X).
  */
 import type { DiagramPoint } from "@/physics/backgrounds";
-import type { BranchSample, ProtocolOnDiagram } from "../kernels/diagram/protocol-path";
+import { type BranchSample, drawnTime, type ProtocolOnDiagram } from "../kernels/diagram/protocol-path";
 import type { DiagramScene } from "../kernels/diagram/scene";
 
 export interface TimeCursor {
@@ -16,14 +16,12 @@ export interface TimeCursor {
 
 /**
  * The drawn point of lab time τ. The protocol is drawn centred on t = 0, with lab proper time turned into Killing
- * time by the lab's redshift factor and, near a horizon, compressed or stretched by the scene's time scale; this
- * is the same map canvas/kernels/diagram/protocol-path.ts draws the branches with.
+ * time by the lab's redshift factor and, near a horizon, compressed or stretched by the scene's time scale: the map
+ * the branches are drawn with (drawnTime).
  */
 export function timeCursor(scene: DiagramScene, totalSeconds: number, tauSeconds: number): TimeCursor {
   const background = scene.chart.background;
-  const killing = (tauSeconds - totalSeconds / 2) / background.labRedshiftFactor;
-  const scale = scene.protocol?.timeScale;
-  const drawn = scale && scale.kind === "rescaled" ? killing * (scale.drawnEfolds / scale.protocolEfolds) : killing;
+  const drawn = drawnTime(scene.chart, scene.protocol?.timeScale ?? { kind: "true" }, totalSeconds, tauSeconds);
   return { tauSeconds, point: background.conformal.toDiagram(drawn, background.labRadiusMetres) };
 }
 

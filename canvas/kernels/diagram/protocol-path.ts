@@ -47,8 +47,8 @@ export interface ProtocolOnDiagram {
   strips: RadiationStrip[];
 }
 
-/** Drawn Killing time of lab proper time τ (seconds from the start of the separation). */
-function drawnTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, tauSeconds: number): number {
+/** Drawn Killing time of lab proper time τ (seconds from the start of the separation), centred on t = 0. */
+export function drawnTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, tauSeconds: number): number {
   const killing = (tauSeconds - totalSeconds / 2) / chart.background.labRedshiftFactor;
   return scale.kind === "true" ? killing : killing * (scale.drawnEfolds / scale.protocolEfolds);
 }

@@ -1,39 +1,5 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
-
-const password = "a long enough password";
-
-/** A researcher of our own (the e2e database has no demo data), signed in through the sign-in page. */
-async function signedInAs(browser: Browser, name: string, email: string): Promise<Page> {
-  const context = await browser.newContext();
-  const page = await context.newPage();
-  const created = await page.request.post("/api/users", { data: { email, name, password } });
-  expect(created.status()).toBe(201);
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: /sign in/i }).first().click();
-  await expect(page).toHaveURL(/\/projects/);
-  return page;
-}
-
-/** A lab at five horizon radii from a 10 M☉ black hole: both a far-field and a horizon count. */
-function blackHoleScenario() {
-  return {
-    schemaVersion: 1,
-    background: { kind: "schwarzschild", massKg: 1.988_409_870_698_051e31 },
-    lab: { placement: "areal-radius", arealRadiusMetres: 1.5e5 },
-    source: { chargeCoulombs: 1.602_176_634e-17, massKg: 1e-14, labMassKg: null },
-    separation: { axis: "radial", split: "symmetric", distanceMetres: 1e-5 },
-    protocol: {
-      kind: "segments",
-      separation: { durationSeconds: 0.05, shape: "minimum-jerk" },
-      hold: { durationSeconds: 1 },
-      recombination: { durationSeconds: 0.05, shape: "minimum-jerk" },
-    },
-    display: { theme: "light", showGrid: true },
-    numerics: { kinkTimeResolutionSeconds: null },
-  };
-}
+import { expect, test, type Page } from "@playwright/test";
+import { blackHoleScenario, signedInAs } from "./helpers";
 
 const editorPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}`;
 

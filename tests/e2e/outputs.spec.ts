@@ -1,45 +1,13 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { readFile } from "node:fs/promises";
 import { createServer } from "node:http";
 import type { AddressInfo } from "node:net";
+import { blackHoleScenario, signedInAs } from "./helpers";
 
 // The machine running these is small and shared: every wait is generous.
 test.setTimeout(300_000);
 test.use({ navigationTimeout: 90_000, actionTimeout: 60_000 });
 const slow = { timeout: 60_000 };
-const password = "a long enough password";
-
-/** A researcher of our own (the e2e database has no demo data), signed in through the sign-in page. */
-async function signedInAs(browser: Browser, name: string, email: string): Promise<Page> {
-  const context = await browser.newContext();
-  const page = await context.newPage();
-  expect((await page.request.post("/api/users", { data: { email, name, password } })).status()).toBe(201);
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: /sign in/i }).first().click();
-  await expect(page).toHaveURL(/\/projects/, slow);
-  return page;
-}
-
-/** A lab at five horizon radii from a 10 M☉ black hole, one branch staying: far-field and horizon counts in both channels. */
-function blackHoleScenario() {
-  return {
-    schemaVersion: 1,
-    background: { kind: "schwarzschild", massKg: 1.988_409_870_698_051e31 },
-    lab: { placement: "areal-radius", arealRadiusMetres: 1.5e5 },
-    source: { chargeCoulombs: 1.602_176_634e-17, massKg: 1e-14, labMassKg: null },
-    separation: { axis: "radial", split: "one-branch-stays", distanceMetres: 1e-5 },
-    protocol: {
-      kind: "segments",
-      separation: { durationSeconds: 0.05, shape: "minimum-jerk" },
-      hold: { durationSeconds: 1 },
-      recombination: { durationSeconds: 0.05, shape: "minimum-jerk" },
-    },
-    display: { theme: "light", showGrid: true },
-    numerics: { kinkTimeResolutionSeconds: null },
-  };
-}
 
 /** How many pixels of a canvas differ from its top-left pixel (the ground): a drawn figure has many. */
 const inkedPixels = (canvas: HTMLCanvasElement) => {
@@ -54,7 +22,7 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   const stamp = Date.now();
   const owner = await signedInAs(browser, "Figure Owner", `figure-owner-${stamp}@example.test`);
   const project = (await (await owner.request.post("/api/projects", { data: { name: "Talk figures" } })).json()).project;
-  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()).scenario;
+  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario("one-branch-stays") } })).json()).scenario;
   const created = await owner.request.post(`/api/projects/${project.id}/scenarios/${scenario.id}/share-links`, { data: { label: "for the colloquium" } });
   expect(created.status()).toBe(201);
   const { url, link } = (await created.json()) as { url: string; link: { id: string } };
@@ -158,7 +126,7 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const stamp = Date.now();
   const owner = await signedInAs(browser, "Export Owner", `export-owner-${stamp}@example.test`);
   const project = (await (await owner.request.post("/api/projects", { data: { name: "Exports" } })).json()).project;
-  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()).scenario;
+  const scenario = (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario("one-branch-stays") } })).json()).scenario;
   await owner.goto(`/projects/${project.id}/scenarios/${scenario.id}`);
   await expect(owner.getByTestId("budget")).toHaveAttribute("data-state", "current", slow);
   await owner.getByRole("button", { name: "Export ▾" }).click();
@@ -166,7 +134,7 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const [file] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download scenario file (JSON)" }).click()]);
   expect(file.suggestedFilename()).toBe("hovering-lab.json");
   const scenarioFile = JSON.parse(await readFile((await file.path())!, "utf8"));
-  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: blackHoleScenario() });
+  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: blackHoleScenario("one-branch-stays") });
 
   const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
   expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");

@@ -1,27 +1,12 @@
 import { expect, test, type APIRequestContext, type Page } from "@playwright/test";
+import { hydrated, password } from "./helpers";
 
-const password = "a long enough password";
 const mailbox = process.env.BRANCHLINE_MAILBOX_URL ?? `http://127.0.0.1:${process.env.MAILBOX_PORT ?? 2526}`;
 
 // The machine running these is small and shared: every wait is generous.
 test.setTimeout(300_000);
 test.use({ navigationTimeout: 90_000, actionTimeout: 60_000 });
 const slow = { timeout: 60_000 };
-
-/**
- * Waits until React has hydrated the page's controls: on a loaded machine a click that comes earlier is a plain
- * form submission (a reload that drops what was typed), not the app's own handler.
- */
-async function hydrated(page: Page): Promise<void> {
-  await page.waitForFunction(
-    () => {
-      const control = document.querySelector("main button");
-      return control !== null && Object.keys(control).some((key) => key.startsWith("__reactProps"));
-    },
-    undefined,
-    { timeout: 90_000 },
-  );
-}
 
 async function fillSignUp(page: Page, name: string, email: string): Promise<void> {
   await hydrated(page);

@@ -1,20 +1,10 @@
 import { expect, test, type Page } from "@playwright/test";
+import { hydrated, password } from "./helpers";
 
 // The machine running these is small and shared: every wait is generous.
 test.setTimeout(300_000);
 test.use({ navigationTimeout: 90_000, actionTimeout: 60_000 });
 const slow = { timeout: 60_000 };
-
-async function hydrated(page: Page): Promise<void> {
-  await page.waitForFunction(
-    () => {
-      const control = document.querySelector("main button");
-      return control !== null && Object.keys(control).some((key) => key.startsWith("__reactProps"));
-    },
-    undefined,
-    { timeout: 90_000 },
-  );
-}
 
 /** A new account signed in through the sign-up form, with a project and a scenario made through the API. */
 async function editorWithScenario(page: Page) {
@@ -23,7 +13,7 @@ async function editorWithScenario(page: Page) {
   await hydrated(page);
   await page.getByLabel("Name").fill("Bench Physicist");
   await page.getByLabel("E-mail").fill(`bench-${stamp}@example.test`);
-  await page.getByLabel("Password").fill("a long enough password");
+  await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign up" }).last().click();
   await expect(page).toHaveURL(/\/projects$/, slow);
   const project = await (await page.request.post("/api/projects", { data: { name: "Sequencer bench" } })).json();

@@ -16,12 +16,13 @@ export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-branchline-local}"
 export S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-branchline-local-secret}"
 export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
 
+# The seed prints a share link and mails an invitation: both point at this address.
+export NEXTAUTH_URL="http://localhost:$PORT"
 npm run --silent db:migrate
 npm run --silent db:seed
 echo "[demo] building (about half a minute)" >&2
 node_modules/.bin/next build >.data/run/build.log 2>&1 || { tail -40 .data/run/build.log; exit 1; }
 
-export NEXTAUTH_URL="http://localhost:$PORT"
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(ensure_secret)}"
 export BRANCHLINE_MAILBOX_URL="http://127.0.0.1:${MAILBOX_PORT:-2526}"
 

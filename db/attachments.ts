@@ -13,7 +13,8 @@ import { recordAudit } from "./audit";
 import { notFound } from "./errors";
 import { isUuid } from "./ids";
 import { roleInProject } from "./members";
-import { assertScenarioInProject, type PersonDto } from "./scenarios";
+import { person, type PersonDto } from "./people";
+import { assertScenarioInProject } from "./scenarios";
 import type { Database } from "./schema";
 
 export interface AttachmentDto {
@@ -59,7 +60,7 @@ function toDto(r: AttachmentRow): AttachmentDto {
     fileName: r.fileName,
     mediaType: r.mediaType,
     sizeBytes: Number(r.sizeBytes),
-    uploadedBy: r.uploadedBy && r.uploadedByName ? { id: r.uploadedBy, name: r.uploadedByName } : null,
+    uploadedBy: person(r.uploadedBy, r.uploadedByName),
     createdAt: r.createdAt.toISOString(),
   };
 }

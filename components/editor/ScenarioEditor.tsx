@@ -80,7 +80,7 @@ function EditorBody({
   useUndoShortcuts(store);
   const version = useEditor((s) => s.save.baseVersion);
   return (
-    <article className="space-y-6" aria-label={`Editor for ${scenario.title}`}>
+    <article className="space-y-6" aria-label={`Editor for ${scenario.title}`} data-editor="">
       <title>{`${scenario.title} · Branchline`}</title>
       <nav aria-label="Around this scenario" className="flex flex-wrap items-baseline justify-between gap-x-6 gap-y-1 text-sm">
         <Link href={`/projects/${project.id}`} className="text-ink-faint hover:text-ink">

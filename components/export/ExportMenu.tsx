@@ -38,17 +38,8 @@ function Choice<T extends string | number>({ legend, options, value, onChange, w
 
 export function ExportMenu({ title, description }: { title: string; description?: string | null }) {
   const [open, setOpen] = useState(false);
-  const [ratio, setRatio] = useState<(typeof RATIOS)[number]>(2);
-  const [ground, setGround] = useState<FigureGround>("solid");
-  const [problem, setProblem] = useState<string | null>(null);
-  const document = useEditor((s) => s.document);
-  const scene = useEditor((s) => s.diagramScene(s.document));
-  const result = useEditor((s) => (s.budget.status === "ready" && s.budget.resultRevision === s.revision ? s.budget.result : null));
-  const fonts = useFigureFonts();
-  const figureSize = useDiagramSize();
   const panelId = useId();
   const root = useRef<HTMLDivElement>(null);
-  const theme = document.display.theme;
 
   useEffect(() => {
     if (!open) return;
@@ -61,6 +52,28 @@ export function ExportMenu({ title, description }: { title: string; description?
       window.removeEventListener("pointerdown", onPointer);
     };
   }, [open]);
+
+  return (
+    <div ref={root} className="relative">
+      <button type="button" className={small} aria-expanded={open} aria-controls={panelId} onClick={() => setOpen((o) => !o)}>
+        Export ▾
+      </button>
+      {open && <ExportPanel id={panelId} title={title} description={description} />}
+    </div>
+  );
+}
+
+/** The open menu. Mounted only while open, so the closed menu follows no edits (a drag re-renders nothing here). */
+function ExportPanel({ id: panelId, title, description }: { id: string; title: string; description?: string | null }) {
+  const [ratio, setRatio] = useState<(typeof RATIOS)[number]>(2);
+  const [ground, setGround] = useState<FigureGround>("solid");
+  const [problem, setProblem] = useState<string | null>(null);
+  const document = useEditor((s) => s.document);
+  const scene = useEditor((s) => s.diagramScene(s.document));
+  const result = useEditor((s) => (s.budget.status === "ready" && s.budget.resultRevision === s.revision ? s.budget.result : null));
+  const fonts = useFigureFonts();
+  const figureSize = useDiagramSize();
+  const theme = document.display.theme;
 
   const figure = () => (scene.ok ? exportFigure(scene.scene, figureSize(), theme, ground) : null);
   const notes = scene.ok ? scene.scene.notes.join(" ") : "";
@@ -83,51 +96,44 @@ export function ExportMenu({ title, description }: { title: string; description?
   const saveScenario = () => downloadText(scenarioFileNameFor(title), scenarioFileText(toScenarioFile({ title, description, document })), SCENARIO_FILE_MEDIA_TYPE);
 
   return (
-    <div ref={root} className="relative">
-      <button type="button" className={small} aria-expanded={open} aria-controls={panelId} onClick={() => setOpen((o) => !o)}>
-        Export ▾
-      </button>
-      {open && (
-        <div id={panelId} role="group" aria-label="Export" className="absolute right-0 z-20 mt-1 w-80 space-y-4 rounded border border-rule-strong bg-paper p-4 shadow-lg">
-          <section className="space-y-2" aria-labelledby={`${panelId}-figure`}>
-            <h3 id={`${panelId}-figure`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
-              Diagram figure
-            </h3>
-            <Choice<(typeof RATIOS)[number]> legend="PNG size" options={RATIOS} value={ratio} onChange={setRatio} words={(r) => `${r}×`} />
-            <Choice<FigureGround> legend="Ground" options={["solid", "transparent"] as const} value={ground} onChange={setGround} words={(g) => (g === "solid" ? (theme === "light" ? "white" : "dark") : "transparent")} />
-            <div className="grid grid-cols-2 gap-2">
-              <button type="button" className={action} disabled={!scene.ok} onClick={savePng}>
-                Download PNG
-              </button>
-              <button type="button" className={action} disabled={!scene.ok} onClick={saveSvg}>
-                Download SVG
-              </button>
-            </div>
-            <p className="text-xs text-ink-faint">The SVG is vector: lines stay sharp at any size, and the labels stay text.</p>
-          </section>
-          <section className="space-y-2" aria-labelledby={`${panelId}-numbers`}>
-            <h3 id={`${panelId}-numbers`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
-              Budget numbers
-            </h3>
-            <button type="button" className={action} disabled={!result} onClick={saveCsv}>
-              Download Budget (CSV)
-            </button>
-            {!result && <p className="text-xs text-ink-faint">Available when the Budget is up to date.</p>}
-          </section>
-          <section className="space-y-2" aria-labelledby={`${panelId}-scenario`}>
-            <h3 id={`${panelId}-scenario`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
-              Scenario
-            </h3>
-            <button type="button" className={action} onClick={saveScenario}>
-              Download scenario file (JSON)
-            </button>
-          </section>
-          {problem && (
-            <p role="alert" className="text-sm text-invalid">
-              {problem}
-            </p>
-          )}
+    <div id={panelId} role="group" aria-label="Export" className="absolute right-0 z-20 mt-1 w-80 space-y-4 rounded border border-rule-strong bg-paper p-4 shadow-lg">
+      <section className="space-y-2" aria-labelledby={`${panelId}-figure`}>
+        <h3 id={`${panelId}-figure`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
+          Diagram figure
+        </h3>
+        <Choice<(typeof RATIOS)[number]> legend="PNG size" options={RATIOS} value={ratio} onChange={setRatio} words={(r) => `${r}×`} />
+        <Choice<FigureGround> legend="Ground" options={["solid", "transparent"] as const} value={ground} onChange={setGround} words={(g) => (g === "solid" ? (theme === "light" ? "white" : "dark") : "transparent")} />
+        <div className="grid grid-cols-2 gap-2">
+          <button type="button" className={action} disabled={!scene.ok} onClick={savePng}>
+            Download PNG
+          </button>
+          <button type="button" className={action} disabled={!scene.ok} onClick={saveSvg}>
+            Download SVG
+          </button>
         </div>
+        <p className="text-xs text-ink-faint">The SVG is vector: lines stay sharp at any size, and the labels stay text.</p>
+      </section>
+      <section className="space-y-2" aria-labelledby={`${panelId}-numbers`}>
+        <h3 id={`${panelId}-numbers`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
+          Budget numbers
+        </h3>
+        <button type="button" className={action} disabled={!result} onClick={saveCsv}>
+          Download Budget (CSV)
+        </button>
+        {!result && <p className="text-xs text-ink-faint">Available when the Budget is up to date.</p>}
+      </section>
+      <section className="space-y-2" aria-labelledby={`${panelId}-scenario`}>
+        <h3 id={`${panelId}-scenario`} className="text-xs font-semibold uppercase tracking-wide text-ink-soft">
+          Scenario
+        </h3>
+        <button type="button" className={action} onClick={saveScenario}>
+          Download scenario file (JSON)
+        </button>
+      </section>
+      {problem && (
+        <p role="alert" className="text-sm text-invalid">
+          {problem}
+        </p>
       )}
     </div>
   );

@@ -27,7 +27,11 @@
  * JavaScript (style, layout, paint and software raster of the two canvases), the rest spread over React and Konva.
  * Later, on a quiet machine (load average about 1), with the Diagram drawn in stacked layers of which a drag redraws
  * only the protocol's: p50 16.7–33.3 ms, p95 50–83 ms; round trip p50 41–60 ms. With the Diagram hidden (CSS) the
- * same drag gives p50 16.7 ms, p95 33.4 ms: drawing the Diagram is about half of each frame. Still NOT met.
+ * same drag gives p50 16.7 ms, p95 33.4 ms: drawing the Diagram is about half of each frame. With each editor panel's
+ * layout and style contained and the closed Export menu no longer following edits: p50 16.7–33 ms, p95 50–67 ms,
+ * round trip p50 38–46 ms (three runs). Still NOT met. A profile of those runs: about 40 % of the main thread is the
+ * browser's own style, layout, paint and compositing (software, --disable-gpu), React's render and commit about 25 %,
+ * Konva's drawing 7 %, our own code (figure, scene, panels) under 10 %.
  * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag.
  */
 import { chromium, type Page } from "@playwright/test";

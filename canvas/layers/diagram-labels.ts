@@ -1,12 +1,48 @@
 /** The label candidates of a diagram scene, in stage pixels, for the label layout. */
 import type { DiagramScene } from "../kernels/diagram/scene";
-import type { LabelCandidate } from "../kernels/diagram/decorations";
+import { labelBox, type LabelCandidate } from "../kernels/diagram/decorations";
 import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 
 const BOUNDARY_OFFSET_PX = 13;
 const ROOM_FOR_TIME_LABELS_PX = 84;
 /** Time labels beside the lab's worldline start past the branches drawn along it. */
 const CLEAR_OF_BRANCHES_PX = 14;
+
+type Box = ReturnType<typeof labelBox>;
+type Px = { x: number; y: number };
+
+/** Whether the segment from p to q passes through the box (Liang–Barsky clipping against its four sides). */
+function segmentCrossesBox(p: Px, q: Px, box: Box): boolean {
+  const dx = q.x - p.x;
+  const dy = q.y - p.y;
+  let t0 = 0;
+  let t1 = 1;
+  const sides: [number, number][] = [
+    [-dx, p.x - box.left],
+    [dx, box.left + box.width - p.x],
+    [-dy, p.y - box.top],
+    [dy, box.top + box.height - p.y],
+  ];
+  for (const [denominator, distance] of sides) {
+    if (denominator === 0) {
+      if (distance < 0) return false;
+      continue;
+    }
+    const t = distance / denominator;
+    if (denominator < 0) t0 = Math.max(t0, t);
+    else t1 = Math.min(t1, t);
+    if (t0 > t1) return false;
+  }
+  return true;
+}
+
+/** Whether a label's box would cross one of the lab region's horizons (near a bifurcation point the room runs out). */
+function crossesHorizon(label: LabelCandidate, scene: DiagramScene, viewport: DiagramViewport): boolean {
+  const box = labelBox(label);
+  return scene.boundaries
+    .filter((b) => b.kind === "horizon" && b.bordersLabRegion)
+    .some((b) => b.points.slice(1).some((point, i) => segmentCrossesBox(toPx(viewport, b.points[i]), toPx(viewport, point), box)));
+}
 
 export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramViewport): LabelCandidate[] {
   const boundaryLabels = scene.boundaries.map((b, i): LabelCandidate => {
@@ -48,5 +84,7 @@ export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramVie
       tone: "faint",
     };
   });
-  return [...boundaryLabels, ...gridLabels];
+  // A radius label runs up its line from the t = 0 slice; where that line nears a horizon there is no room for it.
+  const roomy = gridLabels.filter((label, i) => scene.grid[i].family !== "radius" || !crossesHorizon(label, scene, viewport));
+  return [...boundaryLabels, ...roomy];
 }

@@ -127,7 +127,7 @@ function schwarzschildRegime(document: ScenarioDocument, electromagnetic: Channe
       status: "note",
       message:
         "electromagnetic horizon rate: the exact value (horizon method with the Copson–Linet field, /methods/schwarzschild-exact) " +
-        `is used at every radius; ${beside}. Gravity: see schwarzschild-gravity-model`,
+        `is used at every radius; ${beside}`,
     };
   }
   const text = ESTIMATE_REGIME_TEXT[regime as keyof typeof ESTIMATE_REGIME_TEXT];

@@ -5,6 +5,7 @@
  * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
  * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
  */
+import { useDeferredValue } from "react";
 import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { bothChannels } from "@/canvas/kernels/budget/both-channels";
@@ -76,8 +77,10 @@ function Flags({ flags }: { flags: ValidityFlag[] }) {
 }
 
 export function BudgetPanel() {
-  const budget = useEditor((s) => s.budget);
-  const stale = useEditor((s) => budgetIsStale(s) || s.budget.status === "computing");
+  // Deferred (both together): during a drag the numbers and their state follow when the frame has time, so the
+  // Diagram and the Lab view are drawn first; a settled Budget always shows the latest result and its true state.
+  const budget = useDeferredValue(useEditor((s) => s.budget));
+  const stale = useDeferredValue(useEditor((s) => budgetIsStale(s) || s.budget.status === "computing"));
   const result = budget.result;
   const failedNow = budget.status === "failed";
   const channels = result ? [result.electromagnetic, result.gravitational] : [];

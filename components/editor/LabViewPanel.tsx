@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useEffect } from "react";
+import { useDeferredValue, useEffect } from "react";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { withProtocolPlan } from "@/canvas/kernels/document-edits";
 import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle } from "@/canvas/kernels/lab-view/handles";
@@ -22,9 +22,10 @@ const HEIGHT = 300;
 /** Every handle can be typed into: instants on the lab's clock from the start of the separation, and the separation. */
 function HandleFields() {
   const store = useEditorStore();
-  const document = useEditor((s) => s.document);
+  // Shown deferred: a drag redraws the Lab view first and these fields when the frame has time.
+  const document = useDeferredValue(useEditor((s) => s.document));
   const readOnly = useEditor((s) => s.readOnly);
-  const selection = useEditor((s) => s.selection);
+  const selection = useDeferredValue(useEditor((s) => s.selection));
   const edit = useEdit();
   if (document.protocol.kind !== "segments") return null;
   const protocol = document.protocol;
@@ -41,7 +42,10 @@ function HandleFields() {
             testId={`handle-field-${handle}`}
             onFocus={() => store.getState().select(handle)}
             onCommit={(valueSI) => {
-              const typed = planHandleValue(handle, valueSI, protocol, document.separation);
+              // Plan against the store's document, not the deferred one shown.
+              const current = store.getState().document;
+              if (current.protocol.kind !== "segments") return { ok: false, message: "the protocol is no longer made of segments" };
+              const typed = planHandleValue(handle, valueSI, current.protocol, current.separation);
               if (!typed.ok) return { ok: false, message: typed.message };
               return edit(`Set ${HANDLE_WORDS[handle].toLowerCase()}`, (d) => withProtocolPlan(d, typed.plan));
             }}

@@ -4,6 +4,7 @@
  * The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape; for a
  * formula profile, its expression and duration. A sampled profile is shown in the Lab view and not edited here.
  */
+import { useDeferredValue } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { withFormula, withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
 import { segmentShares } from "@/canvas/kernels/lab-view/viewport";
@@ -79,9 +80,10 @@ function StripHeading() {
 }
 
 export function ProtocolStrip() {
-  const protocol = useEditor((s) => s.document.protocol);
+  // Shown deferred: a drag redraws the canvases first and the strip when the frame has time (edits read the store).
+  const protocol = useDeferredValue(useEditor((s) => s.document.protocol));
   const readOnly = useEditor((s) => s.readOnly);
-  const selection = useEditor((s) => s.selection);
+  const selection = useDeferredValue(useEditor((s) => s.selection));
   const edit = useEdit();
   if (protocol.kind === "formula") {
     return (

@@ -16,8 +16,9 @@ export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-branchline-local}"
 export S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-branchline-local-secret}"
 export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
 
-# The seed prints a share link and mails an invitation: both point at this address.
+# The seed prints a share link and mails an invitation: both point at this address, and the mail goes to the fake.
 export NEXTAUTH_URL="http://localhost:$PORT"
+export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:${SMTP_FAKE_PORT:-2525}}"
 npm run --silent db:migrate
 npm run --silent db:seed
 echo "[demo] building (about half a minute)" >&2

@@ -76,6 +76,13 @@ export const revisionDiffQuerySchema = z.object({
     .max(2_147_483_647, "no revision has so large a number"),
 });
 
+/** A file's size as people read it: bytes below a kilobyte, then kB and MB (powers of 1024, as file managers show). */
+export function fileSize(bytes: number): string {
+  if (bytes < 1024) return `${bytes} B`;
+  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(bytes < 10 * 1024 ? 1 : 0)} kB`;
+  return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+}
+
 /** Largest scenario file imported, in bytes. */
 export const SCENARIO_FILE_MAX_BYTES = 2 * 1024 * 1024;
 /** Largest file kept with a scenario, in bytes. */

@@ -8,6 +8,7 @@ import "server-only";
  */
 import type { NextRequest } from "next/server";
 import { AppError } from "../db/errors";
+import { fileSize } from "./contracts";
 
 /** A request whose content type the route does not take, or a file whose content is not what it says (415). */
 export const unsupportedMediaType = (message: string) => new AppError("unsupported_media_type", message);
@@ -23,10 +24,9 @@ export interface UploadedFile {
 /** Room for the multipart boundaries and headers around the file itself. */
 const MULTIPART_OVERHEAD = 64 * 1024;
 
-export const formatBytes = (n: number) => (n >= 1024 * 1024 ? `${(n / 1024 / 1024).toFixed(1)} MB` : n >= 1024 ? `${(n / 1024).toFixed(1)} kB` : `${n} bytes`);
 
 const tooLarge = (what: string, maxBytes: number, size?: number) =>
-  new AppError("payload_too_large", `${what} is ${size === undefined ? "larger than the limit" : formatBytes(size)}; the limit is ${formatBytes(maxBytes)}`, undefined, {
+  new AppError("payload_too_large", `${what} is ${size === undefined ? "larger than the limit" : fileSize(size)}; the limit is ${fileSize(maxBytes)}`, undefined, {
     limitBytes: maxBytes,
   });
 

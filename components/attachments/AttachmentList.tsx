@@ -9,7 +9,8 @@ import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles, tableStyles } from "@/components/ui/styles";
-import { fileSize, kindName } from "./fileSize";
+import { fileSize } from "@/lib/contracts";
+import { kindName } from "./kindName";
 
 const columns = [
   { label: "File" },

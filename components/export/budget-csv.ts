@@ -3,18 +3,21 @@
  * quote or a line break, quotes doubled): one row per number the Budget shows, with its unit as the result spells
  * it ("1" for a count), the formula it comes from, and the validity flags the computation raised.
  */
+import Papa from "papaparse";
 import { sources, type SourceKey } from "@/physics/estimators/sources";
 import type { ChannelResult, Quantity, ScenarioResult } from "@/physics/result";
 
 export const BUDGET_CSV_HEADER = ["quantity", "value", "unit", "source", "flags"] as const;
 
-/** One CSV field, quoted only where RFC 4180 needs it. */
+const CSV_OPTIONS = { newline: "\r\n", quotes: false } as const;
+
+/** One CSV field, quoted only where it must be (papaparse's writer, as the sequencer reader uses its parser). */
 export function csvField(text: string): string {
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  return Papa.unparse([[text]], CSV_OPTIONS);
 }
 
 export function csvText(rows: readonly (readonly string[])[]): string {
-  return rows.map((row) => row.map(csvField).join(",")).join("\r\n") + "\r\n";
+  return `${Papa.unparse(rows.map((row) => [...row]), CSV_OPTIONS)}\r\n`;
 }
 
 /**

@@ -9,6 +9,8 @@
  * - JSON: UTF-8 text that JSON.parse reads (RFC 8259).
  * - CSV: any other UTF-8 text without NUL bytes (RFC 4180 sets no signature).
  */
+import { ATTACHMENT_EXTENSIONS } from "./contracts";
+
 export type AttachmentKind = "pdf" | "png" | "svg" | "json" | "csv";
 
 export const MEDIA_TYPES: Record<AttachmentKind, string> = {
@@ -22,7 +24,6 @@ export const MEDIA_TYPES: Record<AttachmentKind, string> = {
 /** The kind each file name ending claims. */
 const EXTENSIONS: Record<string, AttachmentKind> = { pdf: "pdf", png: "png", svg: "svg", json: "json", csv: "csv" };
 
-export const ALLOWED_EXTENSIONS = Object.keys(EXTENSIONS).map((e) => `.${e}`);
 
 export type Sniffed = { ok: true; kind: AttachmentKind; mediaType: string } | { ok: false; reason: string };
 
@@ -99,7 +100,7 @@ const LABELS: Record<AttachmentKind, string> = { pdf: "a PDF", png: "a PNG image
  */
 export function classifyAttachment(fileName: string, bytes: Uint8Array): Sniffed {
   const claimed = kindFromName(fileName);
-  if (claimed === null) return { ok: false, reason: `'${fileName}' is not a kind of file Branchline keeps: use ${ALLOWED_EXTENSIONS.join(", ")}` };
+  if (claimed === null) return { ok: false, reason: `'${fileName}' is not a kind of file Branchline keeps: use ${ATTACHMENT_EXTENSIONS.join(", ")}` };
   const sniffed = sniffContent(bytes);
   if (!sniffed.ok) return sniffed;
   if (sniffed.kind === claimed) return sniffed;

@@ -5,31 +5,24 @@
  * computed on a worker of its own. The current value and the sweep's smallest decoherence are marked; clicking a
  * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
  */
-import { useEffect, useMemo, useState } from "react";
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
 import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
-import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
+import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withRecombinationAndHold } from "@/canvas/kernels/document-edits";
-import { currentSweepValue, defaultSweepRange } from "@/canvas/kernels/sweep-range";
+import { defaultSweepRange } from "@/canvas/kernels/sweep-range";
 import { spawnComputeWorker } from "@/canvas/worker/spawn";
 import { buttonStyles } from "@/components/ui/styles";
 import { withParameter } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
+import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
 import { useEdit } from "./useEdit";
 
-const PARAMETER_WORDS: Record<SweepParameter, string> = {
-  "recombination-time": "recombination time",
-  "hold-time": "hold time",
-  "lab-distance": "lab distance",
-};
 const POINTS = 41;
 /** A sweep quicker than this shows no progress bar. */
 const PROGRESS_AFTER_MS = 400;
-
-const dimensionOf = (parameter: SweepParameter) => (parameter === "lab-distance" ? "length" : "time");
 
 function useJobRunner() {
   const runner = useMemo(() => createJobRunner(spawnComputeWorker), []);
@@ -51,8 +44,9 @@ export function SweepPanel() {
   const store = useEditorStore();
   const runner = useJobRunner();
   const edit = useEdit();
-  const document = useEditor((s) => s.document);
-  const revision = useEditor((s) => s.revision);
+  // Shown deferred: a drag redraws the canvases first, and the range fields and the stale mark when the frame has time.
+  const document = useDeferredValue(useEditor((s) => s.document));
+  const revision = useDeferredValue(useEditor((s) => s.revision));
   const readOnly = useEditor((s) => s.readOnly);
   const sweep = useEditor((s) => s.sweep);
   const available: SweepParameter[] = [
@@ -63,7 +57,6 @@ export function SweepPanel() {
   const dimension = dimensionOf(parameter);
   const [range, setRange] = useState<{ from: number; to: number } | null>(null);
   const shownRange = range ?? defaultSweepRange(document, parameter);
-  const current = currentSweepValue(document, parameter);
   const showProgress = useShowAfter(sweep.status === "running", PROGRESS_AFTER_MS);
 
   const run = () => {
@@ -97,12 +90,16 @@ export function SweepPanel() {
     edit("Use the best recombination time", (d) => withRecombinationAndHold(d, optimum.recombinationSeconds, optimum.tradedSeconds));
   };
 
-  const data = (sweep.result?.points ?? [])
-    .map((p) => ({ x: p.x, decoherence: p.decoherence.value }))
-    .filter((p): p is { x: number; decoherence: number } => p.decoherence !== null && p.decoherence > 0);
-  const best = data.reduce<(typeof data)[number] | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null);
+  const data = useMemo(
+    () =>
+      (sweep.result?.points ?? [])
+        .map((p) => ({ x: p.x, decoherence: p.decoherence.value }))
+        .filter((p): p is SweepPoint => p.decoherence !== null && p.decoherence > 0),
+    [sweep.result],
+  );
+  const best = data.reduce<SweepPoint | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null);
   const stale = sweep.result !== null && sweep.requestRevision !== revision;
-  const setTo = (x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x));
+  const setTo = useCallback((x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x)), [edit, parameter]);
 
   if (available.length === 0) {
     return (
@@ -197,36 +194,7 @@ export function SweepPanel() {
             </p>
           )}
           <div className="mt-3 h-64 w-full" data-testid="sweep-chart">
-            <ResponsiveContainer width="100%" height="100%">
-              <LineChart
-                data={data}
-                margin={{ top: 10, right: 20, bottom: 24, left: 10 }}
-                onClick={(state) => {
-                  const index = Number(state?.activeIndex);
-                  if (!readOnly && Number.isInteger(index) && data[index]) setTo(data[index].x);
-                }}
-                style={{ cursor: readOnly ? "default" : "pointer" }}
-              >
-                <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
-                <XAxis
-                  dataKey="x"
-                  type="number"
-                  scale="log"
-                  domain={["dataMin", "dataMax"]}
-                  tickFormatter={(v: number) => compactQuantity(v, dimension)}
-                  tick={{ fontSize: 11 }}
-                  label={{ value: PARAMETER_WORDS[parameter], position: "insideBottom", offset: -14, fontSize: 11 }}
-                />
-                <YAxis dataKey="decoherence" type="number" scale="log" domain={["auto", "auto"]} tickFormatter={(v: number) => compactNumber(v)} tick={{ fontSize: 11 }} width={72} label={{ value: "𝒟", angle: -90, position: "insideLeft", fontSize: 12 }} />
-                <Tooltip
-                  formatter={(v) => [compactNumber(Number(v), 3), "decoherence 𝒟"]}
-                  labelFormatter={(x) => `${PARAMETER_WORDS[parameter]} ${formatQuantity(Number(x), dimension)}`}
-                />
-                <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
-                {current !== null && current > 0 && <ReferenceLine x={current} stroke="#E69F00" strokeWidth={2} label={{ value: "now", position: "top", fontSize: 11 }} />}
-                {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
-              </LineChart>
-            </ResponsiveContainer>
+            <SweepChart data={data} parameter={parameter} readOnly={readOnly} onPick={setTo} />
           </div>
           {best && (
             <p className="mt-1 text-xs text-ink-soft">

@@ -37,7 +37,7 @@
  * on this machine the target is near the floor of software rendering.
  * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag.
  */
-import { chromium, type Page } from "@playwright/test";
+import { chromium, type CDPSession, type Page } from "@playwright/test";
 
 const BASE_URL = (process.env.BRANCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
 const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner" };
@@ -138,6 +138,7 @@ async function stopRecording(page: Page) {
  */
 async function dragRecombination(page: Page): Promise<number> {
   const lab = page.getByTestId("lab-view");
+  await lab.scrollIntoViewIfNeeded();
   const handles = JSON.parse((await lab.getAttribute("data-handles")) ?? "[]") as { id: string; x: number }[];
   const handle = handles.find((h) => h.id === "recombination-end");
   if (!handle) throw new Error("the recombination-end handle is not on screen (is the scenario read-only?)");
@@ -183,7 +184,66 @@ function topSelfTime(profile: { nodes: ProfileNode[] }, count = 12): string[] {
     .map(([key, hits]) => `  ${((100 * hits) / Math.max(1, total)).toFixed(1).padStart(5)} %  ${key}`);
 }
 
+/** The page's main-thread totals (CDP Performance metrics), in milliseconds: all tasks, script, style and layout. */
+async function mainThreadTotals(cdp: CDPSession): Promise<Record<"task" | "script" | "style" | "layout", number>> {
+  const { metrics } = (await cdp.send("Performance.getMetrics")) as { metrics: { name: string; value: number }[] };
+  const seconds = (name: string) => metrics.find((m) => m.name === name)?.value ?? 0;
+  return {
+    task: 1000 * seconds("TaskDuration"),
+    script: 1000 * seconds("ScriptDuration"),
+    style: 1000 * seconds("RecalcStyleDuration"),
+    layout: 1000 * seconds("LayoutDuration"),
+  };
+}
+
+/** One recorded drag: its figures as printed lines, and whether the frame-time target was met. */
+async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<{ lines: string[]; met: boolean }> {
+  await budgetCurrent(page);
+  const longTasksObserved = await startRecording(page);
+  const profiling = Boolean(process.env.BRANCH_PROFILE);
+  if (profiling) {
+    await cdp.send("Profiler.enable");
+    await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
+    await cdp.send("Profiler.start");
+  }
+  const before = await mainThreadTotals(cdp);
+  const started = performance.now();
+  const moves = await dragRecombination(page);
+  const wall = performance.now() - started;
+  const after = await mainThreadTotals(cdp);
+  const profile = profiling ? ((await cdp.send("Profiler.stop")) as { profile: { nodes: ProfileNode[] } }).profile : null;
+  await budgetCurrent(page);
+  const { deltas, longTasks, moves: received, roundTrips } = await stopRecording(page);
+
+  const dropped = deltas.filter((d) => d > 1.5 * FRAME_PERIOD_MS).length;
+  const p95 = quantile(deltas, 0.95);
+  const met = p95 <= FRAME_PERIOD_MS + 1;
+  const busy = (key: keyof typeof before) => (after[key] - before[key]) / Math.max(1, deltas.length);
+  const lines = [
+    `${what}:`,
+    `  drag: ${moves} mouse moves sent over ${DRAG_MS / 1000} s (one per 60 Hz frame), ${received} pointer moves seen by the page, recombination-end handle, ±${DRAG_AMPLITUDE_PX} px`,
+    `  frame time (rAF delta), ${deltas.length} frames: ${spread(deltas)}`,
+    `  frames past 1.5 periods (${ms(1.5 * FRAME_PERIOD_MS)}): ${dropped} of ${deltas.length}`,
+    `  main thread busy per frame: ${ms(busy("task"))} of ${ms(FRAME_PERIOD_MS)} (script ${ms(busy("script"))}, style ${ms(busy("style"))}, layout ${ms(busy("layout"))}; ${((100 * (after.task - before.task)) / wall).toFixed(0)} % of the drag's wall time)`,
+    longTasksObserved
+      ? `  long tasks (> 50 ms): ${longTasks.length}${longTasks.length ? `, longest ${ms(Math.max(...longTasks))}, total ${ms(longTasks.reduce((a, b) => a + b, 0))}` : ""}`
+      : "  long tasks: not reported by this browser",
+    `  budget worker round trip (${ROUNDTRIP_MEASURE}), ${roundTrips.length} recomputes: ${roundTrips.length ? `p50 ${ms(quantile(roundTrips, 0.5))}, p95 ${ms(quantile(roundTrips, 0.95))}, max ${ms(Math.max(...roundTrips))}` : "none recorded"}`,
+    `  target frame time p95 ≤ 16 ms (one ${ms(FRAME_PERIOD_MS)} period + 1 ms jitter): ${met ? "met" : "NOT met"}`,
+  ];
+  if (profile) lines.push("  main thread during the drag, by self time:", ...topSelfTime(profile));
+  return { lines, met };
+}
+
+/** Runs a recombination-time sweep in the Sweep panel and waits for its chart. */
+async function showSweep(page: Page): Promise<void> {
+  await page.getByTestId("run-sweep").click();
+  await page.getByTestId("sweep-chart").locator("svg").first().waitFor({ timeout: 60_000 });
+}
+
 async function main(): Promise<void> {
+  const slowdown = Number(process.env.BRANCH_CPU_SLOWDOWN ?? 1);
+  if (!(slowdown >= 1)) throw new Error(`BRANCH_CPU_SLOWDOWN must be a number ≥ 1 (got "${process.env.BRANCH_CPU_SLOWDOWN}")`);
   const browser = await chromium.launch(LAUNCH);
   try {
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
@@ -191,35 +251,16 @@ async function main(): Promise<void> {
     const scenario = await horizonScenarioPath(page);
     await page.goto(`${BASE_URL}${scenario.path}`);
     await page.getByTestId("lab-view").waitFor();
-    await budgetCurrent(page);
-    const longTasksObserved = await startRecording(page);
-    // BRANCH_PROFILE=1: also sample the page's main thread during the drag and print where its time went.
-    const profiler = process.env.BRANCH_PROFILE ? await page.context().newCDPSession(page) : null;
-    if (profiler) {
-      await profiler.send("Profiler.enable");
-      await profiler.send("Profiler.setSamplingInterval", { interval: 200 });
-      await profiler.send("Profiler.start");
-    }
-    const moves = await dragRecombination(page);
-    const profile = profiler ? ((await profiler.send("Profiler.stop")) as { profile: { nodes: ProfileNode[] } }).profile : null;
-    await budgetCurrent(page);
-    const { deltas, longTasks, moves: received, roundTrips } = await stopRecording(page);
-
-    const dropped = deltas.filter((d) => d > 1.5 * FRAME_PERIOD_MS).length;
-    const p95 = quantile(deltas, 0.95);
-    const lines = [
-      `scenario: "${scenario.title}" at ${BASE_URL}`,
-      `drag: ${moves} mouse moves sent over ${DRAG_MS / 1000} s (one per 60 Hz frame), ${received} pointer moves seen by the page, recombination-end handle, ±${DRAG_AMPLITUDE_PX} px`,
-      `frame time (rAF delta), ${deltas.length} frames: ${spread(deltas)}`,
-      `frames past 1.5 periods (${ms(1.5 * FRAME_PERIOD_MS)}): ${dropped} of ${deltas.length}`,
-      longTasksObserved
-        ? `long tasks (> 50 ms): ${longTasks.length}${longTasks.length ? `, longest ${ms(Math.max(...longTasks))}, total ${ms(longTasks.reduce((a, b) => a + b, 0))}` : ""}`
-        : "long tasks: not reported by this browser",
-      `budget worker round trip (${ROUNDTRIP_MEASURE}), ${roundTrips.length} recomputes: ${roundTrips.length ? `p50 ${ms(quantile(roundTrips, 0.5))}, p95 ${ms(quantile(roundTrips, 0.95))}, max ${ms(Math.max(...roundTrips))}` : "none recorded"}`,
-      `target frame time p95 ≤ 16 ms (one ${ms(FRAME_PERIOD_MS)} period + 1 ms jitter): ${p95 <= FRAME_PERIOD_MS + 1 ? "met" : "NOT met"}`,
+    const cdp = await page.context().newCDPSession(page);
+    await cdp.send("Performance.enable");
+    if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });
+    const header = [
+      `scenario: "${scenario.title}" at ${BASE_URL}${slowdown > 1 ? `, CPU slowed ${slowdown}× (BRANCH_CPU_SLOWDOWN)` : ""}`,
     ];
-    if (profile) lines.push("main thread during the drag, by self time:", ...topSelfTime(profile));
-    console.log(lines.join("\n"));
+    const plain = await measuredDrag(page, cdp, "drag with the editor as it opens");
+    await showSweep(page);
+    const withSweep = await measuredDrag(page, cdp, "drag with a sweep's chart shown");
+    console.log([...header, ...plain.lines, ...withSweep.lines].join("\n"));
   } finally {
     await browser.close();
   }

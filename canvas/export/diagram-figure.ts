@@ -4,7 +4,8 @@
  * Pure: no Konva, no DOM.
  */
 import { hatchTicks, layoutLabels, offsetPolyline, type LabelCandidate, type PlacedLabel } from "../kernels/diagram/decorations";
-import type { DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
+import { memoizeLast } from "../kernels/memoize";
+import type { DiagramBackdrop, DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
 import { fitDiagramViewport, flatPx, toPx, type DiagramViewport, type Padding } from "../kernels/diagram/viewport";
 import { wavyLine } from "../kernels/diagram/decorations";
 import { diagramLabelCandidates } from "../layers/diagram-labels";
@@ -66,13 +67,13 @@ export interface FigureOptions {
   cursor?: TimeCursor | null;
 }
 
-export function diagramPadding(scene: DiagramScene, labelScale = 1): Padding {
+export function diagramPadding(scene: DiagramBackdrop, labelScale = 1): Padding {
   const base = scene.chart.background.kind === "de-sitter" ? DE_SITTER_PADDING : PADDING;
   const grow = (v: number) => Math.round(v * (1 + (labelScale - 1) * 0.6));
   return { left: grow(base.left), right: grow(base.right), top: grow(base.top), bottom: grow(base.bottom) };
 }
 
-export function diagramViewport(scene: DiagramScene, size: { width: number; height: number }, labelScale = 1): DiagramViewport {
+export function diagramViewport(scene: DiagramBackdrop, size: { width: number; height: number }, labelScale = 1): DiagramViewport {
   return fitDiagramViewport(scene.bounds, size, diagramPadding(scene, labelScale));
 }
 
@@ -125,27 +126,76 @@ function scaled(candidates: LabelCandidate[], labelScale: number): LabelCandidat
   return candidates.map((c) => ({ ...c, fontSize: c.fontSize * (c.priority >= BOUNDARY_LABEL_PRIORITY ? labelScale : gridScale) }));
 }
 
+/** The groups that depend on the background and the lab only: under and over the protocol's. */
+interface BackdropGroups {
+  viewport: DiagramViewport;
+  under: FigureGroup[];
+  over: FigureGroup[];
+  labels: FigureGroup;
+}
+
+function backdropGroups(scene: DiagramBackdrop, width: number, height: number, palette: FigurePalette, labelScale: number, paper: boolean): BackdropGroups {
+  const size = { width, height };
+  const viewport = diagramViewport(scene, size, labelScale);
+  const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
+  const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
+  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size);
+  return {
+    viewport,
+    under: [
+      { id: "background", shapes: paper ? [area([0, 0, width, 0, width, height, 0, height], palette.paper)] : [] },
+      {
+        id: "regions",
+        shapes: [area(flatPx(viewport, scene.outline), palette.contextPaper), ...(paper ? [area(flatPx(viewport, scene.labRegion), palette.paper)] : [])],
+      },
+    ],
+    over: [
+      { id: "grid", shapes: scene.grid.map((g) => line(flatPx(viewport, g.points), palette.rule, 0.75)) },
+      { id: "boundaries", shapes: scene.boundaries.flatMap((b) => boundaryShapes(b, viewport, palette)) },
+      { id: "lab-worldline", shapes: [line(flatPx(viewport, scene.labWorldline), palette.inkSoft, 1.25)] },
+    ],
+    labels: { id: "labels", shapes: labels.map((l) => labelShape(l, tone[l.tone])) },
+  };
+}
+
+/**
+ * The backdrop's groups are laid out (grid, boundaries, label placement) once per backdrop, size and look: a drag,
+ * which changes only the protocol, gets the very same groups back, so the stage can tell at once they are unchanged.
+ * A scene's backdrop fields are shared by every scene built on it (canvas/kernels/diagram/scene.ts).
+ */
+const rememberedBackdrop = memoizeLast(
+  (
+    chart: DiagramBackdrop["chart"],
+    outline: DiagramBackdrop["outline"],
+    labRegion: DiagramBackdrop["labRegion"],
+    bounds: DiagramBackdrop["bounds"],
+    boundaries: DiagramBackdrop["boundaries"],
+    grid: DiagramBackdrop["grid"],
+    worldline: DiagramBackdrop["labWorldline"],
+    width: number,
+    height: number,
+    palette: FigurePalette,
+    labelScale: number,
+    paper: boolean,
+  ) => backdropGroups({ chart, outline, labRegion, bounds, boundaries, grid, labWorldline: worldline }, width, height, palette, labelScale, paper),
+);
+
 export function diagramFigure(scene: DiagramScene, size: { width: number; height: number }, palette: FigurePalette, options: FigureOptions = {}): DiagramFigure {
   const { width, height } = size;
   const labelScale = options.labelScale ?? 1;
   const paper = options.paperBackground ?? true;
-  const viewport = diagramViewport(scene, size, labelScale);
+  const backdrop = rememberedBackdrop(scene.chart, scene.outline, scene.labRegion, scene.bounds, scene.boundaries, scene.grid, scene.labWorldline, width, height, palette, labelScale, paper);
+  const { viewport } = backdrop;
   const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
   const protocol = scene.protocol && options.cursor ? cutAtCursor(scene, options.cursor) : scene.protocol;
 
   const groups: FigureGroup[] = [
-    { id: "background", shapes: paper ? [area([0, 0, width, 0, width, height, 0, height], palette.paper)] : [] },
-    {
-      id: "regions",
-      shapes: [area(flatPx(viewport, scene.outline), palette.contextPaper), ...(paper ? [area(flatPx(viewport, scene.labRegion), palette.paper)] : [])],
-    },
+    ...backdrop.under,
     {
       id: "radiation",
       shapes: (protocol?.strips ?? []).map((s) => area(flatPx(viewport, s.polygon), s.kind === "far-field" ? palette.farFieldTint : palette.horizonTint)),
     },
-    { id: "grid", shapes: scene.grid.map((g) => line(flatPx(viewport, g.points), palette.rule, 0.75)) },
-    { id: "boundaries", shapes: scene.boundaries.flatMap((b) => boundaryShapes(b, viewport, palette)) },
-    { id: "lab-worldline", shapes: [line(flatPx(viewport, scene.labWorldline), palette.inkSoft, 1.25)] },
+    ...backdrop.over,
   ];
 
   const samples = protocol?.branches ?? [];
@@ -180,8 +230,6 @@ export function diagramFigure(scene: DiagramScene, size: { width: number; height
     }
   }
 
-  const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
-  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size);
-  groups.push({ id: "labels", shapes: labels.map((l) => labelShape(l, tone[l.tone])) });
+  groups.push(backdrop.labels);
   return { width, height, viewport, groups };
 }

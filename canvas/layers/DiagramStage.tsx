@@ -8,7 +8,7 @@ import { memo } from "react";
 import { Circle, Group, Layer, Line, Stage, Text } from "react-konva";
 import type { KonvaEventObject } from "konva/lib/Node";
 import { useEditor, useEditorStore } from "../EditorProvider";
-import { diagramFigure } from "../export/diagram-figure";
+import { diagramFigure, diagramViewport } from "../export/diagram-figure";
 import { konvaShape, type KonvaFonts } from "../export/konva-shapes";
 import type { TimeCursor } from "../export/time-cursor";
 import { compactQuantity } from "../kernels/diagram/labels";
@@ -49,6 +49,7 @@ function sameValue(a: unknown, b: unknown): boolean {
 
 /** Two lists of figure shapes with the same content (shapes are flat records of numbers, strings and number arrays). */
 export function sameShapes(a: FigureShape[], b: FigureShape[]): boolean {
+  if (a === b) return true;
   if (a.length !== b.length) return false;
   return a.every((shape, i) => {
     const other = b[i] as unknown as Record<string, unknown>;
@@ -110,39 +111,46 @@ export interface DiagramStageProps {
   cursor?: TimeCursor | null;
 }
 
-export default function DiagramStage({ width, height, labelScale = 1, cursor = null }: DiagramStageProps) {
-  const store = useEditorStore();
+/**
+ * What the stage draws, subscribed to the store from inside the stage: a drag re-renders this component in
+ * react-konva's own renderer, not the Stage and the page around it.
+ */
+function DiagramLayers({ width, height, labelScale, cursor }: Required<DiagramStageProps>) {
   const theme = useEditor((s) => s.document.display.theme);
   const outcome = useEditor((s) => s.diagramScene(s.document));
   const palette = FIGURE_PALETTES[theme];
   const fonts = useFigureFonts();
-
   if (!outcome.ok) {
     return (
-      <Stage width={width} height={height}>
-        <Layer>
-          <Text x={16} y={16} width={width - 32} text={`The diagram cannot be drawn: ${outcome.issue.message}`} fill={palette.ink} fontSize={14 * labelScale} />
-        </Layer>
-      </Stage>
+      <Layer>
+        <Text x={16} y={16} width={width - 32} text={`The diagram cannot be drawn: ${outcome.issue.message}`} fill={palette.ink} fontSize={14 * labelScale} />
+      </Layer>
     );
   }
   const scene = outcome.scene;
   const figure = diagramFigure(scene, { width, height }, palette, { labelScale, cursor });
-  const viewport = figure.viewport;
-
-  const onMove = (event: KonvaEventObject<MouseEvent>) => {
-    const pos = event.target.getStage()?.getPointerPosition();
-    if (pos) store.getState().setDiagramPointer(fromPx(viewport, pos.x, pos.y));
-  };
-
   return (
-    <Stage width={width} height={height} onMouseMove={onMove} onMouseLeave={() => store.getState().setDiagramPointer(null)}>
+    <>
       {LAYERS.map((ids) => (
         <FigureLayer key={ids[0]} groups={figure.groups.filter((g) => ids.includes(g.id))} fonts={fonts} />
       ))}
       <Layer listening={false}>
-        <LightConeGizmo scene={scene} viewport={viewport} palette={palette} font={fonts.mono} />
+        <LightConeGizmo scene={scene} viewport={figure.viewport} palette={palette} font={fonts.mono} />
       </Layer>
+    </>
+  );
+}
+
+export default function DiagramStage({ width, height, labelScale = 1, cursor = null }: DiagramStageProps) {
+  const store = useEditorStore();
+  const onMove = (event: KonvaEventObject<MouseEvent>) => {
+    const pos = event.target.getStage()?.getPointerPosition();
+    const outcome = store.getState().diagramScene(store.getState().document);
+    if (pos && outcome.ok) store.getState().setDiagramPointer(fromPx(diagramViewport(outcome.scene, { width, height }, labelScale), pos.x, pos.y));
+  };
+  return (
+    <Stage width={width} height={height} onMouseMove={onMove} onMouseLeave={() => store.getState().setDiagramPointer(null)}>
+      <DiagramLayers width={width} height={height} labelScale={labelScale} cursor={cursor} />
     </Stage>
   );
 }

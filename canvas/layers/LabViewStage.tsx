@@ -7,7 +7,7 @@
  * (a ring marks the one selected while the view has focus, and a live line names it with its value), arrow keys
  * nudge it, Escape lets it go.
  */
-import { useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
@@ -89,42 +89,24 @@ function Handle({ handle, viewport, palette, state }: { handle: HandlePlacement;
   );
 }
 
-export default function LabViewStage({ width, height }: { width: number; height: number }) {
-  const store = useEditorStore();
+type FocusMode = "none" | "pointer" | "keyboard";
+
+/**
+ * What the stage draws, subscribed to the store from inside the stage: a drag re-renders this layer in react-konva's
+ * own renderer, not the Stage and the page around it.
+ */
+function LabViewLayer({ width, height, focus }: { width: number; height: number; focus: FocusMode }) {
   const document = useEditor((s) => s.document);
   const viewport = useEditor((s) => s.labView.viewport(s));
   const origin = useEditor((s) => s.labView.originSeconds(s));
   const handles = useEditor((s) => s.labView.handles(s));
   const hover = useEditor((s) => s.hover);
   const selection = useEditor((s) => s.selection);
-  const dragging = useEditor((s) => s.labTool.name === "dragging");
   const fonts = useFigureFonts();
-  const container = useRef<HTMLDivElement>(null);
-  const [focus, setFocus] = useState<"none" | "pointer" | "keyboard">("none");
-  const selectionLineId = useId();
   const palette = FIGURE_PALETTES[document.display.theme];
   const protocol = document.protocol.kind === "segments" ? document.protocol : null;
-
-  const local = (event: PointerEvent) => {
-    const box = container.current!.getBoundingClientRect();
-    return { x: event.clientX - box.left, y: event.clientY - box.top, shiftKey: event.shiftKey };
-  };
-  const onPointerDown = (event: PointerEvent<HTMLDivElement>) => {
-    if (event.button !== 0) return;
-    container.current?.focus();
-    event.currentTarget.setPointerCapture(event.pointerId);
-    store.getState().labPointerDown(local(event));
-  };
-  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
-    if (store.getState().labKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
-  };
-  const hovered = handles.find((h) => h.id === hover);
+  if (!viewport) return null;
   const selected = handles.find((h) => h.id === selection);
-  const cursor = dragging ? "grabbing" : hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
-
-  if (!viewport) {
-    return <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">This scenario's {document.protocol.kind} profile cannot be read.</div>;
-  }
   const drawn = protocol ? branchPaths(viewport, protocol, document.separation, origin) : profileCurves(viewport, document);
   const { a, b } = drawn;
   const { plot } = viewport;
@@ -139,6 +121,133 @@ export default function LabViewStage({ width, height }: { width: number; height:
   const titleSide = timeAxisTitleSide(timeLabels, { widthPx: TIME_AXIS_TITLE.length * SANS_EM_PX, leftEndPx: plot.left, rightEndPx: plot.left + plot.width });
 
   return (
+    <Layer>
+      <Rect x={0} y={0} width={width} height={height} fill={palette.paper} />
+      {protocol && SEGMENT_NAMES.map((name, i) => {
+        const x0 = bounds[i].px;
+        const x1 = bounds[i + 1].px;
+        return (
+          <Group key={name}>
+            {name !== "hold" && <Rect x={x0} y={plot.top} width={Math.max(0, x1 - x0)} height={plot.height} fill={palette.contextPaper} />}
+            <Text x={x0} y={plot.top + 4} width={Math.max(0, x1 - x0)} align="center" text={x1 - x0 > 60 ? name : ""} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
+          </Group>
+        );
+      })}
+      {offsetTicks(viewport).map((t) => (
+        <Group key={t.valueSI}>
+          <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
+          <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} wrap="none" />
+        </Group>
+      ))}
+      <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
+      <Line points={[plot.left, plot.top, plot.left, bottom, plot.left + plot.width, bottom]} stroke={palette.ink} strokeWidth={1} />
+      {scaleBreaksPx(viewport).map((x) => (
+        <Group key={x}>
+          <Line points={[x - 4, bottom + 4, x, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
+          <Line points={[x, bottom + 4, x + 4, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
+        </Group>
+      ))}
+      {timeLabels.map((t, i) => (
+        <Text
+          key={i}
+          x={t.px - 50}
+          y={bottom + 10 + t.row * 13}
+          width={100}
+          align="center"
+          text={t.text}
+          fontSize={11}
+          fontFamily={fonts.mono}
+          fill={palette.inkSoft}
+        />
+      ))}
+      <Text
+        x={titleSide === "right" ? plot.left + plot.width - 200 : plot.left}
+        y={bottom + 23}
+        width={200}
+        align={titleSide}
+        text={TIME_AXIS_TITLE}
+        fontSize={11}
+        fontFamily={fonts.sans}
+        fill={palette.inkFaint}
+        wrap="none"
+      />
+      <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
+      <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
+      <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
+      {handles.map((h) => (
+        <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
+      ))}
+      {focus !== "none" && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
+      {/* The page's focus outline would sit under the canvas: the stage draws its own when focus came from the keyboard. */}
+      {focus === "keyboard" && <Rect x={1} y={1} width={width - 2} height={height - 2} stroke={palette.focus} strokeWidth={2} cornerRadius={3} />}
+    </Layer>
+  );
+}
+
+/** Where the pointer may grab: the cursor for the handle under it, or the one being dragged. */
+function cursorFor(state: Parameters<Parameters<typeof useEditor>[0]>[0]): string {
+  if (state.labTool.name === "dragging") return "grabbing";
+  const hovered = state.labView.handles(state).find((h) => h.id === state.hover);
+  return hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
+}
+
+/** The handles' positions in stage pixels, for tests and benches that drive the view with a mouse. */
+function handlesAttribute(state: Parameters<Parameters<typeof useEditor>[0]>[0]): string {
+  return JSON.stringify(state.labView.handles(state).map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })));
+}
+
+/** The live line naming the selected handle and its value; quiet while dragging (a value a frame would flood a screen reader). */
+function SelectionLine({ id }: { id: string }) {
+  const dragging = useEditor((s) => s.labTool.name === "dragging");
+  const words = useEditor((s) => (s.document.protocol.kind === "segments" ? selectionWords(s.selection, s.document.protocol, s.document.separation) : ""));
+  return (
+    <p id={id} aria-live="polite" className="sr-only" data-testid="lab-view-selection">
+      {dragging ? "" : words}
+    </p>
+  );
+}
+
+export default function LabViewStage({ width, height }: { width: number; height: number }) {
+  const store = useEditorStore();
+  const readable = useEditor((s) => s.labView.viewport(s) !== null);
+  const protocolKind = useEditor((s) => s.document.protocol.kind);
+  const selection = useEditor((s) => s.selection);
+  const cursor = useEditor(cursorFor);
+  const container = useRef<HTMLDivElement>(null);
+  const [focus, setFocus] = useState<FocusMode>("none");
+  const selectionLineId = useId();
+
+  // The handles' positions change on every frame of a drag: written straight onto the element, not re-rendered.
+  useEffect(() => {
+    const write = () => container.current?.setAttribute("data-handles", handlesAttribute(store.getState()));
+    write();
+    return store.subscribe(write);
+  }, [store, readable]);
+
+  // The stage's box is read once when a drag starts and kept until it ends: reading it on every move would make the
+  // browser lay the page out again right after each frame's changes (a forced layout per pointer move).
+  const dragBox = useRef<DOMRect | null>(null);
+  const local = (event: PointerEvent) => {
+    const box = dragBox.current ?? container.current!.getBoundingClientRect();
+    return { x: event.clientX - box.left, y: event.clientY - box.top, shiftKey: event.shiftKey };
+  };
+  const onPointerDown = (event: PointerEvent<HTMLDivElement>) => {
+    if (event.button !== 0) return;
+    container.current?.focus();
+    event.currentTarget.setPointerCapture(event.pointerId);
+    dragBox.current = container.current!.getBoundingClientRect();
+    store.getState().labPointerDown(local(event));
+  };
+  const endDrag = () => {
+    dragBox.current = null;
+  };
+  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (store.getState().labKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
+  };
+  if (!readable) {
+    return <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">This scenario's {protocolKind} profile cannot be read.</div>;
+  }
+  return (
     <div
       ref={container}
       tabIndex={0}
@@ -147,84 +256,30 @@ export default function LabViewStage({ width, height }: { width: number; height:
       aria-describedby={selectionLineId}
       data-testid="lab-view"
       data-selected={selection ?? ""}
-      data-handles={JSON.stringify(handles.map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })))}
       style={{ cursor, touchAction: "none", outline: "none" }}
       onFocus={(e) => setFocus(e.currentTarget.matches(":focus-visible") ? "keyboard" : "pointer")}
       onBlur={() => setFocus("none")}
       onPointerDown={onPointerDown}
       onPointerMove={(e) => store.getState().labPointerMove(local(e))}
-      onPointerUp={(e) => store.getState().labPointerUp(local(e))}
-      onPointerCancel={() => store.getState().labCancel()}
-      onLostPointerCapture={() => store.getState().labTool.name === "dragging" && store.getState().labCancel()}
+      onPointerUp={(e) => {
+        store.getState().labPointerUp(local(e));
+        endDrag();
+      }}
+      onPointerCancel={() => {
+        store.getState().labCancel();
+        endDrag();
+      }}
+      onLostPointerCapture={() => {
+        if (store.getState().labTool.name === "dragging") store.getState().labCancel();
+        endDrag();
+      }}
       onPointerLeave={() => store.getState().labTool.name === "idle" && store.getState().setHover(null)}
       onKeyDown={onKeyDown}
     >
       <Stage width={width} height={height} listening={false}>
-        <Layer>
-          <Rect x={0} y={0} width={width} height={height} fill={palette.paper} />
-          {protocol && SEGMENT_NAMES.map((name, i) => {
-            const x0 = bounds[i].px;
-            const x1 = bounds[i + 1].px;
-            return (
-              <Group key={name}>
-                {name !== "hold" && <Rect x={x0} y={plot.top} width={Math.max(0, x1 - x0)} height={plot.height} fill={palette.contextPaper} />}
-                <Text x={x0} y={plot.top + 4} width={Math.max(0, x1 - x0)} align="center" text={x1 - x0 > 60 ? name : ""} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} />
-              </Group>
-            );
-          })}
-          {offsetTicks(viewport).map((t) => (
-            <Group key={t.valueSI}>
-              <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
-              <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} wrap="none" />
-            </Group>
-          ))}
-          <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
-          <Line points={[plot.left, plot.top, plot.left, bottom, plot.left + plot.width, bottom]} stroke={palette.ink} strokeWidth={1} />
-          {scaleBreaksPx(viewport).map((x) => (
-            <Group key={x}>
-              <Line points={[x - 4, bottom + 4, x, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
-              <Line points={[x, bottom + 4, x + 4, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
-            </Group>
-          ))}
-          {timeLabels.map((t, i) => (
-            <Text
-              key={i}
-              x={t.px - 50}
-              y={bottom + 10 + t.row * 13}
-              width={100}
-              align="center"
-              text={t.text}
-              fontSize={11}
-              fontFamily={fonts.mono}
-              fill={palette.inkSoft}
-            />
-          ))}
-          <Text
-            x={titleSide === "right" ? plot.left + plot.width - 200 : plot.left}
-            y={bottom + 23}
-            width={200}
-            align={titleSide}
-            text={TIME_AXIS_TITLE}
-            fontSize={11}
-            fontFamily={fonts.sans}
-            fill={palette.inkFaint}
-            wrap="none"
-          />
-          <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
-          <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
-          <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
-          {handles.map((h) => (
-            <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
-          ))}
-          {focus !== "none" && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
-          {/* The page's focus outline would sit under the canvas: the stage draws its own when focus came from the keyboard. */}
-          {focus === "keyboard" && <Rect x={1} y={1} width={width - 2} height={height - 2} stroke={palette.focus} strokeWidth={2} cornerRadius={3} />}
-        </Layer>
+        <LabViewLayer width={width} height={height} focus={focus} />
       </Stage>
-      {/* Quiet while dragging (a value every frame would flood a screen reader): the value it settles on is read out. */}
-      <p id={selectionLineId} aria-live="polite" className="sr-only" data-testid="lab-view-selection">
-        {dragging ? "" : selectionWords(selection, protocol, document.separation)}
-      </p>
+      <SelectionLine id={selectionLineId} />
     </div>
   );
 }

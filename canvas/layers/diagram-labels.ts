@@ -1,5 +1,5 @@
 /** The label candidates of a diagram scene, in stage pixels, for the label layout. */
-import type { DiagramScene } from "../kernels/diagram/scene";
+import type { DiagramBackdrop } from "../kernels/diagram/scene";
 import { labelBox, type LabelCandidate } from "../kernels/diagram/decorations";
 import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 
@@ -37,14 +37,14 @@ function segmentCrossesBox(p: Px, q: Px, box: Box): boolean {
 }
 
 /** Whether a label's box would cross one of the lab region's horizons (near a bifurcation point the room runs out). */
-function crossesHorizon(label: LabelCandidate, scene: DiagramScene, viewport: DiagramViewport): boolean {
+function crossesHorizon(label: LabelCandidate, scene: DiagramBackdrop, viewport: DiagramViewport): boolean {
   const box = labelBox(label);
   return scene.boundaries
     .filter((b) => b.kind === "horizon" && b.bordersLabRegion)
     .some((b) => b.points.slice(1).some((point, i) => segmentCrossesBox(toPx(viewport, b.points[i]), toPx(viewport, point), box)));
 }
 
-export function diagramLabelCandidates(scene: DiagramScene, viewport: DiagramViewport): LabelCandidate[] {
+export function diagramLabelCandidates(scene: DiagramBackdrop, viewport: DiagramViewport): LabelCandidate[] {
   const boundaryLabels = scene.boundaries.map((b, i): LabelCandidate => {
     const at = toPx(viewport, b.labelAt);
     // labelDirection is on the diagram (T up); on screen y runs down.

@@ -132,7 +132,8 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
       saveFailed: (message) => set((s) => ({ save: { ...s.save, status: "failed", message } })),
       saveConflicted: (currentVersion) => set((s) => ({ save: { ...s.save, status: "conflict", conflictVersion: currentVersion, message: null } })),
 
-      budgetStarted: () => set((s) => ({ budget: { ...s.budget, status: "computing" } })),
+      // Already computing (a drag sends a request a frame): no change, so nothing subscribed to the budget re-renders.
+      budgetStarted: () => set((s) => (s.budget.status === "computing" ? s : { budget: { ...s.budget, status: "computing" } })),
       budgetFinished(revision, outcome) {
         set((s) => {
           const status = revision !== s.revision ? "computing" : outcome.ok ? "ready" : "failed";

@@ -5,11 +5,12 @@
  * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
  * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
  */
-import { useDeferredValue } from "react";
+import { memo, useDeferredValue } from "react";
 import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { bothChannels } from "@/canvas/kernels/budget/both-channels";
 import { budgetIsStale } from "@/canvas/store/selectors";
+import type { BudgetState } from "@/canvas/store/state";
 import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
 import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
@@ -79,8 +80,13 @@ function Flags({ flags }: { flags: ValidityFlag[] }) {
 export function BudgetPanel() {
   // Deferred (both together): during a drag the numbers and their state follow when the frame has time, so the
   // Diagram and the Lab view are drawn first; a settled Budget always shows the latest result and its true state.
+  // The table is a memoized view of the deferred values, so the urgent render (which still has the old ones) is free.
   const budget = useDeferredValue(useEditor((s) => s.budget));
   const stale = useDeferredValue(useEditor((s) => budgetIsStale(s) || s.budget.status === "computing"));
+  return <BudgetView budget={budget} stale={stale} />;
+}
+
+const BudgetView = memo(function BudgetView({ budget, stale }: { budget: BudgetState; stale: boolean }) {
   const result = budget.result;
   const failedNow = budget.status === "failed";
   const channels = result ? [result.electromagnetic, result.gravitational] : [];
@@ -150,4 +156,4 @@ export function BudgetPanel() {
       )}
     </section>
   );
-}
+});

@@ -17,11 +17,15 @@ const MAX_HEIGHT = 540;
 
 /** Notes under the figure: what is exaggerated or rescaled (from the same scene the stage draws). */
 function DiagramNotes() {
-  const outcome = useEditor((s) => s.diagramScene(s.document));
-  if (!outcome.ok) return null;
+  // One string, so that a drag (a new scene each frame, mostly the same notes) re-renders nothing here.
+  const joined = useEditor((s) => {
+    const outcome = s.diagramScene(s.document);
+    return outcome.ok ? outcome.scene.notes.join("\n") : "";
+  });
+  if (!joined) return null;
   return (
     <ul className="mt-2 space-y-0.5 text-xs text-ink-faint">
-      {outcome.scene.notes.map((note) => (
+      {joined.split("\n").map((note) => (
         <li key={note}>{note}</li>
       ))}
     </ul>

@@ -1,10 +1,11 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useDeferredValue, useEffect } from "react";
+import { memo, useDeferredValue, useEffect } from "react";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { withProtocolPlan } from "@/canvas/kernels/document-edits";
-import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle } from "@/canvas/kernels/lab-view/handles";
+import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId } from "@/canvas/kernels/lab-view/handles";
+import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { planHandleValue } from "@/canvas/kernels/lab-view/typed-plan";
 import { formatQuantity } from "@/physics/units";
 import { BranchLegend } from "./BranchLegend";
@@ -21,11 +22,16 @@ const HEIGHT = 300;
 
 /** Every handle can be typed into: instants on the lab's clock from the start of the separation, and the separation. */
 function HandleFields() {
-  const store = useEditorStore();
-  // Shown deferred: a drag redraws the Lab view first and these fields when the frame has time.
+  // Shown deferred: a drag redraws the Lab view first and these fields when the frame has time. The fields are a
+  // memoized view of the deferred values, so the urgent render (which still has the old ones) is free.
   const document = useDeferredValue(useEditor((s) => s.document));
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useDeferredValue(useEditor((s) => s.selection));
+  return <HandleFieldsView document={document} readOnly={readOnly} selection={selection} />;
+}
+
+const HandleFieldsView = memo(function HandleFieldsView({ document, readOnly, selection }: { document: ScenarioDocument; readOnly: boolean; selection: HandleId | null }) {
+  const store = useEditorStore();
   const edit = useEdit();
   if (document.protocol.kind !== "segments") return null;
   const protocol = document.protocol;
@@ -54,7 +60,7 @@ function HandleFields() {
       ))}
     </div>
   );
-}
+});
 
 export function LabViewPanel() {
   const store = useEditorStore();

@@ -4,9 +4,10 @@
  * The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape; for a
  * formula profile, its expression and duration. A sampled profile is shown in the Lab view and not edited here.
  */
-import { useDeferredValue } from "react";
+import { memo, useDeferredValue } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { withFormula, withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
+import type { HandleId } from "@/canvas/kernels/lab-view/handles";
 import { segmentShares } from "@/canvas/kernels/lab-view/viewport";
 import type { SegmentName } from "@/canvas/kernels/timeline";
 import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/scenario/schema";
@@ -81,9 +82,22 @@ function StripHeading() {
 
 export function ProtocolStrip() {
   // Shown deferred: a drag redraws the canvases first and the strip when the frame has time (edits read the store).
+  // The strip is a memoized view of the deferred values, so the urgent render (which still has the old ones) is free.
   const protocol = useDeferredValue(useEditor((s) => s.document.protocol));
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useDeferredValue(useEditor((s) => s.selection));
+  return <ProtocolStripView protocol={protocol} readOnly={readOnly} selection={selection} />;
+}
+
+const ProtocolStripView = memo(function ProtocolStripView({
+  protocol,
+  readOnly,
+  selection,
+}: {
+  protocol: ProtocolSpec;
+  readOnly: boolean;
+  selection: HandleId | null;
+}) {
   const edit = useEdit();
   if (protocol.kind === "formula") {
     return (
@@ -159,4 +173,4 @@ export function ProtocolStrip() {
       </div>
     </section>
   );
-}
+});

@@ -5,7 +5,7 @@
  * computed on a worker of its own. The current value and the sweep's smallest decoherence are marked; clicking a
  * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
  */
-import { useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
 import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
@@ -13,6 +13,7 @@ import { withRecombinationAndHold } from "@/canvas/kernels/document-edits";
 import { defaultSweepRange } from "@/canvas/kernels/sweep-range";
 import { spawnComputeWorker } from "@/canvas/worker/spawn";
 import { buttonStyles } from "@/components/ui/styles";
+import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { withParameter } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
@@ -41,12 +42,18 @@ function useShowAfter(active: boolean, ms: number): boolean {
 }
 
 export function SweepPanel() {
+  // Shown deferred: a drag redraws the canvases first, and the range fields and the stale mark when the frame has
+  // time. The panel is a memoized view of the deferred values, so the urgent render (which still has the old ones)
+  // is free; the chart's "now" marker follows the store by itself.
+  const document = useDeferredValue(useEditor((s) => s.document));
+  const revision = useDeferredValue(useEditor((s) => s.revision));
+  return <SweepView document={document} revision={revision} />;
+}
+
+const SweepView = memo(function SweepView({ document, revision }: { document: ScenarioDocument; revision: number }) {
   const store = useEditorStore();
   const runner = useJobRunner();
   const edit = useEdit();
-  // Shown deferred: a drag redraws the canvases first, and the range fields and the stale mark when the frame has time.
-  const document = useDeferredValue(useEditor((s) => s.document));
-  const revision = useDeferredValue(useEditor((s) => s.revision));
   const readOnly = useEditor((s) => s.readOnly);
   const sweep = useEditor((s) => s.sweep);
   const available: SweepParameter[] = [
@@ -206,4 +213,4 @@ export function SweepPanel() {
       )}
     </section>
   );
-}
+});

@@ -11,6 +11,7 @@ async function currentBudget(page: Page) {
 
 async function dragHandle(page: Page, handle: string, dx: number) {
   const lab = page.getByTestId("lab-view");
+  await lab.scrollIntoViewIfNeeded();
   const handles = JSON.parse((await lab.getAttribute("data-handles")) ?? "[]") as { id: string; x: number }[];
   const target = handles.find((h) => h.id === handle);
   expect(target, `the ${handle} handle is on screen`).toBeTruthy();
@@ -143,4 +144,42 @@ test("the keyboard walks the Lab view's handles in protocol order, naming each, 
 
   await owner.getByRole("button", { name: /^Undo/ }).click();
   await expect(owner.getByTestId("formula-duration")).toHaveValue("400.0 ms");
+});
+
+test("a sweep of the recombination time marks the scenario's value, follows a drag without re-running, and a click on a point sets it in one undo step", async ({ browser }) => {
+  const stamp = Date.now();
+  const owner = await signedInAs(browser, "Sweep Owner", `sweep-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: "Sweeps" } })).json()).project;
+  const scenario = (
+    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Swept lab", document: blackHoleScenario() } })).json()
+  ).scenario;
+  await owner.goto(editorPath(project.id, scenario.id));
+  await expect(owner.getByTestId("lab-view")).toBeVisible();
+  await currentBudget(owner);
+
+  await owner.getByTestId("run-sweep").click();
+  const now = owner.getByTestId("sweep-now");
+  await expect(now).toHaveAttribute("data-value", "0.05");
+  await expect(owner.getByText(/Smallest decoherence on this sweep/)).toBeVisible();
+
+  // The marker follows the scenario; the curve stays and is marked as computed for an earlier version.
+  await dragHandle(owner, "recombination-end", 120);
+  await expect(now).not.toHaveAttribute("data-value", "0.05");
+  await expect(owner.getByText(/Computed for an earlier version of the scenario/)).toBeVisible();
+  await owner.getByRole("button", { name: /^Undo/ }).click();
+  await expect(now).toHaveAttribute("data-value", "0.05");
+
+  // A click on the curve a quarter of the way along sets the recombination time to that point's value.
+  const recombination = owner.getByTestId("duration-recombination");
+  const before = await recombination.inputValue();
+  await owner.getByTestId("sweep-chart").scrollIntoViewIfNeeded();
+  const chart = (await owner.getByTestId("sweep-chart").boundingBox())!;
+  await owner.mouse.move(chart.x + chart.width * 0.3, chart.y + chart.height / 2);
+  await owner.mouse.click(chart.x + chart.width * 0.3, chart.y + chart.height / 2);
+  await expect(recombination).not.toHaveValue(before);
+  const set = Number(await now.getAttribute("data-value"));
+  expect(set).toBeLessThan(0.05);
+  await expect(owner.getByRole("button", { name: "Undo Set recombination time from the sweep" })).toBeVisible();
+  await owner.getByRole("button", { name: /^Undo/ }).click();
+  await expect(recombination).toHaveValue(before);
 });

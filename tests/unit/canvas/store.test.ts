@@ -132,6 +132,19 @@ describe("the editor store", () => {
     h.drag("recombination-end", framesOf(50, 0, 5));
     expect(h.store.getState().revision - start).toBeGreaterThanOrEqual(5);
   });
+
+  it("tells its subscribers nothing when a budget request starts while one is already being computed", () => {
+    const h = createHarness();
+    h.store.getState().budgetStarted(1);
+    let told = 0;
+    const unsubscribe = h.store.subscribe(() => told++);
+    const before = h.store.getState();
+    h.store.getState().budgetStarted(2);
+    unsubscribe();
+    expect(told).toBe(0);
+    expect(h.store.getState()).toBe(before);
+    expect(h.store.getState().budget.status).toBe("computing");
+  });
 });
 
 describe("saving state in the store", () => {

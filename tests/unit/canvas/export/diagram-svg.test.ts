@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { diagramFigure } from "@/canvas/export/diagram-figure";
 import { diagramSvg, escapeXml, svgPaint } from "@/canvas/export/diagram-svg";
 import { exportFigure } from "@/canvas/export/export-figure";
-import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
+import { withSegmentDuration } from "@/canvas/kernels/document-edits";
+import { buildDiagramScene, createSceneBuilder, type DiagramScene } from "@/canvas/kernels/diagram/scene";
 import { FIGURE_PALETTES } from "@/canvas/theme";
 import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { schwarzschildDocument } from "../harness";
@@ -93,6 +94,36 @@ describe("the figure shapes", () => {
     expect(large.get("ℐ⁺")).toBeCloseTo(normal.get("ℐ⁺")! * 1.5, 9);
     const grid = scene.grid.map((g) => g.label).find((label) => normal.has(label) && large.has(label))!;
     expect(large.get(grid)).toBeCloseTo(normal.get(grid)! * 1.25, 9);
+  });
+});
+
+describe("the figure during a drag", () => {
+  const size = { width: 520, height: 480 };
+  const ids = (groups: { id: string }[]) => groups.map((g) => g.id);
+
+  it("hands back the very same backdrop groups when only the protocol changed, and new branches", () => {
+    const build = createSceneBuilder();
+    const start = schwarzschildDocument();
+    const dragged = withSegmentDuration(start, "recombination", 2 * (start.protocol.kind === "segments" ? start.protocol.recombination.durationSeconds : 1));
+    const [before, after] = [build(start), build(dragged)].map((o) => (o.ok ? diagramFigure(o.scene, size, FIGURE_PALETTES.light) : null));
+    expect(ids(after!.groups)).toEqual(ids(before!.groups));
+    for (const id of ["background", "regions", "grid", "boundaries", "lab-worldline", "labels"]) {
+      expect(after!.groups.find((g) => g.id === id), id).toBe(before!.groups.find((g) => g.id === id));
+    }
+    expect(after!.groups.find((g) => g.id === "branch-a")).not.toEqual(before!.groups.find((g) => g.id === "branch-a"));
+  });
+
+  it("lays the backdrop out afresh for another background, size or palette (nothing stale is kept)", () => {
+    const schwarzschild = sceneOf(schwarzschildDocument());
+    const minkowski = sceneOf(base);
+    // The Minkowski figure built right after a Schwarzschild one equals one built after a figure of another look.
+    diagramFigure(schwarzschild, size, FIGURE_PALETTES.light);
+    const afterOther = diagramFigure(minkowski, size, FIGURE_PALETTES.light);
+    diagramFigure(minkowski, { width: 300, height: 300 }, FIGURE_PALETTES.dark);
+    const afresh = diagramFigure(minkowski, size, FIGURE_PALETTES.light);
+    expect(afterOther).toEqual(afresh);
+    expect(diagramFigure(minkowski, { width: 300, height: 300 }, FIGURE_PALETTES.light).viewport).not.toEqual(afresh.viewport);
+    expect(diagramFigure(minkowski, size, FIGURE_PALETTES.dark).groups[0]).not.toEqual(afresh.groups[0]);
   });
 });
 

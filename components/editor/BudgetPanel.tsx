@@ -15,6 +15,7 @@ import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/ph
 import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
 import { quantityText } from "./quantity-text";
+import { usePacedDuringDrag } from "./usePacedDuringDrag";
 
 /** A Budget row: its number per channel and for both together (the physics' own where it has one, else the counts summed). */
 type Row = { key: string; words: string; of(channel: ChannelResult): Quantity | null; combined(result: ScenarioResult): Quantity | null };
@@ -78,11 +79,11 @@ function Flags({ flags }: { flags: ValidityFlag[] }) {
 }
 
 export function BudgetPanel() {
-  // Deferred (both together): during a drag the numbers and their state follow when the frame has time, so the
-  // Diagram and the Lab view are drawn first; a settled Budget always shows the latest result and its true state.
-  // The table is a memoized view of the deferred values, so the urgent render (which still has the old ones) is free.
-  const budget = useDeferredValue(useEditor((s) => s.budget));
-  const stale = useDeferredValue(useEditor((s) => budgetIsStale(s) || s.budget.status === "computing"));
+  // Paced during a drag (ten times a second, usePacedDuringDrag) and deferred (both together), so the Diagram and the
+  // Lab view are drawn first; a settled Budget always shows the latest result and its true state. The table is a
+  // memoized view of these values, so the urgent render (which still has the old ones) is free.
+  const budget = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.budget)));
+  const stale = useDeferredValue(usePacedDuringDrag(useEditor((s) => budgetIsStale(s) || s.budget.status === "computing")));
   return <BudgetView budget={budget} stale={stale} />;
 }
 

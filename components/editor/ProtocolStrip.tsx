@@ -14,6 +14,7 @@ import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/sc
 import { formatQuantity } from "@/physics/units";
 import { DraftField, QuantityField, type CommitResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
+import { usePacedDuringDrag } from "./usePacedDuringDrag";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
   "minimum-jerk": "minimum jerk",
@@ -81,9 +82,9 @@ function StripHeading() {
 }
 
 export function ProtocolStrip() {
-  // Shown deferred: a drag redraws the canvases first and the strip when the frame has time (edits read the store).
-  // The strip is a memoized view of the deferred values, so the urgent render (which still has the old ones) is free.
-  const protocol = useDeferredValue(useEditor((s) => s.document.protocol));
+  // Paced during a drag (usePacedDuringDrag) and deferred: the canvases are redrawn first and the strip when the
+  // frame has time (edits read the store). The strip is a memoized view of these values, so the urgent render is free.
+  const protocol = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.document.protocol)));
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useDeferredValue(useEditor((s) => s.selection));
   return <ProtocolStripView protocol={protocol} readOnly={readOnly} selection={selection} />;

@@ -20,6 +20,7 @@ import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
 import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
 import { useEdit } from "./useEdit";
+import { usePacedDuringDrag } from "./usePacedDuringDrag";
 
 const POINTS = 41;
 /** A sweep quicker than this shows no progress bar. */
@@ -42,11 +43,11 @@ function useShowAfter(active: boolean, ms: number): boolean {
 }
 
 export function SweepPanel() {
-  // Shown deferred: a drag redraws the canvases first, and the range fields and the stale mark when the frame has
-  // time. The panel is a memoized view of the deferred values, so the urgent render (which still has the old ones)
-  // is free; the chart's "now" marker follows the store by itself.
-  const document = useDeferredValue(useEditor((s) => s.document));
-  const revision = useDeferredValue(useEditor((s) => s.revision));
+  // Paced during a drag (usePacedDuringDrag) and deferred: the canvases are redrawn first, and the range fields and
+  // the stale mark when the frame has time. The panel is a memoized view of these values, so the urgent render is
+  // free; the chart's "now" marker follows the store by itself.
+  const document = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.document)));
+  const revision = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.revision)));
   return <SweepView document={document} revision={revision} />;
 }
 

@@ -1,6 +1,7 @@
 /**
  * Browser bench for the editor: prints figures, asserts nothing on time. In Debian's Chromium it signs in as the
- * demo owner, opens a seeded horizon scenario (the first Schwarzschild one with a segment protocol) and drags the
+ * demo owner, opens a copy of a seeded horizon scenario (the first Schwarzschild one with a segment protocol; the copy
+ * is deleted afterwards, so the demo's scenarios and their history are left as they were) and drags the
  * recombination handle in the Lab view for two seconds, one mouse move per 60 Hz frame period, back and forth. The page
  * records every requestAnimationFrame delta and, where the browser reports them, long tasks (PerformanceObserver
  * "longtask"); the editor leaves a performance measure "branchline:budget-roundtrip" for every compute-worker request
@@ -72,16 +73,32 @@ async function signIn(page: Page): Promise<void> {
   await page.waitForURL(/\/projects/);
 }
 
-/** The editor's address of the first Schwarzschild scenario with a segment protocol (one with handles) the demo owner can see. */
-async function horizonScenarioPath(page: Page): Promise<{ path: string; title: string }> {
+/**
+ * A copy, made for the bench, of the first Schwarzschild scenario with a segment protocol (one with handles) the demo
+ * owner can see: the drags are saved as usual, so the bench works on its own copy and deletes it afterwards.
+ */
+async function benchCopyOfHorizonScenario(page: Page): Promise<{ path: string; title: string; remove(): Promise<void> }> {
   const { projects } = (await (await page.request.get(`${BASE_URL}/api/projects`)).json()) as { projects: { id: string }[] };
   for (const project of projects) {
     const listed = await page.request.get(`${BASE_URL}/api/projects/${project.id}/scenarios?background=schwarzschild`);
     const { items } = (await listed.json()) as { items: { id: string; title: string }[] };
     for (const item of items) {
-      const path = `/projects/${project.id}/scenarios/${item.id}`;
-      const { scenario } = (await (await page.request.get(`${BASE_URL}/api${path}`)).json()) as { scenario: { document: { protocol: { kind: string } } | null } };
-      if (scenario.document?.protocol.kind === "segments") return { path, title: item.title };
+      const { scenario } = (await (await page.request.get(`${BASE_URL}/api/projects/${project.id}/scenarios/${item.id}`)).json()) as {
+        scenario: { document: { protocol: { kind: string } } | null };
+      };
+      if (scenario.document?.protocol.kind !== "segments") continue;
+      const title = `Bench copy of ${item.title}`;
+      const made = await page.request.post(`${BASE_URL}/api/projects/${project.id}/scenarios`, { data: { title, document: scenario.document } });
+      if (made.status() !== 201) throw new Error(`could not make the bench's copy of "${item.title}": HTTP ${made.status()} ${await made.text()}`);
+      const copy = ((await made.json()) as { scenario: { id: string } }).scenario;
+      const path = `/projects/${project.id}/scenarios/${copy.id}`;
+      return {
+        path,
+        title: item.title,
+        async remove() {
+          await page.request.delete(`${BASE_URL}/api${path}`);
+        },
+      };
     }
   }
   throw new Error("no Schwarzschild scenario with a segment protocol found: is the demo data seeded (npm run db:seed)?");
@@ -241,6 +258,20 @@ async function showSweep(page: Page): Promise<void> {
   await page.getByTestId("sweep-chart").locator("svg").first().waitFor({ timeout: 60_000 });
 }
 
+/** Both drags on the scenario at `path`, printed. */
+async function benchScenario(page: Page, scenario: { path: string; title: string }, slowdown: number): Promise<void> {
+  await page.goto(`${BASE_URL}${scenario.path}`);
+  await page.getByTestId("lab-view").waitFor();
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send("Performance.enable");
+  if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });
+  const header = `scenario: a copy of "${scenario.title}" at ${BASE_URL}${slowdown > 1 ? `, CPU slowed ${slowdown}× (BRANCH_CPU_SLOWDOWN)` : ""}`;
+  const plain = await measuredDrag(page, cdp, "drag with the editor as it opens");
+  await showSweep(page);
+  const withSweep = await measuredDrag(page, cdp, "drag with a sweep's chart shown");
+  console.log([header, ...plain.lines, ...withSweep.lines].join("\n"));
+}
+
 async function main(): Promise<void> {
   const slowdown = Number(process.env.BRANCH_CPU_SLOWDOWN ?? 1);
   if (!(slowdown >= 1)) throw new Error(`BRANCH_CPU_SLOWDOWN must be a number ≥ 1 (got "${process.env.BRANCH_CPU_SLOWDOWN}")`);
@@ -248,19 +279,12 @@ async function main(): Promise<void> {
   try {
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
     await signIn(page);
-    const scenario = await horizonScenarioPath(page);
-    await page.goto(`${BASE_URL}${scenario.path}`);
-    await page.getByTestId("lab-view").waitFor();
-    const cdp = await page.context().newCDPSession(page);
-    await cdp.send("Performance.enable");
-    if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });
-    const header = [
-      `scenario: "${scenario.title}" at ${BASE_URL}${slowdown > 1 ? `, CPU slowed ${slowdown}× (BRANCH_CPU_SLOWDOWN)` : ""}`,
-    ];
-    const plain = await measuredDrag(page, cdp, "drag with the editor as it opens");
-    await showSweep(page);
-    const withSweep = await measuredDrag(page, cdp, "drag with a sweep's chart shown");
-    console.log([...header, ...plain.lines, ...withSweep.lines].join("\n"));
+    const scenario = await benchCopyOfHorizonScenario(page);
+    try {
+      await benchScenario(page, scenario, slowdown);
+    } finally {
+      await scenario.remove();
+    }
   } finally {
     await browser.close();
   }

@@ -15,28 +15,29 @@
  * database): BRANCH_URL=http://localhost:3000 npx tsx tests/bench/editor-browser.ts (that URL is the default).
  * `npm run bench` runs it too when BRANCH_URL is set, and skips it otherwise.
  *
- * Seen on this machine (2 cores, headless Chromium with --disable-gpu, `next start` of a production build, the seeded
- * "Lab hovering outside a 10 M☉ black hole"), with other engineers' builds running beside it (load average 5–8), two
- * runs a minute apart:
- *   frame time: p50 16.7 ms, p95 50.0 ms, p99 83.4 ms, max 100.0 ms (101 frames, 27 past 25 ms);
- *     long tasks 4, longest 77 ms; budget round trip (27 recomputes) p50 75.2 ms, p95 153.4 ms, max 159.3 ms
- *   frame time: p50 16.8 ms, p95 150.0 ms, p99 200.0 ms, max 200.0 ms (45 frames, 22 past 25 ms);
- *     long tasks 8, longest 91 ms; budget round trip (20 recomputes) p50 105.0 ms, p95 189.0 ms, max 194.3 ms
- *   target p95 ≤ 16 ms: NOT met in either. Chromium coalesces the 119 moves sent to one per frame it draws (42–47).
- * The worker's computation itself takes about 1 ms (tests/bench/editor-frames.ts), so the round trip is mostly the
- * answer waiting for a busy main thread; a CPU profile of the drag put about 44 % of main-thread samples outside
- * JavaScript (style, layout, paint and software raster of the two canvases), the rest spread over React and Konva.
- * Later, on a quiet machine (load average about 1), with the Diagram drawn in stacked layers of which a drag redraws
- * only the protocol's: p50 16.7–33.3 ms, p95 50–83 ms; round trip p50 41–60 ms. With the Diagram hidden (CSS) the
- * same drag gives p50 16.7 ms, p95 33.4 ms: drawing the Diagram is about half of each frame. With each editor panel's
- * layout and style contained and the closed Export menu no longer following edits: p50 16.7–33 ms, p95 50–67 ms,
- * round trip p50 38–46 ms (three runs). Still NOT met. A profile of those runs: about 40 % of the main thread is the
- * browser's own style, layout, paint and compositing (software, --disable-gpu), React's render and commit about 25 %,
- * Konva's drawing 7 %, our own code (figure, scene, panels) under 10 %. With the Budget, the Protocol strip and the
- * handle fields shown from deferred values (React draws the canvases first): p50 16.7–33 ms, p95 33–50 ms, round
- * trip p50 47–55 ms (three runs). With every panel but the Lab view hidden (CSS, an experiment) p95 is 16.7–33 ms:
- * on this machine the target is near the floor of software rendering.
- * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag.
+ * Seen on an earlier machine of this kind (2 cores, headless Chromium with --disable-gpu, `next start` of a production
+ * build, the seeded "Lab hovering outside a 10 M☉ black hole"), before the work below: p95 50–150 ms, the worker's
+ * round trip p50 75–105 ms (the worker's own computation is about 1 ms, tests/bench/editor-frames.ts: the answer
+ * waited for a busy main thread). What brought it down, in order: the Diagram drawn in stacked layers of which a drag
+ * redraws only the protocol's; each panel's layout and style contained; the closed Export menu following no edits;
+ * the panels around the canvases shown from deferred values; the Sweep's chart drawn again only for a new sweep (its
+ * "now" marker follows the store by itself: with a chart shown p95 had been 50 ms); both stages subscribing to the
+ * store from inside react-konva (a drag no longer re-renders the Stage and the page around it); the Diagram's
+ * backdrop laid out once per background and size; the deferred panels as memoized views; and the Budget, Protocol
+ * strip, handle fields and Sweep following a drag ten times a second on one shared tick (components/editor/
+ * usePacedDuringDrag.ts; freezing them altogether during a drag, an experiment, gave 10 ms of main-thread work a
+ * frame, so they had cost about 5 ms a frame).
+ *
+ * Seen on this machine (2 cores, AMD EPYC, same build and scenario), 2026-12-03, seven runs of both drags with the
+ * code as it is: frame time p50 16.7 ms and p95 16.7–16.8 ms in 13 of the 14 drags (the other: p95 33.4 ms, in the
+ * first run after a rebuild); p99 16.8–33.3 ms, 0–2 frames of ~130 past 25 ms; main thread busy 11.6–14.6 ms a frame;
+ * worker round trip p50 8.4–15 ms, p95 16–45 ms. Target p95 ≤ 16 ms: met. Before the last three steps the same
+ * bench missed in two drags of six (p95 33 ms, busy 15–16 ms a frame). With BRANCH_CPU_SLOWDOWN=2 (the page's CPU
+ * halved): p95 33 ms, NOT met, busy 17–19 ms a frame: the headroom here is well under a factor of two. About 40 % of
+ * the main thread is the browser's own style, layout, paint and compositing in software (--disable-gpu); the rest is
+ * React, Konva and the store.
+ * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag; BRANCH_CPU_SLOWDOWN=N (≥ 1)
+ * slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */
 import { chromium, type CDPSession, type Page } from "@playwright/test";
 

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Browser, type Page } from "@playwright/test";
 import { blackHoleScenario, signedInAs } from "./helpers";
 
 const editorPath = (projectId: string, scenarioId: string) => `/projects/${projectId}/scenarios/${scenarioId}`;
@@ -23,13 +23,18 @@ async function dragHandle(page: Page, handle: string, dx: number) {
   await page.mouse.up();
 }
 
-test("dragging the recombination handle trades far-field for horizon quanta; undo, saving and reload keep the numbers; a viewer gets no handles", async ({ browser }) => {
+/** A researcher of our own in a new project with one scenario, signed in; `scenarioIn` adds another to that project. */
+async function ownerWithScenario(browser: Browser, who: string, projectName: string, title: string, document: object = blackHoleScenario()) {
   const stamp = Date.now();
-  const owner = await signedInAs(browser, "Editor Owner", `editor-owner-${stamp}@example.test`);
-  const project = (await (await owner.request.post("/api/projects", { data: { name: "Horizon budget" } })).json()).project;
-  const scenario = (
-    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()
-  ).scenario;
+  const owner = await signedInAs(browser, `${who} Owner`, `${who.toLowerCase()}-owner-${stamp}@example.test`);
+  const project = (await (await owner.request.post("/api/projects", { data: { name: projectName } })).json()).project as { id: string };
+  const scenarioIn = async (scenarioTitle: string, scenarioDocument: object) =>
+    (await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: scenarioTitle, document: scenarioDocument } })).json()).scenario as { id: string; version: number };
+  return { stamp, owner, project, scenario: await scenarioIn(title, document), scenarioIn };
+}
+
+test("dragging the recombination handle trades far-field for horizon quanta; undo, saving and reload keep the numbers; a viewer gets no handles", async ({ browser }) => {
+  const { stamp, owner, project, scenario } = await ownerWithScenario(browser, "Editor", "Horizon budget", "Hovering lab");
 
   await owner.goto(editorPath(project.id, scenario.id));
   await expect(owner.getByTestId("lab-view")).toBeVisible();
@@ -70,12 +75,7 @@ test("dragging the recombination handle trades far-field for horizon quanta; und
 });
 
 test("a save that meets someone else's newer version asks what to do, and keeping mine makes a new scenario without touching theirs", async ({ browser }) => {
-  const stamp = Date.now();
-  const owner = await signedInAs(browser, "Conflict Owner", `conflict-owner-${stamp}@example.test`);
-  const project = (await (await owner.request.post("/api/projects", { data: { name: "Conflicts" } })).json()).project;
-  const scenario = (
-    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Shared lab", document: blackHoleScenario() } })).json()
-  ).scenario;
+  const { owner, project, scenario } = await ownerWithScenario(browser, "Conflict", "Conflicts", "Shared lab");
   await owner.goto(editorPath(project.id, scenario.id));
   await expect(owner.getByTestId("lab-view")).toBeVisible();
 
@@ -99,12 +99,7 @@ test("a save that meets someone else's newer version asks what to do, and keepin
 });
 
 test("the keyboard walks the Lab view's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
-  const stamp = Date.now();
-  const owner = await signedInAs(browser, "Keyboard Owner", `keyboard-owner-${stamp}@example.test`);
-  const project = (await (await owner.request.post("/api/projects", { data: { name: "Keyboard and formulas" } })).json()).project;
-  const segments = (
-    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Hovering lab", document: blackHoleScenario() } })).json()
-  ).scenario;
+  const { owner, project, scenario: segments, scenarioIn } = await ownerWithScenario(browser, "Keyboard", "Keyboard and formulas", "Hovering lab");
 
   await owner.goto(editorPath(project.id, segments.id));
   const lab = owner.getByTestId("lab-view");
@@ -123,9 +118,7 @@ test("the keyboard walks the Lab view's handles in protocol order, naming each, 
   await expect(lab).toHaveAttribute("data-selected", "");
 
   const formulaDocument = { ...blackHoleScenario(), protocol: { kind: "formula", expression: "sin(pi * t / 0.4)^2", durationSeconds: 0.4 } };
-  const formula = (
-    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Formula lab", document: formulaDocument } })).json()
-  ).scenario;
+  const formula = await scenarioIn("Formula lab", formulaDocument);
   await owner.goto(editorPath(project.id, formula.id));
   const expression = owner.getByTestId("formula-expression");
   const first = await currentBudget(owner);
@@ -147,12 +140,7 @@ test("the keyboard walks the Lab view's handles in protocol order, naming each, 
 });
 
 test("a sweep of the recombination time marks the scenario's value, follows a drag without re-running, and a click on a point sets it in one undo step", async ({ browser }) => {
-  const stamp = Date.now();
-  const owner = await signedInAs(browser, "Sweep Owner", `sweep-owner-${stamp}@example.test`);
-  const project = (await (await owner.request.post("/api/projects", { data: { name: "Sweeps" } })).json()).project;
-  const scenario = (
-    await (await owner.request.post(`/api/projects/${project.id}/scenarios`, { data: { title: "Swept lab", document: blackHoleScenario() } })).json()
-  ).scenario;
+  const { owner, project, scenario } = await ownerWithScenario(browser, "Sweep", "Sweeps", "Swept lab");
   await owner.goto(editorPath(project.id, scenario.id));
   await expect(owner.getByTestId("lab-view")).toBeVisible();
   await currentBudget(owner);

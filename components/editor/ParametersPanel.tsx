@@ -112,9 +112,30 @@ const PLACEMENT_WORDS: Record<BackgroundKind, Partial<Record<LabPlacement["place
   "de-sitter": { inertial: "at the centre", "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance inward from the horizon" },
 };
 
+/**
+ * The lab's acceleration, redshift and local temperature from the latest Budget. Each is read as a number, so a new
+ * Budget every frame of a drag (a new summary object, the same values) re-renders nothing here.
+ */
+function LabSummary() {
+  const computed = useEditor((s) => s.budget.result !== null);
+  const acceleration = useEditor((s) => s.budget.result?.background.labProperAcceleration.value ?? null);
+  const redshift = useEditor((s) => s.budget.result?.background.labRedshiftFactor.value ?? null);
+  const temperature = useEditor((s) => s.budget.result?.background.labLocalTemperature.value ?? null);
+  if (!computed) return null;
+  return (
+    <dl className="grid grid-cols-2 gap-x-3 gap-y-0.5 text-xs text-ink-soft">
+      <dt>Lab acceleration</dt>
+      <dd className="tabular">{acceleration === null ? "—" : formatQuantity(acceleration, "acceleration")}</dd>
+      <dt>Redshift factor</dt>
+      <dd className="tabular">{redshift === null ? "—" : compactNumber(redshift)}</dd>
+      <dt>Local temperature</dt>
+      <dd className="tabular">{temperature === null ? "—" : `${compactNumber(temperature)} K`}</dd>
+    </dl>
+  );
+}
+
 function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
-  const summary = useEditor((s) => s.budget.result?.background ?? null);
   const placements = PLACEMENT_WORDS[document.background.kind];
   const lab = document.lab;
   return (
@@ -157,16 +178,7 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
           onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: l } }))}
         />
       )}
-      {summary && (
-        <dl className="grid grid-cols-2 gap-x-3 gap-y-0.5 text-xs text-ink-soft">
-          <dt>Lab acceleration</dt>
-          <dd className="tabular">{summary.labProperAcceleration.value === null ? "—" : formatQuantity(summary.labProperAcceleration.value, "acceleration")}</dd>
-          <dt>Redshift factor</dt>
-          <dd className="tabular">{summary.labRedshiftFactor.value === null ? "—" : compactNumber(summary.labRedshiftFactor.value)}</dd>
-          <dt>Local temperature</dt>
-          <dd className="tabular">{summary.labLocalTemperature.value === null ? "—" : `${compactNumber(summary.labLocalTemperature.value)} K`}</dd>
-        </dl>
-      )}
+      <LabSummary />
     </Group>
   );
 }

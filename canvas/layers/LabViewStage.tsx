@@ -7,18 +7,18 @@
  * (a ring marks the one selected while the view has focus, and a live line names it with its value), arrow keys
  * nudge it, Escape lets it go.
  */
-import { useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { memo, useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { compactQuantity } from "../kernels/diagram/labels";
-import { boundaryTicks, offsetTicks, staggerTimeLabels, timeAxisTitleSide } from "../kernels/lab-view/axis-ticks";
+import { boundaryTicks, offsetTicks, staggerTimeLabels, timeAxisTitleSide, type Tick } from "../kernels/lab-view/axis-ticks";
 import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/lab-view/handles";
-import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport } from "../kernels/lab-view/viewport";
+import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport, type PlotRect } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
 import { profilePaths } from "../kernels/profile";
 import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
-import { useFigureFonts } from "./useFigureFonts";
+import { useFigureFonts, type FigureFonts } from "./useFigureFonts";
 
 function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separation: Parameters<typeof branchOffsetsMetres>[0], origin: number) {
   const times = segmentTimes(protocol, origin);
@@ -68,26 +68,69 @@ function selectionWords(handle: HandleId | null, protocol: SegmentsProtocol | nu
   return `${HANDLE_WORDS[handle]} selected: ${value}${isTimeHandle(handle) ? " from the start of the separation" : ""}.`;
 }
 
-function Handle({ handle, viewport, palette, state }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette; state: "plain" | "hover" | "selected" }) {
+/** A handle: a grip on a rule across the plot (an instant), or a point with arrows (the separation). Memoized on values. */
+const Handle = memo(function Handle({
+  axis,
+  x,
+  y,
+  plotTop,
+  plotBottom,
+  palette,
+  state,
+}: {
+  axis: HandlePlacement["axis"];
+  x: number;
+  /** The point's height (the separation handle); unused for an instant. */
+  y: number;
+  plotTop: number;
+  plotBottom: number;
+  palette: FigurePalette;
+  state: "plain" | "hover" | "selected";
+}) {
   const colour = state === "selected" ? palette.focus : state === "hover" ? palette.ink : palette.inkSoft;
-  const { plot } = viewport;
-  if (handle.axis === "distance") {
+  if (axis === "distance") {
     return (
       <Group>
-        <Circle x={handle.x} y={handle.y} radius={state === "plain" ? 5.5 : 7} fill={palette.paper} stroke={colour} strokeWidth={2} />
-        <Line points={[handle.x, handle.y - 13, handle.x - 3, handle.y - 9, handle.x + 3, handle.y - 9]} closed fill={colour} />
-        <Line points={[handle.x, handle.y + 13, handle.x - 3, handle.y + 9, handle.x + 3, handle.y + 9]} closed fill={colour} />
+        <Circle x={x} y={y} radius={state === "plain" ? 5.5 : 7} fill={palette.paper} stroke={colour} strokeWidth={2} />
+        <Line points={[x, y - 13, x - 3, y - 9, x + 3, y - 9]} closed fill={colour} />
+        <Line points={[x, y + 13, x - 3, y + 9, x + 3, y + 9]} closed fill={colour} />
       </Group>
     );
   }
-  const bottom = plot.top + plot.height;
   return (
     <Group>
-      <Line points={[handle.x, plot.top, handle.x, bottom]} stroke={colour} strokeWidth={state === "plain" ? 1 : 1.5} dash={state === "plain" ? [3, 3] : []} />
-      <Rect x={handle.x - 4.5} y={bottom - 7} width={9} height={14} cornerRadius={2} fill={palette.paper} stroke={colour} strokeWidth={state === "plain" ? 1.25 : 2} />
+      <Line points={[x, plotTop, x, plotBottom]} stroke={colour} strokeWidth={state === "plain" ? 1 : 1.5} dash={state === "plain" ? [3, 3] : []} />
+      <Rect x={x - 4.5} y={plotBottom - 7} width={9} height={14} cornerRadius={2} fill={palette.paper} stroke={colour} strokeWidth={state === "plain" ? 1.25 : 2} />
     </Group>
   );
-}
+});
+
+const samePlot = (a: PlotRect, b: PlotRect) => a.left === b.left && a.top === b.top && a.width === b.width && a.height === b.height;
+const sameTicks = (a: Tick[], b: Tick[]) => a.length === b.length && a.every((t, i) => t.px === b[i].px && t.valueSI === b[i].valueSI);
+
+/**
+ * The offset axis (grid lines and labels), the zero line, the axes' frame and the offset axis' title: what a drag of
+ * an instant leaves as it was. Memoized on values, so react-konva does not touch these nodes on such a drag.
+ */
+const OffsetAxis = memo(
+  function OffsetAxis({ plot, ticks, zeroY, title, palette, fonts }: { plot: PlotRect; ticks: Tick[]; zeroY: number; title: string; palette: FigurePalette; fonts: FigureFonts }) {
+    const bottom = plot.top + plot.height;
+    return (
+      <>
+        {ticks.map((t) => (
+          <Group key={t.valueSI}>
+            <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
+            <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} wrap="none" />
+          </Group>
+        ))}
+        <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
+        <Line points={[plot.left, plot.top, plot.left, bottom, plot.left + plot.width, bottom]} stroke={palette.ink} strokeWidth={1} />
+        <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={title} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
+      </>
+    );
+  },
+  (a, b) => samePlot(a.plot, b.plot) && sameTicks(a.ticks, b.ticks) && a.zeroY === b.zeroY && a.title === b.title && a.palette === b.palette && a.fonts === b.fonts,
+);
 
 type FocusMode = "none" | "pointer" | "keyboard";
 
@@ -133,14 +176,7 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
           </Group>
         );
       })}
-      {offsetTicks(viewport).map((t) => (
-        <Group key={t.valueSI}>
-          <Line points={[plot.left, t.px, plot.left + plot.width, t.px]} stroke={palette.rule} strokeWidth={t.valueSI === 0 ? 0 : 0.75} />
-          <Text x={0} y={t.px - 6} width={plot.left - 8} align="right" text={t.valueSI === 0 ? "0" : compactQuantity(t.valueSI, "length")} fontSize={11} fontFamily={fonts.mono} fill={palette.inkSoft} wrap="none" />
-        </Group>
-      ))}
-      <Line points={[plot.left, zeroY, plot.left + plot.width, zeroY]} stroke={palette.inkFaint} strokeWidth={1} />
-      <Line points={[plot.left, plot.top, plot.left, bottom, plot.left + plot.width, bottom]} stroke={palette.ink} strokeWidth={1} />
+      <OffsetAxis plot={plot} ticks={offsetTicks(viewport)} zeroY={zeroY} title={axisWords} palette={palette} fonts={fonts} />
       {scaleBreaksPx(viewport).map((x) => (
         <Group key={x}>
           <Line points={[x - 4, bottom + 4, x, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
@@ -171,11 +207,19 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
         fill={palette.inkFaint}
         wrap="none"
       />
-      <Text x={14} y={plot.top + plot.height / 2 + 80} rotation={-90} width={160} align="center" text={axisWords} fontSize={11} fontFamily={fonts.sans} fill={palette.inkFaint} wrap="none" />
       <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
       <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
       {handles.map((h) => (
-        <Handle key={h.id} handle={h} viewport={viewport} palette={palette} state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"} />
+        <Handle
+          key={h.id}
+          axis={h.axis}
+          x={h.x}
+          y={h.axis === "distance" ? h.y : 0}
+          plotTop={plot.top}
+          plotBottom={bottom}
+          palette={palette}
+          state={selection === h.id ? "selected" : hover === h.id ? "hover" : "plain"}
+        />
       ))}
       {focus !== "none" && selected && <FocusRing handle={selected} viewport={viewport} palette={palette} />}
       {/* The page's focus outline would sit under the canvas: the stage draws its own when focus came from the keyboard. */}

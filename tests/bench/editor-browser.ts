@@ -28,14 +28,15 @@
  * usePacedDuringDrag.ts; freezing them altogether during a drag, an experiment, gave 10 ms of main-thread work a
  * frame, so they had cost about 5 ms a frame).
  *
- * Seen on this machine (2 cores, AMD EPYC, same build and scenario), 2026-12-03, seven runs of both drags with the
- * code as it is: frame time p50 16.7 ms and p95 16.7–16.8 ms in 13 of the 14 drags (the other: p95 33.4 ms, in the
- * first run after a rebuild); p99 16.8–33.3 ms, 0–2 frames of ~130 past 25 ms; main thread busy 11.6–14.6 ms a frame;
- * worker round trip p50 8.4–15 ms, p95 16–45 ms. Target p95 ≤ 16 ms: met. Before the last three steps the same
- * bench missed in two drags of six (p95 33 ms, busy 15–16 ms a frame). With BRANCH_CPU_SLOWDOWN=2 (the page's CPU
- * halved): p95 33 ms, NOT met, busy 17–19 ms a frame: the headroom here is well under a factor of two. About 40 % of
- * the main thread is the browser's own style, layout, paint and compositing in software (--disable-gpu); the rest is
- * React, Konva and the store.
+ * Seen on this machine (2 cores, AMD EPYC, same build and scenario), 2026-12-03. Eleven runs of both drags since the
+ * pacing: frame time p50 16.7 ms and p95 16.7–16.8 ms in 21 of the 22 drags (the other: p95 33.4 ms, in the first run
+ * after a rebuild); p99 16.8–33.4 ms, 0–2 frames of ~130 past 25 ms; worker round trip p50 8–15 ms, p95 16–45 ms.
+ * Main thread busy 11.6–14.6 ms a frame, and 10–13 ms once the lab summary in the Parameters panel stopped
+ * re-rendering on every Budget answer. Target p95 ≤ 16 ms: met. Before the pacing the same bench missed in two drags
+ * of six (p95 33 ms, busy 15–16 ms a frame). With BRANCH_CPU_SLOWDOWN=2 (the page's CPU halved): p95 33 ms, NOT met,
+ * busy 16–17.5 ms a frame: the headroom here is well under a factor of two. About 40 % of the main thread is the
+ * browser's own style, layout, paint and compositing in software (--disable-gpu); the rest is React, Konva and the
+ * store.
  * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag; BRANCH_CPU_SLOWDOWN=N (≥ 1)
  * slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */

@@ -93,6 +93,9 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   await new Promise<void>((resolve) => slides.listen(0, "127.0.0.1", resolve));
   await outsider.goto(`http://127.0.0.1:${(slides.address() as AddressInfo).port}/`);
   const frame = outsider.frameLocator("iframe");
+  // Seen once in CI: the frame held two copies of the embed for a moment while the streamed page replaced its
+  // loading text. Wait for the one embed (a lasting second copy still fails here), then read it.
+  await expect(frame.getByTestId("embed")).toHaveCount(1, slow);
   await expect(frame.getByTestId("embed")).toHaveAttribute("data-theme", "dark", slow);
   const frameCanvas = frame.getByTestId("embed-diagram").locator("canvas").first();
   await expect(frameCanvas).toBeVisible(slow);

@@ -268,10 +268,22 @@ export default function LabViewStage({ width, height }: { width: number; height:
     return store.subscribe(write);
   }, [store, readable]);
 
-  // The stage's box is read once when a drag starts and kept until it ends: reading it on every move would make the
-  // browser lay the page out again right after each frame's changes (a forced layout per pointer move).
+  // The stage's box is read once when a drag starts and kept until it ends, or until the page scrolls or resizes:
+  // reading it on every move would make the browser lay the page out again right after each frame's changes.
   const dragBox = useRef<DOMRect | null>(null);
+  useEffect(() => {
+    const forget = () => {
+      dragBox.current = null;
+    };
+    window.addEventListener("scroll", forget, { capture: true, passive: true });
+    window.addEventListener("resize", forget, { passive: true });
+    return () => {
+      window.removeEventListener("scroll", forget, { capture: true });
+      window.removeEventListener("resize", forget);
+    };
+  }, []);
   const local = (event: PointerEvent) => {
+    if (store.getState().labTool.name === "dragging") dragBox.current ??= container.current!.getBoundingClientRect();
     const box = dragBox.current ?? container.current!.getBoundingClientRect();
     return { x: event.clientX - box.left, y: event.clientY - box.top, shiftKey: event.shiftKey };
   };

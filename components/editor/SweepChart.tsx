@@ -11,6 +11,7 @@ import type { SweepParameter } from "@/canvas/compute-client";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
 import { currentSweepValue } from "@/canvas/kernels/sweep-range";
+import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
 
 export interface SweepPoint {
@@ -28,9 +29,20 @@ export const dimensionOf = (parameter: SweepParameter) => (parameter === "lab-di
 
 const NOW_COLOUR = "#E69F00";
 
+/** The lab's distance builds a background: remembered for the last background and lab, read on every store change. */
+let lastLabDistance: { background: ScenarioDocument["background"]; lab: ScenarioDocument["lab"]; value: number | null } | null = null;
+
+function sweptValueNow(document: ScenarioDocument, parameter: SweepParameter): number | null {
+  if (parameter !== "lab-distance") return currentSweepValue(document, parameter);
+  if (lastLabDistance?.background !== document.background || lastLabDistance.lab !== document.lab) {
+    lastLabDistance = { background: document.background, lab: document.lab, value: currentSweepValue(document, parameter) };
+  }
+  return lastLabDistance.value;
+}
+
 /** A vertical rule at the scenario's current value of the swept parameter, where it falls inside the sweep. */
 function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: number; to: number }) {
-  const current = useEditor((s) => currentSweepValue(s.document, parameter));
+  const current = useEditor((s) => sweptValueNow(s.document, parameter));
   const scale = useXAxisScale();
   const plot = usePlotArea();
   if (current === null || !(current >= from && current <= to) || !scale || !plot) return null;

@@ -124,6 +124,10 @@ describe("the figure during a drag", () => {
     expect(afterOther).toEqual(afresh);
     expect(diagramFigure(minkowski, { width: 300, height: 300 }, FIGURE_PALETTES.light).viewport).not.toEqual(afresh.viewport);
     expect(diagramFigure(minkowski, size, FIGURE_PALETTES.dark).groups[0]).not.toEqual(afresh.groups[0]);
+    const labelSizes = (figure: ReturnType<typeof diagramFigure>) => figure.groups.find((g) => g.id === "labels")!.shapes.map((l) => (l.kind === "text" ? l.fontSize : 0));
+    expect(labelSizes(diagramFigure(minkowski, size, FIGURE_PALETTES.light, { labelScale: 1.5 }))).not.toEqual(labelSizes(afresh));
+    expect(diagramFigure(minkowski, size, FIGURE_PALETTES.light, { paperBackground: false }).groups[0].shapes).toEqual([]);
+    expect(diagramFigure(minkowski, size, FIGURE_PALETTES.light).groups[0].shapes).toHaveLength(1);
   });
 });
 

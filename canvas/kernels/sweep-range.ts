@@ -16,10 +16,15 @@ export function currentSweepValue(document: ScenarioDocument, parameter: SweepPa
     case "hold-time":
       return protocol.kind === "segments" ? protocol.hold.durationSeconds : null;
     case "lab-distance":
-      if (document.background.kind === "minkowski") return null;
-      if (document.background.kind === "rindler") return (c * c) / document.background.accelerationMetresPerSecondSquared;
-      return makeBackground(document.background, document.lab).labRadiusMetres || null;
+      return labDistanceMetres(document.background, document.lab);
   }
+}
+
+/** The lab's distance as a sweep takes it (c²/a in the Rindler wedge, the areal radius elsewhere), SI; null in flat space. */
+export function labDistanceMetres(background: ScenarioDocument["background"], lab: ScenarioDocument["lab"]): number | null {
+  if (background.kind === "minkowski") return null;
+  if (background.kind === "rindler") return (c * c) / background.accelerationMetresPerSecondSquared;
+  return makeBackground(background, lab).labRadiusMetres || null;
 }
 
 const DECADES = 100;

@@ -17,6 +17,7 @@ import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePl
 import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport, type PlotRect } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
 import { profilePaths } from "../kernels/profile";
+import type { EditorState } from "../store/state";
 import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
 import { useFigureFonts, type FigureFonts } from "./useFigureFonts";
 
@@ -229,14 +230,14 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
 }
 
 /** Where the pointer may grab: the cursor for the handle under it, or the one being dragged. */
-function cursorFor(state: Parameters<Parameters<typeof useEditor>[0]>[0]): string {
+function cursorFor(state: EditorState): string {
   if (state.labTool.name === "dragging") return "grabbing";
   const hovered = state.labView.handles(state).find((h) => h.id === state.hover);
   return hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
 }
 
 /** The handles' positions in stage pixels, for tests and benches that drive the view with a mouse. */
-function handlesAttribute(state: Parameters<Parameters<typeof useEditor>[0]>[0]): string {
+function handlesAttribute(state: EditorState): string {
   return JSON.stringify(state.labView.handles(state).map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })));
 }
 
@@ -291,7 +292,6 @@ export default function LabViewStage({ width, height }: { width: number; height:
     if (event.button !== 0) return;
     container.current?.focus();
     event.currentTarget.setPointerCapture(event.pointerId);
-    dragBox.current = container.current!.getBoundingClientRect();
     store.getState().labPointerDown(local(event));
   };
   const endDrag = () => {

@@ -5,7 +5,7 @@
  * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
  * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
  */
-import { memo, useDeferredValue } from "react";
+import { memo } from "react";
 import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { bothChannels } from "@/canvas/kernels/budget/both-channels";
@@ -15,7 +15,7 @@ import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/ph
 import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
 import { quantityText } from "./quantity-text";
-import { usePacedDuringDrag } from "./usePacedDuringDrag";
+import { usePanelValue } from "./usePacedDuringDrag";
 
 /** A Budget row: its number per channel and for both together (the physics' own where it has one, else the counts summed). */
 type Row = { key: string; words: string; of(channel: ChannelResult): Quantity | null; combined(result: ScenarioResult): Quantity | null };
@@ -79,11 +79,9 @@ function Flags({ flags }: { flags: ValidityFlag[] }) {
 }
 
 export function BudgetPanel() {
-  // Paced during a drag (ten times a second, usePacedDuringDrag) and deferred (both together), so the Diagram and the
-  // Lab view are drawn first; a settled Budget always shows the latest result and its true state. The table is a
-  // memoized view of these values, so the urgent render (which still has the old ones) is free.
-  const budget = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.budget)));
-  const stale = useDeferredValue(usePacedDuringDrag(useEditor((s) => budgetIsStale(s) || s.budget.status === "computing")));
+  // Both on the same pace tick: a settled Budget always shows the latest result and its true state.
+  const budget = usePanelValue((s) => s.budget);
+  const stale = usePanelValue((s) => budgetIsStale(s) || s.budget.status === "computing");
   return <BudgetView budget={budget} stale={stale} />;
 }
 

@@ -12,7 +12,7 @@ import { BranchLegend } from "./BranchLegend";
 import { QuantityField } from "./QuantityField";
 import { useEdit } from "./useEdit";
 import { useElementSize } from "./useElementSize";
-import { usePacedDuringDrag } from "./usePacedDuringDrag";
+import { usePanelValue } from "./usePacedDuringDrag";
 
 const LabViewStage = dynamic(() => import("@/canvas/layers/LabViewStage"), {
   ssr: false,
@@ -23,9 +23,7 @@ const HEIGHT = 300;
 
 /** Every handle can be typed into: instants on the lab's clock from the start of the separation, and the separation. */
 function HandleFields() {
-  // Paced during a drag (usePacedDuringDrag) and deferred: the Lab view is redrawn first and these fields when the
-  // frame has time. The fields are a memoized view of these values, so the urgent render is free.
-  const document = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.document)));
+  const document = usePanelValue((s) => s.document);
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useDeferredValue(useEditor((s) => s.selection));
   return <HandleFieldsView document={document} readOnly={readOnly} selection={selection} />;

@@ -14,7 +14,7 @@ import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/sc
 import { formatQuantity } from "@/physics/units";
 import { DraftField, QuantityField, type CommitResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
-import { usePacedDuringDrag } from "./usePacedDuringDrag";
+import { usePanelValue } from "./usePacedDuringDrag";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
   "minimum-jerk": "minimum jerk",
@@ -82,9 +82,7 @@ function StripHeading() {
 }
 
 export function ProtocolStrip() {
-  // Paced during a drag (usePacedDuringDrag) and deferred: the canvases are redrawn first and the strip when the
-  // frame has time (edits read the store). The strip is a memoized view of these values, so the urgent render is free.
-  const protocol = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.document.protocol)));
+  const protocol = usePanelValue((s) => s.document.protocol);
   const readOnly = useEditor((s) => s.readOnly);
   const selection = useDeferredValue(useEditor((s) => s.selection));
   return <ProtocolStripView protocol={protocol} readOnly={readOnly} selection={selection} />;

@@ -10,7 +10,8 @@ import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tool
 import type { SweepParameter } from "@/canvas/compute-client";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
-import { currentSweepValue } from "@/canvas/kernels/sweep-range";
+import { memoizeLast } from "@/canvas/kernels/memoize";
+import { currentSweepValue, labDistanceMetres } from "@/canvas/kernels/sweep-range";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
 
@@ -30,14 +31,10 @@ export const dimensionOf = (parameter: SweepParameter) => (parameter === "lab-di
 const NOW_COLOUR = "#E69F00";
 
 /** The lab's distance builds a background: remembered for the last background and lab, read on every store change. */
-let lastLabDistance: { background: ScenarioDocument["background"]; lab: ScenarioDocument["lab"]; value: number | null } | null = null;
+const rememberedLabDistance = memoizeLast(labDistanceMetres);
 
 function sweptValueNow(document: ScenarioDocument, parameter: SweepParameter): number | null {
-  if (parameter !== "lab-distance") return currentSweepValue(document, parameter);
-  if (lastLabDistance?.background !== document.background || lastLabDistance.lab !== document.lab) {
-    lastLabDistance = { background: document.background, lab: document.lab, value: currentSweepValue(document, parameter) };
-  }
-  return lastLabDistance.value;
+  return parameter === "lab-distance" ? rememberedLabDistance(document.background, document.lab) : currentSweepValue(document, parameter);
 }
 
 /** A vertical rule at the scenario's current value of the swept parameter, where it falls inside the sweep. */
@@ -60,18 +57,20 @@ function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: n
 
 export const SweepChart = memo(function SweepChart({
   data,
+  best,
   parameter,
   readOnly,
   onPick,
 }: {
   data: SweepPoint[];
+  /** The point of smallest decoherence, marked. */
+  best: SweepPoint | null;
   parameter: SweepParameter;
   readOnly: boolean;
   /** A point of the sweep was clicked: its parameter value, SI. */
   onPick(x: number): void;
 }) {
   const dimension = dimensionOf(parameter);
-  const best = data.reduce<SweepPoint | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null);
   return (
     <ResponsiveContainer width="100%" height="100%">
       <LineChart

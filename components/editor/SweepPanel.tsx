@@ -5,7 +5,7 @@
  * computed on a worker of its own. The current value and the sweep's smallest decoherence are marked; clicking a
  * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
  */
-import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from "react";
+import { memo, useCallback, useEffect, useMemo, useState } from "react";
 import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
@@ -20,7 +20,7 @@ import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
 import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
 import { useEdit } from "./useEdit";
-import { usePacedDuringDrag } from "./usePacedDuringDrag";
+import { usePanelValue } from "./usePacedDuringDrag";
 
 const POINTS = 41;
 /** A sweep quicker than this shows no progress bar. */
@@ -43,11 +43,9 @@ function useShowAfter(active: boolean, ms: number): boolean {
 }
 
 export function SweepPanel() {
-  // Paced during a drag (usePacedDuringDrag) and deferred: the canvases are redrawn first, and the range fields and
-  // the stale mark when the frame has time. The panel is a memoized view of these values, so the urgent render is
-  // free; the chart's "now" marker follows the store by itself.
-  const document = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.document)));
-  const revision = useDeferredValue(usePacedDuringDrag(useEditor((s) => s.revision)));
+  // The chart's "now" marker follows the store by itself (SweepChart).
+  const document = usePanelValue((s) => s.document);
+  const revision = usePanelValue((s) => s.revision);
   return <SweepView document={document} revision={revision} />;
 }
 
@@ -105,7 +103,7 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         .filter((p): p is SweepPoint => p.decoherence !== null && p.decoherence > 0),
     [sweep.result],
   );
-  const best = data.reduce<SweepPoint | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null);
+  const best = useMemo(() => data.reduce<SweepPoint | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null), [data]);
   const stale = sweep.result !== null && sweep.requestRevision !== revision;
   const setTo = useCallback((x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x)), [edit, parameter]);
 
@@ -202,7 +200,7 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
             </p>
           )}
           <div className="mt-3 h-64 w-full" data-testid="sweep-chart">
-            <SweepChart data={data} parameter={parameter} readOnly={readOnly} onPick={setTo} />
+            <SweepChart data={data} best={best} parameter={parameter} readOnly={readOnly} onPick={setTo} />
           </div>
           {best && (
             <p className="mt-1 text-xs text-ink-soft">

@@ -8,9 +8,10 @@
  * as the two canvases; ten times a second is as fast as anyone reads a changing number (common practice for live
  * readouts), and it leaves each frame to the Diagram and the Lab view.
  */
-import { useState, useSyncExternalStore } from "react";
+import { useDeferredValue, useState, useSyncExternalStore } from "react";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import type { EditorStore } from "@/canvas/store/createEditorStore";
+import type { EditorState } from "@/canvas/store/state";
 import { createPaceClock, type PaceClock } from "@/canvas/store/pace-clock";
 
 export const DRAG_PACE_MS = 100;
@@ -33,4 +34,13 @@ export function usePacedDuringDrag<T>(value: T): T {
   // keeps up, so that a drag starts from what was shown; dragging, it is taken again at each new tick.
   if (dragging ? held.tick !== tick : !Object.is(held.value, value) || held.tick !== tick) setHeld({ tick, value });
   return dragging ? held.value : value;
+}
+
+/**
+ * What a panel beside the canvases shows of the editor: paced during a drag (above) and deferred, so the Diagram and
+ * the Lab view are drawn first. A panel renders a memoized view of these values, so its urgent render (which still
+ * has the old ones) is free; edits read the store, not these values.
+ */
+export function usePanelValue<T>(selector: (state: EditorState) => T): T {
+  return useDeferredValue(usePacedDuringDrag(useEditor(selector)));
 }

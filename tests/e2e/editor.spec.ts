@@ -194,3 +194,19 @@ test("a sweep of the recombination time marks the scenario's value, follows a dr
   await owner.getByRole("button", { name: /^Undo/ }).click();
   await expect(recombination).toHaveValue(before);
 });
+
+test("the lab's mass is typed with its unit, saved, and cleared by emptying the field", async ({ browser }) => {
+  const { owner, project, scenario } = await ownerWithScenario(browser, "Recoil", "Recoil", "Light lab");
+  await owner.goto(editorPath(project.id, scenario.id));
+  const labMass = owner.getByTestId("lab-mass");
+  await expect(labMass).toHaveValue("");
+  await labMass.fill("2.5 g");
+  await labMass.press("Enter");
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 1}`);
+  const stored = async () => (await (await owner.request.get(`/api/projects/${project.id}/scenarios/${scenario.id}`)).json()).scenario.document.source.labMassKg;
+  expect(await stored()).toBeCloseTo(2.5e-3, 12);
+  await labMass.fill("");
+  await labMass.press("Enter");
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 2}`);
+  expect(await stored()).toBeNull();
+});

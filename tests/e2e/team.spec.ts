@@ -68,6 +68,7 @@ test("an owner invites a viewer by e-mail, who signs up from the link and may lo
   await expect(viewer.getByRole("heading", { name: "Join “Referee copy”" })).toBeVisible(slow);
   await viewer.getByRole("link", { name: "Create an account" }).click();
   await expect(viewer).toHaveURL(/\/sign-up\?callbackUrl=/, slow);
+  await expect(viewer.getByLabel("E-mail")).toHaveValue(viewerEmail);
   await fillSignUp(viewer, "Invited Referee", viewerEmail);
   await expect(viewer).toHaveURL(/\/invitations\//, slow);
   await hydrated(viewer);

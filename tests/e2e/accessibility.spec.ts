@@ -1,5 +1,4 @@
 import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
 import { expect, test, type Page } from "@playwright/test";
 import { blackHoleScenario, hydrated, signedInAs } from "./helpers";
 
@@ -8,7 +7,7 @@ import { blackHoleScenario, hydrated, signedInAs } from "./helpers";
  * no serious or critical violation. The engine is evaluated in the page through the DevTools protocol, so the
  * page's own Content-Security-Policy is left as it is.
  */
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+const axeSource = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
 
 interface AxeViolation {
   id: string;
@@ -30,6 +29,7 @@ async function seriousViolations(page: Page): Promise<string[]> {
 }
 
 test("every main page passes axe-core's WCAG 2 A and AA rules with no serious or critical violation", async ({ browser }) => {
+  test.setTimeout(480_000); // nine pages, each read whole by the engine
   const stamp = Date.now();
   const owner = await signedInAs(browser, "Access Owner", `access-owner-${stamp}@example.test`);
   const project = (await (await owner.request.post("/api/projects", { data: { name: "Readable pages" } })).json()).project as { id: string };

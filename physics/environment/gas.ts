@@ -6,9 +6,10 @@
  * off a heavy sphere is isotropic, with total cross-section σ = πR², and the incoming directions are isotropic,
  * so averaging e^{i(p_in − p_out)·Δx/ħ} over both independent directions gives sinc²(pΔx/ħ), and
  *
- *   F(Δx) = n σ ⟨v (1 − sinc²(m v Δx/ħ))⟩_Maxwell,   n = P/(k_B T),
+ *   F(Δx) = n σ ⟨v (1 − sinc²(m v Δx/ħ))⟩_Maxwell = γ (1 − D(κ)/κ),   n = P/(k_B T),   κ = Δx√(2mk_BT)/ħ,
  *
- * which joins the two published limits exactly (this form is the one evaluated, at every Δx):
+ * with D Dawson's integral (gasDecoherenceFunction), which joins the two published limits exactly; this form is
+ * the one evaluated, at every Δx:
  *   long wavelength (Δx ≪ λ_th):  F = Λ Δx²,  Λ = (8/3ħ²) P √(2π m k_B T) R²
  *     (E. Joos & H. D. Zeh, Z. Phys. B 59, 223 (1985); M. Schlosshauer, Decoherence and the Quantum-to-Classical
  *     Transition (Springer 2007), ch. 3, eq. for Λ_air; O. Romero-Isart, PRA 84, 052121 (2011));
@@ -19,18 +20,17 @@
  * Approximations: an ideal gas in thermal equilibrium, the body at rest and much heavier than a molecule, the
  * classical geometric cross-section (a quantum hard sphere's 2πR² includes a forward diffraction peak that
  * transfers no momentum; K. Hornberger & J. E. Sipe, PRA 68, 012105 (2003) give the exact quantum treatment, which
- * corrects older rates by a factor 2π), isotropic scattering (exact for hard
- * spheres; real surfaces accommodate and re-emit, which changes the crossover's shape, not its limits).
+ * corrects older rates by a factor 2π), isotropic scattering (exact for hard spheres; real surfaces accommodate and re-emit, which changes the crossover's shape, not its limits).
  * Flags: the regime; small bodies, where the van der Waals (C₆) cross-section replaces the geometric one
  * (L. Hackermüller et al., Appl. Phys. B 77, 781 (2003), quant-ph/0307238).
  */
 import { hbar, kB } from "../constants";
-import { integrateGaussLegendre } from "../spectra/gauss-legendre";
 import type { ValidityFlag } from "../result";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import { gasSpecies, molecularMassKg, type GasSpecies } from "./species";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
-import { oneMinusSincSquared, regimeOf } from "./which-path";
+import { oneMinusDawsonOverX } from "./special-functions";
+import { regimeOf } from "./which-path";
 
 export interface GasParameters {
   pressurePascals: number;
@@ -60,24 +60,17 @@ export function gasRates(p: GasParameters): GasRates {
   };
 }
 
-/** The Maxwell speed variable u = v/v_p (v_p = √(2k_BT/m)) is integrated over [0, 6.5] (weight e^{−42} beyond). */
-const SPEED_PANELS = 13;
-const SPEED_LIMIT = 6.5;
-
-/** F(Δx) = γ · 2∫₀^∞ u³ e^{−u²} (1 − sinc²(κu)) du, κ = Δx √(2mk_BT)/ħ; s⁻¹. */
+/**
+ * F(Δx) = γ · 2∫₀^∞ u³ e^{−u²} (1 − sinc²(κu)) du = γ (1 − D(κ)/κ), κ = Δx √(2mk_BT)/ħ, u = v/√(2k_BT/m), with D
+ * Dawson's integral: sin² = (1 − cos)/2 and ∫₀^∞ u e^{−u²} cos(2κu) du = ½ − κD(κ) (derived here; the tests check it
+ * against the Maxwell average by quadrature). s⁻¹.
+ */
 export function gasDecoherenceFunction(p: GasParameters): (separationMetres: number) => number {
   const { collisionRate } = gasRates(p);
   const momentumScale = Math.sqrt(2 * molecularMassKg(p.species) * kB * p.temperatureKelvin) / hbar;
   return (separationMetres) => {
     const kappa = Math.abs(separationMetres) * momentumScale;
-    if (kappa === 0) return 0;
-    let integral = 0;
-    for (let k = 0; k < SPEED_PANELS; k++) {
-      const a = (k * SPEED_LIMIT) / SPEED_PANELS;
-      const b = ((k + 1) * SPEED_LIMIT) / SPEED_PANELS;
-      integral += integrateGaussLegendre((u) => u ** 3 * Math.exp(-u * u) * oneMinusSincSquared(kappa * u), a, b, 16);
-    }
-    return collisionRate * 2 * integral;
+    return kappa === 0 ? 0 : collisionRate * oneMinusDawsonOverX(kappa);
   };
 }
 

@@ -9,7 +9,7 @@
  * isotropic directions these give 1 − sinc²(kΔx) and 1 − sinc(kΔx). The decoherence functions evaluated, at
  * every Δx, are
  *   F_sc(Δx)  = c ∫dk n(k) σ_sc(k) (1 − sinc²(kΔx)),   F_abs(Δx) = c ∫dk n(k) σ_abs(k) (1 − sinc(kΔx)),
- * whose limits are the published rates:
+ * in closed form through the Bose sums of special-functions.ts, whose limits are the published rates:
  *   long wavelength (Δx ≪ ħc/k_BT): Λ_sc = 8!·8ζ(9) c R⁶ |χ|² (k_BT/ħc)⁹ / (9π)  (E. Joos & H. D. Zeh, Z. Phys. B
  *     59, 223 (1985); M. Schlosshauer (2007) ch. 3, with χ = 1 there), Λ_abs = 16π⁵ c R³ Im χ (k_BT/ħc)⁶ / 189,
  *     emission the same at T_int (O. Romero-Isart, PRA 84, 052121 (2011));
@@ -22,12 +22,12 @@
  * magnetic dipole is left out, as in Joos & Zeh (flagged).
  */
 import { c, hbar, kB } from "../constants";
-import { integrateGaussLegendre } from "../spectra/gauss-legendre";
 import type { FlagStatus, ValidityFlag } from "../result";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import { clausiusMossotti, type Permittivity } from "./materials";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
-import { oneMinusSinc, oneMinusSincSquared, regimeOf } from "./which-path";
+import { boseSum, riemannZeta } from "./special-functions";
+import { regimeOf } from "./which-path";
 
 export interface ThermalParameters {
   bodyRadiusMetres: number;
@@ -39,15 +39,11 @@ export interface ThermalParameters {
   internalTemperatureKelvin: number;
 }
 
-/** ζ(s) for s ≥ 2 by direct summation with the Euler–Maclaurin tail ∫_N^∞ + ½N^{−s} (common practice). */
-export function riemannZeta(s: number): number {
-  const N = 64;
-  let sum = 0;
-  for (let n = 1; n < N; n++) sum += n ** -s;
-  return sum + N ** (1 - s) / (s - 1) + 0.5 * N ** -s + (s / 12) * N ** (-s - 1);
-}
-
 const FACTORIAL_8 = 40320;
+const ZETA_4 = riemannZeta(4);
+const ZETA_5 = riemannZeta(5);
+const ZETA_7 = riemannZeta(7);
+const ZETA_9 = riemannZeta(9);
 
 export interface ThermalRates {
   scatteringLocalisationRate: number;
@@ -63,35 +59,67 @@ export function thermalRates(bodyRadiusMetres: number, permittivity: Permittivit
   const R3 = bodyRadiusMetres ** 3;
   const R6 = R3 * R3;
   return {
-    scatteringLocalisationRate: ((FACTORIAL_8 * 8 * riemannZeta(9)) / (9 * Math.PI)) * c * R6 * chi.modulusSquared * kT ** 9,
-    scatteringRate: ((1920 * riemannZeta(7)) / Math.PI) * c * R6 * chi.modulusSquared * kT ** 7,
+    scatteringLocalisationRate: ((FACTORIAL_8 * 8 * ZETA_9) / (9 * Math.PI)) * c * R6 * chi.modulusSquared * kT ** 9,
+    scatteringRate: ((1920 * ZETA_7) / Math.PI) * c * R6 * chi.modulusSquared * kT ** 7,
     absorptionLocalisationRate: ((16 * Math.PI ** 5) / 189) * c * R3 * chi.imaginary * kT ** 6,
     absorptionRate: ((4 * Math.PI ** 3) / 15) * c * R3 * chi.imaginary * kT ** 4,
   };
 }
 
-/** y = ħck/(k_BT) is integrated over [0, 80] (weight e^{−80} beyond) in 20 panels of order 16. */
-function photonIntegral(power: number, resolution: (x: number) => number, wavenumberSeparation: number): number {
-  let total = 0;
-  for (let k = 0; k < 20; k++) {
-    total += integrateGaussLegendre((y) => (y ** power / Math.expm1(y)) * resolution(y * wavenumberSeparation), 4 * k, 4 * (k + 1), 16);
+/** Series coefficients of g_sc(x) = ∫y⁶(1 − sinc²(xy))/(e^y − 1)dy and g_abs(x) = ∫y³(1 − sinc(xy))/(e^y − 1)dy in x². */
+const SERIES_TERMS = 30;
+const scatteringSeries = Array.from({ length: SERIES_TERMS }, (_, i) => {
+  const j = i + 1; // 1 − sinc²(z) = Σ (−1)^{j+1} 2^{2j+1} z^{2j}/(2j+2)!, and ∫y^{6+2j}/(e^y − 1) = (6+2j)! ζ(7+2j)
+  return (-1) ** (j + 1) * 2 ** (2 * j + 1) * (2 * j + 3) * (2 * j + 4) * (2 * j + 5) * (2 * j + 6) * riemannZeta(7 + 2 * j);
+});
+const absorptionSeries = Array.from({ length: SERIES_TERMS }, (_, i) => {
+  const j = i + 1; // 1 − sinc(z) = Σ (−1)^{j+1} z^{2j}/(2j+1)!, and ∫y^{3+2j}/(e^y − 1) = (3+2j)! ζ(4+2j)
+  return (-1) ** (j + 1) * (2 * j + 2) * (2 * j + 3) * riemannZeta(4 + 2 * j);
+});
+
+function powerSeries(coefficients: number[], x2: number): number {
+  let sum = 0;
+  let power = x2;
+  for (const a of coefficients) {
+    const term = a * power;
+    sum += term;
+    if (Math.abs(term) < 1e-17 * Math.abs(sum)) break;
+    power *= x2;
   }
-  return total;
+  return sum;
+}
+
+/**
+ * g_sc(x) = ∫₀^∞ y⁶(1 − sinc²(xy))/(e^y − 1) dy = 720ζ(7) − (12/x²)[ζ(5) − Re B₅(2x)], from
+ * sin²(xy) = (1 − cos 2xy)/2 and ∫y⁴e^{−(n−2ix)y}dy = 24/(n − 2ix)⁵; by its series below x = 0.05 (radius ½).
+ */
+export function scatteringResolution(x: number): number {
+  if (x < 0.05) return powerSeries(scatteringSeries, x * x);
+  return 720 * ZETA_7 - (12 / (x * x)) * (ZETA_5 - boseSum(5, 2 * x).re);
+}
+
+/** g_abs(x) = ∫₀^∞ y³(1 − sinc(xy))/(e^y − 1) dy = 6ζ(4) − (2/x) Im B₃(x); by its series below x = 0.1 (radius 1). */
+export function absorptionResolution(x: number): number {
+  if (x < 0.1) return powerSeries(absorptionSeries, x * x);
+  return 6 * ZETA_4 - (2 / x) * boseSum(3, x).im;
 }
 
 export type ThermalProcess = "scattering" | "absorption";
 
-/** F(Δx), s⁻¹, of one process at temperature T. */
+/**
+ * F(Δx), s⁻¹, of one process at temperature T: c(8/3π)R⁶|χ|²(k_BT/ħc)⁷ g_sc(k_BTΔx/ħc) for scattering,
+ * c(4/π)R³ Im χ (k_BT/ħc)⁴ g_abs(k_BTΔx/ħc) for absorption (and emission, at T_int).
+ */
 export function thermalDecoherenceFunction(bodyRadiusMetres: number, permittivity: Permittivity | null, temperatureKelvin: number, process: ThermalProcess): (separationMetres: number) => number {
   const chi = clausiusMossotti(permittivity);
   const kT = (kB * temperatureKelvin) / (hbar * c);
   const R3 = bodyRadiusMetres ** 3;
   if (process === "scattering") {
-    const prefactor = ((8 / (3 * Math.PI)) * c * R3 * R3 * chi.modulusSquared * kT ** 7);
-    return (dx) => (dx === 0 ? 0 : prefactor * photonIntegral(6, oneMinusSincSquared, kT * Math.abs(dx)));
+    const prefactor = (8 / (3 * Math.PI)) * c * R3 * R3 * chi.modulusSquared * kT ** 7;
+    return (dx) => (dx === 0 ? 0 : prefactor * scatteringResolution(kT * Math.abs(dx)));
   }
   const prefactor = (4 / Math.PI) * c * R3 * chi.imaginary * kT ** 4;
-  return (dx) => (dx === 0 || prefactor === 0 ? 0 : prefactor * photonIntegral(3, oneMinusSinc, kT * Math.abs(dx)));
+  return (dx) => (dx === 0 || prefactor === 0 ? 0 : prefactor * absorptionResolution(kT * Math.abs(dx)));
 }
 
 function sizeFlag(p: ThermalParameters): ValidityFlag {

@@ -8,7 +8,7 @@ export { environmentChannels, type EnvironmentInputs } from "./budget";
 export { environmentMargins, findMargin, MARGIN_LIMITS, type ChannelMargin, type MarginOutcome, type MarginParameter } from "./margin";
 export { gasChannel, gasRates, gasDecoherenceFunction, type GasParameters, type GasRates } from "./gas";
 export { thermalChannel, thermalChannels, thermalRates, thermalDecoherenceFunction, scatteringResolution, absorptionResolution, type ThermalParameters, type ThermalRates } from "./thermal";
-export { surfaceChannel, imageKernel, surfaceZeroFrequencyNoise, surfaceDecoherenceFunction, type SurfaceParameters, type SurfaceOrientation } from "./surface";
+export { surfaceChannel, imageKernel, sheetKernel, sheetHoldRate, surfaceZeroFrequencyNoise, surfaceDecoherenceFunction, type SurfaceParameters, type SurfaceOrientation } from "./surface";
 export { gasSpecies, molecularMassKg, type GasSpecies, type GasSpeciesEntry } from "./species";
 export { bodyMaterials, clausiusMossotti, type BodyMaterial, type Permittivity, type MaterialEntry } from "./materials";
 export { riemannZeta, oneMinusDawsonOverX, boseSum } from "./special-functions";

@@ -58,7 +58,7 @@ export function imageKernel(z: number, orientation: SurfaceOrientation, xA: numb
   }
   const zA = z + xA;
   const zB = z + xB;
-  return (zA - zB) ** 2 / (2 * zA * zB * (zA + zB));
+  return (xA - xB) ** 2 / (2 * zA * zB * (zA + zB)); // z_A − z_B from the offsets: no cancellation against z
 }
 
 /** S(0) = 2k_BT · q²/(4πε₀) · 2ε₀ρ · K, in J² s (the noise of X = q Δφ at zero frequency). */
@@ -69,6 +69,31 @@ export function surfaceZeroFrequencyNoise(p: SurfaceParameters, xA: number, xB: 
 /** F = S(0)/(2ħ²), s⁻¹. */
 export function surfaceDecoherenceFunction(p: SurfaceParameters): (xA: number, xB: number) => number {
   return (xA, xB) => surfaceZeroFrequencyNoise(p, xA, xB) / (2 * hbar * hbar);
+}
+
+/**
+ * A thin resistive sheet of surface resistance R_s instead of a half-space — a metal film much thinner than z, or a
+ * horizon in the membrane picture (R_H = 1/(ε₀c) ≈ 377 Ω; R. L. Znajek, MNRAS 179, 457 (1977); T. Damour, PRD 18,
+ * 3598 (1978); K. S. Thorne, R. H. Price & D. A. Macdonald, Black Holes: The Membrane Paradigm (1986)). Its
+ * quasi-static reflection coefficient r = iσ_sk/(2ε₀ω + iσ_sk) gives Im r/ω → 2ε₀R_s/k, so the same formula reads
+ *   d⟨N⟩/dt = k_BT q² R_s K_sheet/(πħ²),
+ *   K_sheet = 2 ln((2z + √(Δx² + 4z²))/(4z)) (parallel) → Δx²/(8z²),   ln((z_A + z_B)²/(4z_Az_B)) (perpendicular) → Δx²/(4z²),
+ * from ∫₀^∞ (e^{−ak} − e^{−ak}J₀(bk)) dk/k = ln((a + √(a² + b²))/2a) and Frullani's integral. Derived here.
+ */
+export function sheetKernel(z: number, orientation: SurfaceOrientation, xA: number, xB: number): number {
+  if (orientation === "parallel") {
+    const dx = xA - xB;
+    const s = Math.sqrt(dx * dx + 4 * z * z);
+    return 2 * Math.log1p((dx * dx) / (4 * z * (s + 2 * z)));
+  }
+  const zA = z + xA;
+  const zB = z + xB;
+  return Math.log1p((xA - xB) ** 2 / (4 * zA * zB));
+}
+
+/** d⟨N⟩/dt = k_BT q² R_s K_sheet/(πħ²), s⁻¹, for a resistive sheet at distance z and temperature T. */
+export function sheetHoldRate(p: { chargeCoulombs: number; temperatureKelvin: number; sheetResistanceOhms: number; distanceMetres: number; orientation: SurfaceOrientation }, xA: number, xB: number): number {
+  return (kB * p.temperatureKelvin * p.chargeCoulombs ** 2 * p.sheetResistanceOhms * sheetKernel(p.distanceMetres, p.orientation, xA, xB)) / (Math.PI * hbar * hbar);
 }
 
 function ratioFlag(code: string, measure: number, message: string): ValidityFlag {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { c, elementaryCharge, epsilon0, hbar, kB, mu0 } from "@/physics/constants";
-import { imageKernel, surfaceChannel, surfaceDecoherenceFunction, type SurfaceOrientation, type SurfaceParameters } from "@/physics/environment";
+import { imageKernel, sheetHoldRate, sheetKernel, surfaceChannel, surfaceDecoherenceFunction, type SurfaceOrientation, type SurfaceParameters } from "@/physics/environment";
 import { ScenarioInputError } from "@/physics/scenario/input-error";
 import { integrateGaussLegendre } from "@/physics/spectra/gauss-legendre";
 import { linearPaths, linearSquaredSeparationSeconds, numberOf } from "./paths";
@@ -61,7 +61,7 @@ function fresnelKernel(p: SurfaceParameters, xA: number, xB: number, omega: numb
   };
   const integrand = (k: number) =>
     (imRp(k) / (2 * epsilon0 * rho * omega)) * (Math.exp(-2 * k * zA) + Math.exp(-2 * k * zB) - 2 * besselJ0(k * lateral) * Math.exp(-k * (zA + zB)));
-  const scale = 1 / (zA + zB);
+  const scale = 1 / (2 * Math.min(zA, zB));
   let sum = 0;
   for (let j = 0; j < 60; j++) sum += integrateGaussLegendre(integrand, j * scale * 0.5, (j + 1) * scale * 0.5, 24);
   return sum;
@@ -142,5 +142,35 @@ describe("a warm surface: the image response of an Ohmic half-space", () => {
 
   it("refuses a branch that would touch the surface, with the document path", () => {
     expect(() => surfaceChannel(linearPaths(60e-6), gold({ orientation: "perpendicular", distanceMetres: 30e-6 }))).toThrow(ScenarioInputError);
+  });
+});
+
+describe("a resistive sheet, and a horizon as a warm absorber (the membrane picture)", () => {
+  it("the sheet kernel matches ∫dk (1/k)[e^{−2kz_A} + e^{−2kz_B} − 2J₀(kΔ∥)e^{−k(z_A+z_B)}] (Im r/ω = 2ε₀R_s/k), exact in Δx/z", () => {
+    const z = 1e-3;
+    for (const [orientation, ratio] of [["parallel", 0.1], ["parallel", 2], ["perpendicular", 0.1], ["perpendicular", 1.5]] as const) {
+      const dx = ratio * z;
+      const zA = orientation === "perpendicular" ? z + dx / 2 : z;
+      const zB = orientation === "perpendicular" ? z - dx / 2 : z;
+      const lateral = orientation === "parallel" ? dx : 0;
+      const integrand = (k: number) => (Math.exp(-2 * k * zA) + Math.exp(-2 * k * zB) - 2 * besselJ0(k * lateral) * Math.exp(-k * (zA + zB))) / k;
+      const scale = 1 / (2 * Math.min(zA, zB));
+      let numeric = 0;
+      for (let j = 0; j < 80; j++) numeric += integrateGaussLegendre(integrand, j * scale * 0.5, (j + 1) * scale * 0.5, 24);
+      expect(numeric / sheetKernel(z, orientation, dx / 2, -dx / 2)).toBeCloseTo(1, 5);
+    }
+  });
+
+  it("a horizon as a 377 Ω sheet at the Unruh temperature, c²/a away, gives 3/8 (parallel) and 3/4 (perpendicular) of the exact Rindler rate q²d²a³/(6π²ε₀ħc⁶) (Boyer 1980)", () => {
+    const a = 1e15;
+    const q = 100 * elementaryCharge.value;
+    const d = 1e-9;
+    const unruhKelvin = (hbar * a) / (2 * Math.PI * c * kB);
+    const rindler = (q * q * d * d * a ** 3) / (6 * Math.PI ** 2 * epsilon0 * hbar * c ** 6);
+    const sheet = (orientation: SurfaceOrientation) =>
+      sheetHoldRate({ chargeCoulombs: q, temperatureKelvin: unruhKelvin, sheetResistanceOhms: 1 / (epsilon0 * c), distanceMetres: (c * c) / a, orientation }, d / 2, -d / 2);
+    expect(1 / (epsilon0 * c)).toBeCloseTo(376.73, 2); // the impedance of free space (CODATA 2018: 376.730313668 Ω)
+    expect(sheet("parallel") / rindler).toBeCloseTo(3 / 8, 6);
+    expect(sheet("perpendicular") / rindler).toBeCloseTo(3 / 4, 6);
   });
 });

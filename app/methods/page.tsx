@@ -50,6 +50,7 @@ const groups: { id: string; title: string; intro: string; keys: SourceKey[]; mor
       "environment-thermal-absorption",
       "environment-thermal-emission",
       "environment-surface",
+      "environment-budget-total",
       "environment-margin",
     ],
   },

@@ -57,6 +57,13 @@ export const environmentSources = {
     ],
     failureModes: ["fast charges: retardation and eddy currents (flagged; Kerker et al. 2020)", "neutral bodies: induced-dipole coupling not counted"],
   },
+  "environment-budget-total": {
+    title: "The whole budget: the body's own field channels and the lab's environment together",
+    citation: "independent environments: the overlaps multiply, the counts add (as combined-channels)",
+    formula: "\\langle N\\rangle = \\langle N\\rangle_{\\rm EM} + \\langle N\\rangle_{\\rm GW} + \\sum_{\\rm env}\\langle N\\rangle_{\\rm env},\\quad T_D = 1\\big/\\textstyle\\sum\\Gamma",
+    assumptions: ["no correlation between the channels' environments", "the decoherence time sums every channel's rate at full separation"],
+    failureModes: ["the dominant channel is the one with the largest ⟨N⟩ over the protocol, not necessarily the largest rate"],
+  },
   "environment-margin": {
     title: "The margin: where an environmental channel would equal the body's own field channels",
     citation: "Brent's method, R. P. Brent, Algorithms for Minimization without Derivatives (1973) ch. 4; Numerical Recipes 3rd ed. §9.3",

@@ -14,7 +14,7 @@ describe("the environment's Methods page and entries", () => {
 
   it("has a Methods entry, with a formula that KaTeX parses, for every environmental source key", () => {
     const keys = Object.keys(sources).filter((k) => k.startsWith("environment-"));
-    expect(keys).toHaveLength(6);
+    expect(keys).toHaveLength(7);
     for (const key of keys) {
       const entry = sources[key as keyof typeof sources];
       expect(renderMathMarkdown(`$$${entry.formula}$$`)).not.toContain("katex-error");

@@ -14,12 +14,19 @@ import type { BranchPaths, EnvironmentChannel, EnvironmentChannelResult, Environ
 /** F at branch positions x_A, x_B along the separation axis (metres from the rest position), s⁻¹. */
 export type DecoherenceFunction = (branchAMetres: number, branchBMetres: number) => number;
 
+/**
+ * Panels of order 16 per moving window: F is smooth in σ (analytic in Δx), so 4 panels integrate it to ~1e-12 where
+ * the field channels' spectra take 16; only a crossover far narrower than the ramp (d ≫ Δx_c) is resolved less
+ * finely, and there the time spent within it is itself a negligible part of ⟨N⟩.
+ */
+const RAMP_PANELS = 4;
+
 /** 2∫F dt over the protocol, and 2F at full separation. */
 export function accumulate(paths: BranchPaths, decoherenceFunction: DecoherenceFunction): { quanta: number; fullSeparationRate: number } {
   const { aPerSeparation, bPerSeparation } = branchPositions(paths.split);
   const d = paths.history.peakSeparationMetres;
   const at = (fraction: number) => 2 * decoherenceFunction(aPerSeparation * d * fraction, bPerSeparation * d * fraction);
-  return { quanta: integrateOverProtocolSeconds(paths.history, at), fullSeparationRate: at(1) };
+  return { quanta: integrateOverProtocolSeconds(paths.history, at, RAMP_PANELS), fullSeparationRate: at(1) };
 }
 
 const log10OrZero = (x: number) => (x > 0 ? Math.log10(x) : -Infinity);

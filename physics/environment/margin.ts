@@ -52,7 +52,7 @@ export function findMargin(evaluate: Evaluate, current: number, limit: number, f
     const n = evaluate(10 ** log10Value);
     return (n === -Infinity ? -1e3 : n) - fieldLog10Quanta;
   };
-  const root = brentRoot(f, Math.log10(current), Math.log10(limit), 1e-9);
+  const root = brentRoot(f, Math.log10(current), Math.log10(limit), 1e-7); // the parameter to 7 significant digits
   return { kind: "crossing", value: quantityFromValue(10 ** root, "", "environment-margin") };
 }
 
@@ -72,9 +72,10 @@ export function environmentMargins(paths: BranchPaths, inputs: EnvironmentInputs
   const margins: ChannelMargin[] = [];
   const { gas, radiation, surface } = inputs;
   if (gas) {
-    margins.push(
-      margin("gas", "gas-pressure", gas.pressurePascals, (p) => log10Quanta(gasChannelOf(paths, { ...inputs, gas: { ...gas, pressurePascals: p } }) ?? undefined), fieldLog10Quanta),
-    );
+    // F = γ(1 − D(κ)/κ) with γ ∝ P and κ independent of P: ⟨N⟩ is exactly proportional to the pressure.
+    const now = log10Quanta(gasChannelOf(paths, inputs) ?? undefined);
+    const atPressure = (p: number) => (p === 0 || now === -Infinity ? -Infinity : now + Math.log10(p / gas.pressurePascals));
+    margins.push(margin("gas", "gas-pressure", gas.pressurePascals, atPressure, fieldLog10Quanta));
   }
   if (radiation) {
     const thermalAt = (channel: ThermalChannel, change: Partial<{ surroundings: number; internal: number }>) =>

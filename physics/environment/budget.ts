@@ -5,7 +5,7 @@
 import { gasChannel } from "./gas";
 import type { GasSpecies } from "./species";
 import type { Permittivity } from "./materials";
-import { surfaceChannel, type SurfaceOrientation } from "./surface";
+import { surfaceChannel, type SurfaceParameters } from "./surface";
 import { thermalChannel, thermalChannels, type ThermalChannel, type ThermalParameters } from "./thermal";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
 
@@ -20,14 +20,8 @@ export interface EnvironmentInputs {
   };
   gas: { pressurePascals: number; temperatureKelvin: number; species: GasSpecies } | null;
   radiation: { surroundingsTemperatureKelvin: number } | null;
-  surface: {
-    distanceMetres: number;
-    resistivityOhmMetres: number;
-    temperatureKelvin: number;
-    orientation: SurfaceOrientation;
-    backgroundPermittivity: number;
-    relaxationTimeSeconds: number | null;
-  } | null;
+  /** The surface as surface.ts takes it, less what the body supplies. */
+  surface: Omit<SurfaceParameters, "chargeCoulombs" | "bodyRadiusMetres"> | null;
 }
 
 export function gasChannelOf(paths: BranchPaths, inputs: EnvironmentInputs): EnvironmentChannelResult | null {

@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { c, elementaryCharge, epsilon0, hbar, kB, mu0 } from "@/physics/constants";
 import { imageKernel, sheetHoldRate, sheetKernel, surfaceChannel, surfaceDecoherenceFunction, type SurfaceOrientation, type SurfaceParameters } from "@/physics/environment";
@@ -172,5 +173,35 @@ describe("a resistive sheet, and a horizon as a warm absorber (the membrane pict
     expect(1 / (epsilon0 * c)).toBeCloseTo(376.73, 2); // the impedance of free space (CODATA 2018: 376.730313668 Ω)
     expect(sheet("parallel") / rindler).toBeCloseTo(3 / 8, 6);
     expect(sheet("perpendicular") / rindler).toBeCloseTo(3 / 4, 6);
+  });
+});
+
+describe("the image kernels' cancellation-free forms (properties over random geometries)", () => {
+  it("equal the direct image sums 1/2z_A + 1/2z_B − 2/D (resp. 2ln…), are non-negative and symmetric in the branches", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -6, max: 2, noNaN: true }),
+        fc.double({ min: -0.9, max: 3, noNaN: true }),
+        fc.double({ min: -0.9, max: 3, noNaN: true }),
+        fc.constantFrom<SurfaceOrientation>("parallel", "perpendicular"),
+        (log10z, a, b, orientation) => {
+          const z = 10 ** log10z;
+          const [xA, xB] = [a * z, b * z];
+          const zA = orientation === "perpendicular" ? z + xA : z;
+          const zB = orientation === "perpendicular" ? z + xB : z;
+          const lateral = orientation === "parallel" ? xA - xB : 0;
+          const direct = 1 / (2 * zA) + 1 / (2 * zB) - 2 / Math.hypot(lateral, zA + zB);
+          const sheetDirect = orientation === "parallel" ? 2 * Math.log((2 * z + Math.hypot(lateral, 2 * z)) / (4 * z)) : Math.log((zA + zB) ** 2 / (4 * zA * zB));
+          const K = imageKernel(z, orientation, xA, xB);
+          const S = sheetKernel(z, orientation, xA, xB);
+          expect(K).toBeGreaterThanOrEqual(0);
+          expect(S).toBeGreaterThanOrEqual(0);
+          expect(Math.abs(imageKernel(z, orientation, xB, xA) - K)).toBeLessThanOrEqual(1e-14 * K);
+          expect(Math.abs(K - direct)).toBeLessThanOrEqual(1e-12 * (1 / zA + 1 / zB));
+          expect(Math.abs(S - sheetDirect)).toBeLessThanOrEqual(1e-12 * (1 + Math.abs(sheetDirect)));
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 });

@@ -14,6 +14,7 @@ import { schwarzschildEstimate } from "./estimators/schwarzschild";
 import { exactHorizonRateModel } from "./estimators/schwarzschild-exact-rate";
 import type { SchwarzschildHorizonRateModel } from "./estimators/schwarzschild-horizon-rate";
 import { thermalHorizonEstimate } from "./estimators/thermal-horizon";
+import { environmentBudget } from "./environment/from-document";
 import { validityFlags } from "./flags";
 import { peakBranchSpeed, separationHistory } from "./protocols";
 import type { SeparationHistory } from "./protocols/types";
@@ -94,6 +95,7 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
   const [electromagnetic, gravitational] = estimates.map(channelResult);
   const speed = peakBranchSpeed(history, document.separation.split);
   const combined = combine(electromagnetic, gravitational);
+  const environment = environmentBudget(document, { history, split: document.separation.split }, [electromagnetic, gravitational]);
   const result: Omit<ScenarioResult, "flags"> = {
     resultVersion: RESULT_FORMAT_VERSION,
     documentSchemaVersion: document.schemaVersion,
@@ -117,6 +119,7 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
     electromagnetic,
     gravitational,
     combined,
+    environment,
   };
   const reported = [electromagnetic, gravitational].flatMap((ch) => [
     ...(["totalQuanta", "rampDrivenQuanta", "holdDrivenQuanta", "holdRate", "decoherenceTime"] as const).map((field) => ({ name: `${ch.channel}.${field}`, quantity: ch[field] })),
@@ -125,9 +128,15 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
       : (["estimateHoldRate", "ratioExactToEstimate"] as const).map((field) => ({ name: `${ch.channel}.comparison.${field}`, quantity: ch.comparison![field] }))),
   ]);
   reported.push({ name: "combined.totalQuanta", quantity: combined.totalQuanta }, { name: "combined.decoherenceTime", quantity: combined.decoherenceTime });
+  if (environment) {
+    for (const ch of environment.channels) reported.push({ name: `environment.${ch.channel}.totalQuanta`, quantity: ch.totalQuanta }, { name: `environment.${ch.channel}.holdRate`, quantity: ch.holdRate });
+    reported.push({ name: "environment.total.totalQuanta", quantity: environment.total.totalQuanta });
+  }
+  const channelFlags = environment ? environment.channels.flatMap((ch) => ch.flags.map((f) => ({ ...f, code: `environment:${f.code}` }))) : [];
+  const environmentFlags = [...(environment?.flags ?? []), ...channelFlags.filter((f, i) => channelFlags.findIndex((g) => g.code === f.code) === i)]; // the thermal channels share their size and material checks
   return {
     ...result,
-    flags: validityFlags({
+    flags: [...validityFlags({
       document,
       history,
       background,
@@ -136,7 +145,7 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
       gravitational,
       reported,
       modelFlags: estimates.flatMap((e) => e.modelFlags),
-    }),
+    }), ...environmentFlags],
   };
 }
 

@@ -4,6 +4,7 @@
  */
 import type { BackgroundKind } from "./scenario/schema";
 import type { SourceKey } from "./estimators/sources";
+import type { EnvironmentBudget } from "./environment/from-document";
 
 export const RESULT_FORMAT_VERSION = 1 as const;
 
@@ -134,6 +135,8 @@ export interface ScenarioResult {
     visibility: Quantity;
     decoherenceTime: Quantity | null;
   };
+  /** The lab's environment beside the field channels (schema version 2); null for an isolated body. */
+  environment: EnvironmentBudget | null;
   flags: ValidityFlag[];
 }
 

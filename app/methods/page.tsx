@@ -39,6 +39,22 @@ const groups: { id: string; title: string; intro: string; keys: SourceKey[]; mor
     ],
   },
   {
+    id: "environment",
+    more: { href: "/methods/environment", label: "The lab's environment: derivations, checks, and a horizon beside a warm metal plate" },
+    title: "The lab's environment: gas, thermal radiation, a warm surface",
+    intro:
+      "Beside the body's own fields, the lab's environment resolves the path too. Each channel is counted in the same quanta, ⟨N⟩ = 2∫F dt over the branch paths, the ramps included.",
+    keys: [
+      "environment-gas",
+      "environment-thermal-scattering",
+      "environment-thermal-absorption",
+      "environment-thermal-emission",
+      "environment-surface",
+      "environment-budget-total",
+      "environment-margin",
+    ],
+  },
+  {
     id: "coherence",
     title: "From quanta to coherence",
     intro: "",

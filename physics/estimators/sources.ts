@@ -3,6 +3,8 @@
  * The /methods page renders this table; keep each entry's formula the one the code evaluates.
  */
 
+import { environmentSources } from "../environment/sources";
+
 export interface SourceEntry {
   title: string;
   citation: string;
@@ -251,6 +253,7 @@ const entries = {
     assumptions: ["static lab"],
     failureModes: [],
   },
+  ...environmentSources,
 } satisfies Record<string, SourceEntry>;
 
 export type SourceKey = keyof typeof entries;

@@ -1,12 +1,14 @@
 /**
- * The scenario document: what a user draws and sets, in SI numbers. Version 1.
+ * The scenario document: what a user draws and sets, in SI numbers. Version 2 (version 1 plus the optional
+ * `environment` block of environment-schema.ts; a version-1 document upgrades to an isolated body).
  *
  * Every reader goes through parseScenarioDocument, which accepts any known version and upgrades it to the
  * current one; an unknown or malformed document is answered with the list of what is wrong, never a crash.
  */
 import { z } from "zod";
+import { environmentSchema, upgradeVersion1To2 } from "./environment-schema";
 
-export const CURRENT_SCHEMA_VERSION = 1 as const;
+export const CURRENT_SCHEMA_VERSION = 2 as const;
 
 const positive = (what: string) => z.number({ error: `${what} must be a number` }).finite().positive(`${what} must be positive`);
 const nonNegative = (what: string) => z.number({ error: `${what} must be a number` }).finite().nonnegative(`${what} must not be negative`);
@@ -99,7 +101,15 @@ export const scenarioDocumentV1Schema = z.object({
   numerics: numericsSchema,
 });
 
-export const scenarioDocumentSchema = scenarioDocumentV1Schema;
+// --- Version 2: the lab's environment (physics/scenario/environment-schema.ts) ---
+export const scenarioDocumentV2Schema = scenarioDocumentV1Schema.extend({
+  schemaVersion: z.literal(2),
+  /** The lab's gas, thermal radiation and a nearby surface; null: an isolated body (what version 1 computed). */
+  environment: environmentSchema.nullable().default(null),
+});
+// --- end of version 2 ---
+
+export const scenarioDocumentSchema = scenarioDocumentV2Schema;
 export type ScenarioDocument = z.infer<typeof scenarioDocumentSchema>;
 export type ScenarioDocumentInput = z.input<typeof scenarioDocumentSchema>;
 
@@ -111,8 +121,8 @@ export interface SchemaIssue {
 
 export type ParseResult = { ok: true; document: ScenarioDocument } | { ok: false; issues: SchemaIssue[] };
 
-/** Upgraders from version n to n + 1, applied in order. Empty while only version 1 exists. */
-const upgraders: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {};
+/** Upgraders from version n to n + 1, applied in order. */
+const upgraders: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = { 1: upgradeVersion1To2 };
 
 export function parseScenarioDocument(input: unknown): ParseResult {
   if (typeof input !== "object" || input === null || Array.isArray(input)) {
@@ -138,7 +148,7 @@ export function parseScenarioDocument(input: unknown): ParseResult {
 /** A sensible new scenario: a charged microparticle split by 1 µm in flat spacetime. */
 export function defaultScenarioDocument(): ScenarioDocument {
   return {
-    schemaVersion: 1,
+    schemaVersion: 2,
     background: { kind: "minkowski" },
     lab: { placement: "inertial" },
     source: { chargeCoulombs: 1.602_176_634e-19 * 100, massKg: 1e-14, labMassKg: null },
@@ -151,5 +161,6 @@ export function defaultScenarioDocument(): ScenarioDocument {
     },
     display: { theme: "light", showGrid: true },
     numerics: { kinkTimeResolutionSeconds: null },
+    environment: null,
   };
 }

@@ -1,8 +1,8 @@
 /**
  * Bench: prints figures, asserts nothing on time. Figures: one full computeScenario of a scenario whose transform
  * is 2^14 samples long (cold spectrum cache and warm), one bare fft.js real transform of the same length, their
- * ratio, and a 200-point sweep; then the exact Schwarzschild horizon rate alone (one evaluation, a 200-point
- * distance sweep). Targets: compute ≤ 3× the bare transform and ≤ 5 ms median (cold); sweep ≤ 300 ms; exact rate
+ * ratio, the same scenario with the lab's whole environment (five channels and their margins), and a 200-point sweep; then the exact Schwarzschild horizon rate alone (one evaluation, a 200-point
+ * distance sweep). Targets: compute ≤ 3× the bare transform and ≤ 5 ms median (cold), with the environment too; sweep ≤ 300 ms; exact rate
  * < 1 ms per evaluation and < 100 ms per 200-point sweep.
  *
  * The bare transform and the computations are timed in turn within one loop, so that a load that comes and goes
@@ -46,6 +46,16 @@ function benchScenario(): ScenarioDocument {
 }
 
 const scenario = benchScenario();
+/** The bench scenario in a cryogenic chamber 40 µm above a gold film: every environmental channel and its margin. */
+const withEnvironment: ScenarioDocument = {
+  ...scenario,
+  environment: {
+    body: { radiusMetres: 1e-6, material: "fused-silica", permittivity: null, internalTemperatureKelvin: 6 },
+    gas: { pressurePascals: 1e-10, temperatureKelvin: 4, species: "He" },
+    radiation: { surroundingsTemperatureKelvin: 4 },
+    surface: { distanceMetres: 4e-5, resistivityOhmMetres: 2.2e-8, permittivity: null, temperatureKelvin: 4, orientation: "parallel", backgroundPermittivity: 1, relaxationTimeSeconds: null },
+  },
+};
 const probe = computeScenario(scenario).electromagnetic.convergence;
 const length = probe.transformLength;
 
@@ -55,16 +65,19 @@ const output = fft.createComplexArray();
 for (let i = 0; i < 50; i++) fft.realTransform(output, input);
 for (let i = 0; i < 20; i++) computeScenario(scenario);
 
-const samples = { bare: [] as number[], cold: [] as number[], warm: [] as number[] };
+const samples = { bare: [] as number[], cold: [] as number[], warm: [] as number[], environment: [] as number[] };
 for (let i = 0; i < RUNS; i++) {
   samples.bare.push(elapsed(() => fft.realTransform(output, input)));
   clearSpectrumCache();
   samples.cold.push(elapsed(() => computeScenario(scenario)));
   samples.warm.push(elapsed(() => computeScenario(scenario)));
+  clearSpectrumCache();
+  samples.environment.push(elapsed(() => computeScenario(withEnvironment)));
 }
 const bare = median(samples.bare);
 const cold = median(samples.cold);
 const warm = median(samples.warm);
+const environment = median(samples.environment);
 
 // The sweep crosses the exact rate's multipole-check cache, which only the first run finds empty.
 const sweepDocument: ScenarioDocument = { ...defaultScenarioDocument(), background: { kind: "schwarzschild", massKg: 1.988e31 }, lab: { placement: "areal-radius", arealRadiusMetres: 1e5 } };
@@ -91,11 +104,13 @@ const lines = [
   `bare fft.js realTransform of ${length}: median ${(bare * 1000).toFixed(1)} µs`,
   `computeScenario, cold spectrum cache: median ${cold.toFixed(3)} ms (${(cold / bare).toFixed(1)}× the bare transform)`,
   `computeScenario, warm spectrum cache: median ${warm.toFixed(3)} ms (${(warm / bare).toFixed(1)}× the bare transform)`,
+  `computeScenario with the whole environment (5 channels and margins), cold: median ${environment.toFixed(3)} ms (${(environment - cold).toFixed(3)} ms for the environment)`,
   `200-point lab-distance sweep (Schwarzschild): median ${sweepMs.toFixed(1)} ms of ${SWEEP_RUNS} (first run ${sweepRuns[0].toFixed(1)} ms)`,
   `exact Schwarzschild rate, one evaluation (new radius, automatic multipole check): median ${(exactSingle * 1000).toFixed(1)} µs, max ${(Math.max(...exactSingles) * 1000).toFixed(1)} µs`,
   `exact Schwarzschild rate, 200-point distance sweep (new radii): median ${exactSweep.toFixed(1)} ms of ${SWEEP_RUNS}`,
   `target compute ≤ 3× bare transform (cold): ${verdict(cold <= 3 * bare)}`,
   `target compute ≤ 5 ms median (cold): ${verdict(cold <= 5)}`,
+  `target compute ≤ 5 ms median with the environment (cold): ${verdict(environment <= 5)}`,
   `target sweep ≤ 300 ms: ${verdict(sweepMs <= 300)}`,
   `target exact rate < 1 ms per evaluation: ${verdict(exactSingle < 1)}`,
   `target exact rate < 100 ms per 200-point sweep: ${verdict(exactSweep < 100)}`,

@@ -26,6 +26,21 @@ describe("POST /api/compute", () => {
     }
   });
 
+  it("returns the lab's environment channels, total, dominant channel and margins for a version-2 document, and a version-1 document as an isolated body", async () => {
+    const fixtures = path.resolve(__dirname, "../unit/physics/fixtures");
+    const v2 = JSON.parse(readFileSync(path.join(fixtures, "scenario-v2.json"), "utf8"));
+    const res = await call(computeRoute.POST, "POST", "/api/compute", { body: v2 });
+    expect(res.status).toBe(200);
+    expect(res.body.result.environment.channels.map((ch: { channel: string }) => ch.channel)).toEqual(["gas", "thermal-scattering", "thermal-absorption", "thermal-emission", "surface"]);
+    expect(res.body.result.environment.margins).toHaveLength(5);
+    const v1 = await call(computeRoute.POST, "POST", "/api/compute", { body: JSON.parse(readFileSync(path.join(fixtures, "scenario-v1.json"), "utf8")) });
+    expect(v1.status).toBe(200);
+    expect(v1.body.result.environment).toBeNull();
+    const bad = await call(computeRoute.POST, "POST", "/api/compute", { body: { ...v2, environment: { ...v2.environment, gas: { pressurePascals: -1, temperatureKelvin: 4, species: "He" } } } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.map((f: { path: string }) => f.path)).toContain("environment.gas.pressurePascals");
+  });
+
   it("answers 400 naming the field and the reason for a bad document", async () => {
     const bad = { ...defaultScenarioDocument(), protocol: { kind: "segments", separation: { durationSeconds: -1, shape: "smoothstep" }, hold: { durationSeconds: 1 }, recombination: { durationSeconds: 1, shape: "smoothstep" } } };
     const res = await call(computeRoute.POST, "POST", "/api/compute", { body: bad });

@@ -1,12 +1,12 @@
-import { mkdir, rename } from "node:fs/promises";
+import { mkdir, readdir, rename, stat } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
-import { Worker } from "node:worker_threads";
+import type { Worker as WorkerThread } from "node:worker_threads";
 import type { ComputeTaskOutcome } from "./compute-task";
 
 /**
- * Scenario computations off the request thread: a fixed set of worker threads (one per core, or
- * BRANCHLINE_COMPUTE_THREADS) running lib/compute-worker.mjs, a bounded first-in first-out queue in front of them,
+ * Scenario computations off the request thread: a fixed set of worker threads (one per core but one, at least
+ * one, or BRANCHLINE_COMPUTE_THREADS) running lib/compute-worker.mjs, a bounded first-in first-out queue in front of them,
  * and a time budget per computation (BRANCHLINE_COMPUTE_BUDGET_MS, 2 s) counted from the moment a thread takes
  * it. A computation past its budget is cancelled by terminating its thread, which is replaced at once, so the
  * pool recovers; its caller learns "over-budget". A full queue, or a computation that waits longer than
@@ -29,7 +29,7 @@ interface Job {
 }
 
 interface Slot {
-  worker: Worker;
+  worker: WorkerThread;
   ready: boolean;
   job: Job | null;
   budgetTimer: NodeJS.Timeout | null;
@@ -58,13 +58,31 @@ export function computeBudgetMs(): number {
  * it comes from, which matters each time a thread is replaced after a cancellation.
  */
 const projectFolder = () => process.cwd();
+
+/**
+ * Worker threads are reached through process.getBuiltinModule, not an import: Next's bundler rewrites a
+ * `new Worker(path)` it can see into its own worker loader, which cannot load a file named at run time.
+ */
+const { Worker } = process.getBuiltinModule("node:worker_threads") as typeof import("node:worker_threads");
 const workerEntry = () => path.join(projectFolder(), "lib", "compute-worker.mjs");
 
+/** Latest modification time of the bundle's sources: the physics, the task, and the installed packages. */
+async function newestSourceMs(): Promise<number> {
+  const root = projectFolder();
+  const physics = (await readdir(path.join(root, "physics"), { recursive: true })).map((file) => path.join(root, "physics", file));
+  const files = [...physics, path.join(root, "lib", "compute-task.ts"), path.join(root, "package-lock.json")];
+  const times = await Promise.all(files.map((file) => stat(file).then((s) => s.mtimeMs, () => 0)));
+  return Math.max(...times);
+}
+
+/** The bundle of the task, made again only when a source is newer than it (each vitest file starts a pool). */
 async function bundleTask(): Promise<string> {
-  const { build } = await import("esbuild");
   const folder = path.join(projectFolder(), ".next", "compute-worker");
-  await mkdir(folder, { recursive: true });
   const outfile = path.join(folder, "compute-task.mjs");
+  const built = await stat(outfile).then((s) => s.mtimeMs, () => 0);
+  if (built > (await newestSourceMs())) return outfile;
+  const { build } = await import("esbuild");
+  await mkdir(folder, { recursive: true });
   const staging = `${outfile}.${process.pid}.${Date.now()}`;
   await build({
     entryPoints: [path.join(projectFolder(), "lib", "compute-task.ts")],
@@ -214,7 +232,8 @@ const holder = globalThis as unknown as { branchlineComputePool?: ComputePool };
 
 export function computePool(): ComputePool {
   holder.branchlineComputePool ??= new ComputePool(
-    positiveIntegerFromEnv("BRANCHLINE_COMPUTE_THREADS", Math.max(1, os.availableParallelism())),
+    // One core is left to the request thread, so that light requests stay fast while every thread computes.
+    positiveIntegerFromEnv("BRANCHLINE_COMPUTE_THREADS", Math.max(1, os.availableParallelism() - 1)),
     positiveIntegerFromEnv("BRANCHLINE_COMPUTE_QUEUE", 256),
   );
   return holder.branchlineComputePool;

@@ -148,14 +148,15 @@ class ComputePool {
       this.dispatch();
     });
     worker.on("error", (error) => {
-      if (slot.ready) return this.replace(slot, error);
-      // A thread that cannot even load (a missing file, a syntax error) would fail again at once: log it, and
-      // try again after a pause rather than in a loop; waiting callers are answered "busy" by their queue timer.
-      console.error("[compute] a worker failed to start", error);
-      setTimeout(() => this.replace(slot, null), 1000).unref();
+      if (slot.ready) this.replace(slot, error);
+      else console.error("[compute] a worker failed to start", error);
     });
     worker.on("exit", (code) => {
-      if (this.slots.includes(slot)) this.replace(slot, new Error(`a compute worker stopped (exit code ${code})`));
+      if (!this.slots.includes(slot)) return;
+      if (slot.ready) return this.replace(slot, new Error(`a compute worker stopped (exit code ${code})`));
+      // A thread that cannot even load (a missing file, a syntax error) would fail again at once: try again after
+      // a pause rather than in a loop; waiting callers are answered "busy" by their queue timer.
+      setTimeout(() => this.replace(slot, null), 1000).unref();
     });
     return slot;
   }

@@ -171,13 +171,18 @@ export function computeCostRefusal(document: ScenarioDocument, ceiling = COMPUTE
     // The step in effect: the stated one, or coarser where the samples hit MAX_SAMPLES; ×2 for the rounding to powers of two.
     const longestGroupSeconds = Math.max(...protocolShape(document).groups.map((g) => g.seconds));
     const stepInEffect = Math.max(resolution, longestGroupSeconds / largestSamples);
-    const step = Number.isFinite(factor) ? stepInEffect * Math.max(1, factor) * 2 : null;
+    const coarser = Number.isFinite(factor) ? Number(format(stepInEffect * Math.max(1, factor) * 2)) : null;
+    // Offered only when it is enough: the set-up and a smooth profile's first level do not shrink with the step.
+    const fits = (step: number) => estimateComputeCost({ ...document, numerics: { ...document.numerics, kinkTimeResolutionSeconds: step } }).units <= ceiling;
+    const step = coarser !== null && fits(coarser) ? coarser : null;
     issues.push({
       path: "numerics.kinkTimeResolutionSeconds",
       message:
         `a kink time resolution of ${format(resolution)} s samples the profile ${largestSamples.toLocaleString("en")} times per channel ` +
         `(at most ${MAX_SAMPLES.toLocaleString("en")}): ${over}. ` +
-        (step === null ? "Clear it (null) for the default of 1/1024 of the shortest moving window" : `Use a coarser step, at least ${format(step)} s, or clear it (null) for the default of 1/1024 of the shortest moving window`),
+        (step === null
+          ? "No coarser step alone brings it within the ceiling: change the protocol named below, or clear it (null) for the default of 1/1024 of the shortest moving window"
+          : `Use a coarser step, at least ${format(step)} s, or clear it (null) for the default of 1/1024 of the shortest moving window`),
     });
   }
   if (document.protocol.kind === "formula") {

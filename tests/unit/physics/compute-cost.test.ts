@@ -86,11 +86,24 @@ describe("the compute cost estimate", () => {
         const protocol = { kind: "formula", expression, durationSeconds: 1 };
         const issues = computeCostRefusal(documentWith({ protocol, numerics: { kinkTimeResolutionSeconds: 10 ** log10Step } }));
         if (issues === null) return;
-        const suggested = Number(/at least ([0-9.e+-]+) s/.exec(issues[0].message)?.[1]);
+        const offered = /at least ([0-9.e+-]+) s/.exec(issues[0].message);
+        if (offered === null) {
+          // No step is enough alone: the refusal says so and names the formula to change.
+          expect(issues[0].message).toMatch(/No coarser step alone/);
+          expect(issues.map((i) => i.path)).toContain("protocol.expression");
+          return;
+        }
+        const suggested = Number(offered[1]);
         expect(Number.isFinite(suggested)).toBe(true);
         expect(estimateComputeCost(documentWith({ protocol, numerics: { kinkTimeResolutionSeconds: suggested } })).units).toBeLessThanOrEqual(COMPUTE_COST_CEILING);
       }),
       { numRuns: 40 },
     );
+  });
+
+  it("offers no step when no step is enough (the 35-term formula, whose set-up alone nearly fills the ceiling)", () => {
+    const expression = Array.from({ length: 35 }, (_, k) => `abs(sin(${k + 1}*pi*t))/35`).join(" + ");
+    const issues = computeCostRefusal(documentWith({ protocol: { kind: "formula", expression, durationSeconds: 1 }, numerics: { kinkTimeResolutionSeconds: 1e-300 } }));
+    expect(issues?.[0].message).toMatch(/No coarser step alone/);
   });
 });

@@ -17,7 +17,7 @@ export const frameHeaderRules = [
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  serverExternalPackages: ["pg", "nodemailer", "bcryptjs"],
+  serverExternalPackages: ["pg", "nodemailer", "bcryptjs", "rate-limiter-flexible", "esbuild"],
   poweredByHeader: false,
   async headers() {
     return frameHeaderRules;

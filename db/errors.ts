@@ -10,6 +10,8 @@ export type ErrorCode =
   | "payload_too_large"
   | "unsupported_media_type"
   | "unprocessable"
+  | "compute_too_costly"
+  | "compute_over_budget"
   | "rate_limited"
   | "service_unavailable";
 

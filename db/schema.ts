@@ -164,6 +164,22 @@ export interface AttachmentsTable {
   createdAt: Generated<Date>;
 }
 
+/** A saved scenario's computed outcome at one version (lib/scenario-compute.ts decides what it holds). */
+export interface ScenarioResultsTable {
+  scenarioId: string;
+  version: number;
+  engineKey: string;
+  outcome: Json;
+  computedAt: Generated<Date>;
+}
+
+/** Counters of rate-limiter-flexible's PostgreSQL store (RateLimiterPostgres with tableCreated). */
+export interface ComputeRateLimitsTable {
+  key: string;
+  points: number;
+  expire: string | null;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -177,6 +193,8 @@ export interface Database {
   shareLinks: ShareLinksTable;
   projectAudit: ProjectAuditTable;
   attachments: AttachmentsTable;
+  scenarioResults: ScenarioResultsTable;
+  computeRateLimits: ComputeRateLimitsTable;
 }
 
 export type User = Selectable<UsersTable>;

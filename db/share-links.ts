@@ -128,6 +128,14 @@ export async function shareLinkIsLive(db: Kysely<Database>, token: string): Prom
  * A revoked, expired or unknown token is not found.
  */
 export async function openSharedScenario(db: Kysely<Database>, token: string): Promise<SharedScenarioDto> {
+  return (await openSharedScenarioRecord(db, token)).scenario;
+}
+
+/**
+ * openSharedScenario with the scenario's id beside the DTO, for the server's own use (the result cache's key);
+ * the DTO that leaves the server does not carry it.
+ */
+export async function openSharedScenarioRecord(db: Kysely<Database>, token: string): Promise<{ scenarioId: string; scenario: SharedScenarioDto }> {
   const link = await db
     .selectFrom("shareLinks")
     .select(["id", "scenarioId", "expiresAt", "revokedAt"])
@@ -147,7 +155,7 @@ export async function openSharedScenario(db: Kysely<Database>, token: string): P
   // The link row cascades with its scenario; this only guards a deletion between the two reads.
   if (!row) throw notFound("share link");
   const parsed = parseScenarioDocument(row.document);
-  return {
+  const scenario: SharedScenarioDto = {
     title: row.title,
     backgroundKind: row.backgroundKind,
     version: row.version,
@@ -156,4 +164,5 @@ export async function openSharedScenario(db: Kysely<Database>, token: string): P
     documentIssues: parsed.ok ? null : parsed.issues,
     linkExpiresAt: link.expiresAt?.toISOString() ?? null,
   };
+  return { scenarioId: link.scenarioId, scenario };
 }

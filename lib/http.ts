@@ -16,6 +16,8 @@ const statusOf: Record<ErrorCode, number> = {
   payload_too_large: 413,
   unsupported_media_type: 415,
   unprocessable: 422,
+  compute_too_costly: 422,
+  compute_over_budget: 422,
   rate_limited: 429,
   service_unavailable: 503,
 };
@@ -25,7 +27,10 @@ export const MAX_JSON_BYTES = 8 * 1024 * 1024;
 
 export function errorResponse(error: AppError): NextResponse {
   const body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}), ...error.details } };
-  return NextResponse.json(body, { status: statusOf[error.code] });
+  // 429 and 503 say when to come back: details.retryAfterSeconds, in the body and as the standard header.
+  const retryAfter = error.details?.retryAfterSeconds;
+  const headers = typeof retryAfter === "number" ? { "Retry-After": String(Math.max(1, Math.ceil(retryAfter))) } : undefined;
+  return NextResponse.json(body, { status: statusOf[error.code], headers });
 }
 
 function zodIssues(error: z.ZodError, prefix = ""): FieldIssue[] {

@@ -153,8 +153,13 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
 export function computeScenarioFromJson(input: unknown, options: ComputeOptions = {}): ComputeOutcome {
   const parsed = parseScenarioDocument(input);
   if (!parsed.ok) return { ok: false, issues: parsed.issues };
+  return computeParsedScenario(parsed.document, options);
+}
+
+/** Computes a parsed document: the result, or the issue of a document that parses but cannot be computed. */
+export function computeParsedScenario(document: ScenarioDocument, options: ComputeOptions = {}): ComputeOutcome {
   try {
-    return { ok: true, result: computeScenario(parsed.document, options) };
+    return { ok: true, result: computeScenario(document, options) };
   } catch (error) {
     if (error instanceof ScenarioInputError || error instanceof BackgroundInputError) {
       return { ok: false, issues: [{ path: error.path, message: error.message }] };

@@ -26,11 +26,11 @@ import { groupWindows, type WindowGroup } from "../spectra/window-groups";
 import { PADDING_FACTOR, windowSpectrum, type SpectrumLevel } from "../spectra/window-spectrum";
 
 export const CONVERGENCE_TARGET = 1e-3;
-const BASE_SAMPLES_PER_SHORTEST_WINDOW = 512;
-const MAX_SAMPLES = 1 << 18;
-const MIN_SAMPLES = 64;
+export const BASE_SAMPLES_PER_SHORTEST_WINDOW = 512;
+export const MAX_SAMPLES = 1 << 18;
+export const MIN_SAMPLES = 64;
 const MAX_LEVELS = 8;
-const DEFAULT_KINK_SAMPLES = 1024;
+export const DEFAULT_KINK_SAMPLES = 1024;
 const REFERENCE_WIDTH = 0.25;
 const CROSS_ORDER = { fine: 24, coarse: 16 } as const;
 
@@ -44,9 +44,15 @@ function nextPowerOfTwo(x: number): number {
   return 2 ** Math.ceil(Math.log2(Math.max(1, x)));
 }
 
-function samplesFor(group: WindowGroup, perShortest: number): number {
-  const n = nextPowerOfTwo((perShortest * group.window.durationSeconds) / group.shortestMovingSeconds);
+/** Samples of one window group's transform: perShortest per shortest moving window, a power of two, clamped. */
+export function samplesForGroup(groupSeconds: number, shortestMovingSeconds: number, perShortest: number): number {
+  const n = nextPowerOfTwo((perShortest * groupSeconds) / shortestMovingSeconds);
   return Math.min(MAX_SAMPLES, Math.max(MIN_SAMPLES, n));
+}
+
+/** Samples per shortest moving window of a kinked profile: the stated time step's, or DEFAULT_KINK_SAMPLES. */
+export function kinkSamplesPerShortestWindow(shortestMovingSeconds: number, kinkTimeResolutionSeconds: number | null): number {
+  return kinkTimeResolutionSeconds === null ? DEFAULT_KINK_SAMPLES : Math.max(2, shortestMovingSeconds / kinkTimeResolutionSeconds);
 }
 
 function factorial(k: number): number {
@@ -153,7 +159,7 @@ function evaluateLevel(groups: WindowGroup[], definition: ChannelDefinition, ref
   let timeStepSeconds = Infinity;
   const correction = alphaBar > 0 ? thermalWeight(definition, alphaBar) : null;
   for (const group of groups) {
-    const n = samplesFor(group, perShortest);
+    const n = samplesForGroup(group.window.durationSeconds, group.shortestMovingSeconds, perShortest);
     samplesPerWindow = Math.max(samplesPerWindow, n);
     timeStepSeconds = Math.min(timeStepSeconds, group.window.durationSeconds / n);
     const spectrum = windowSpectrum(group.window, definition, n);
@@ -202,7 +208,7 @@ export function rampQuantaPerSquaredSource(
 
   let level: LevelResult;
   if (kinked) {
-    const perShortest = kinkTimeResolutionSeconds === null ? DEFAULT_KINK_SAMPLES : Math.max(2, shortest / kinkTimeResolutionSeconds);
+    const perShortest = kinkSamplesPerShortestWindow(shortest, kinkTimeResolutionSeconds);
     level = evaluateLevel(groups, definition, referenceSeconds, alphaBar, perShortest);
   } else {
     let perShortest = startSamplesPerShortestWindow;

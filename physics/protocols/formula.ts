@@ -90,6 +90,18 @@ function checkNode(node: MathNode, path: string, parent: MathNode | null): void 
   }
 }
 
+/** Nodes of the formula's parsed tree (what each evaluation walks); 0 when it does not parse. */
+export function formulaNodeCount(expression: string): number {
+  if (nestingDepth(expression) > MAX_NESTING) return 0;
+  try {
+    let count = 0;
+    parseFormula(expression).traverse(() => count++);
+    return count;
+  } catch {
+    return 0;
+  }
+}
+
 /** Parses, checks and compiles a profile formula. Throws ScenarioInputError (path "protocol.expression") when refused. */
 export function compileProfileFormula(expression: string): CompiledProfile {
   if (nestingDepth(expression) > MAX_NESTING) refuse(`a profile formula may nest brackets at most ${MAX_NESTING} deep`);

@@ -16,6 +16,9 @@ const SURVIVES_REFINEMENT = 0.3;
 const JUMP_TOLERANCE = 1e-6;
 const MAX_REFINED_CANDIDATES = 64;
 
+/** The most evaluations of σ that detectProfileFeatures makes: the coarse grid and every refined candidate. */
+export const MAX_FEATURE_PROBES = COARSE_CELLS + 5 + MAX_REFINED_CANDIDATES * (7 + 6 * REFINEMENT + 1);
+
 export interface ProfileFeatures {
   /** Kinks and jumps, u in [0, 1]. */
   features: { u: number; kind: KinkReport["kind"] }[];

@@ -28,6 +28,8 @@ export default async function setup(): Promise<() => Promise<void>> {
   process.env.NEXTAUTH_SECRET ??= "integration-test-secret";
   process.env.NEXTAUTH_URL ??= "http://localhost:3999";
   process.env.SMTP_URL ??= `smtp://127.0.0.1:${process.env.SMTP_FAKE_PORT ?? "2525"}`;
+  // Many suites compute anonymously from one (absent) address; compute-pool.test.ts sets its own small limit.
+  process.env.BRANCHLINE_COMPUTE_RATE_PER_MINUTE ??= "100000";
   process.env.BRANCHLINE_MAILBOX_URL ??= `http://127.0.0.1:${process.env.MAILBOX_PORT ?? "2526"}`;
   return async () => admin(url, `drop database if exists "${name}" with (force)`);
 }

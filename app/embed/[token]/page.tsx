@@ -4,7 +4,7 @@ import { EmbeddedDiagram } from "@/components/export/EmbeddedDiagram";
 import { embedOptions } from "@/components/export/embed-options";
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
-import { openSharedScenario } from "@/db/share-links";
+import { openSharedScenarioRecord } from "@/db/share-links";
 import { computeShared } from "@/lib/shared-budget";
 
 export const metadata: Metadata = { title: "Diagram", robots: { index: false, follow: false } };
@@ -16,11 +16,12 @@ export const metadata: Metadata = { title: "Diagram", robots: { index: false, fo
 export default async function EmbedPage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { token } = await params;
   const options = embedOptions(await searchParams);
-  const scenario = await openSharedScenario(getDb(), token).catch((error: unknown) => {
+  const db = getDb();
+  const { scenarioId, scenario } = await openSharedScenarioRecord(db, token).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
-  const { result } = computeShared(scenario.document);
+  const { result } = await computeShared(db, { scenarioId, version: scenario.version, document: scenario.document });
   return (
     <>
       <title>{`${scenario.title} · Branchline`}</title>

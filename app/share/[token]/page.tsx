@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { SharedScenarioView } from "@/components/sharing/SharedScenarioView";
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
-import { openSharedScenario } from "@/db/share-links";
+import { openSharedScenarioRecord } from "@/db/share-links";
 import { computeShared } from "@/lib/shared-budget";
 
 export const metadata: Metadata = { title: "Shared scenario", robots: { index: false, follow: false } };
@@ -11,11 +11,12 @@ export const metadata: Metadata = { title: "Shared scenario", robots: { index: f
 /** A scenario through its share link: no sign-in, read-only, computed on the server. Counts a view. */
 export default async function SharedScenarioPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const scenario = await openSharedScenario(getDb(), token).catch((error: unknown) => {
+  const db = getDb();
+  const { scenarioId, scenario } = await openSharedScenarioRecord(db, token).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
-  const { result, resultIssues } = computeShared(scenario.document);
+  const { result, resultIssues } = await computeShared(db, { scenarioId, version: scenario.version, document: scenario.document });
   return (
     <>
       <title>{`${scenario.title} · Branchline`}</title>

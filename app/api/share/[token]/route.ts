@@ -1,5 +1,5 @@
 import { getDb } from "@/db";
-import { openSharedScenario } from "@/db/share-links";
+import { openSharedScenarioRecord } from "@/db/share-links";
 import { json, route } from "@/lib/http";
 import { computeShared } from "@/lib/shared-budget";
 
@@ -10,6 +10,7 @@ type Params = { token: string };
  * (see docs/formats.md), or the reasons it cannot be computed. Counts a view. Read-only: nothing else exists here.
  */
 export const GET = route<Params>(async (_req, { token }) => {
-  const scenario = await openSharedScenario(getDb(), token);
-  return json({ scenario, ...computeShared(scenario.document) }, 200);
+  const db = getDb();
+  const { scenarioId, scenario } = await openSharedScenarioRecord(db, token);
+  return json({ scenario, ...(await computeShared(db, { scenarioId, version: scenario.version, document: scenario.document })) }, 200);
 });

@@ -1,9 +1,9 @@
 import { budgetExport, exportQuerySchema, fileResponse, scenarioExport } from "@/components/export/export-files";
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
-import { openSharedScenario } from "@/db/share-links";
+import { openSharedScenarioRecord } from "@/db/share-links";
 import { readQuery, route } from "@/lib/http";
-import { computeShared } from "@/lib/shared-budget";
+import { computeSaved, requireResult } from "@/lib/scenario-compute";
 
 type Params = { token: string };
 
@@ -13,10 +13,10 @@ type Params = { token: string };
  */
 export const GET = route<Params>(async (req, { token }) => {
   const { what } = readQuery(req, exportQuerySchema);
-  const scenario = await openSharedScenario(getDb(), token);
+  const db = getDb();
+  const { scenarioId, scenario } = await openSharedScenarioRecord(db, token);
   if (!scenario.document) throw new AppError("unprocessable", "this scenario's stored document cannot be read by this version of Branchline");
   if (what === "scenario") return fileResponse(scenarioExport({ title: scenario.title, document: scenario.document }));
-  const { result, resultIssues } = computeShared(scenario.document);
-  if (!result) throw new AppError("unprocessable", `this scenario cannot be computed: ${(resultIssues ?? []).map((i) => i.message).join("; ")}`);
+  const result = requireResult(await computeSaved(db, { scenarioId, version: scenario.version, document: scenario.document }));
   return fileResponse(budgetExport(scenario.title, result));
 });

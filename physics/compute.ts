@@ -19,6 +19,7 @@ import { peakBranchSpeed, separationHistory } from "./protocols";
 import type { SeparationHistory } from "./protocols/types";
 import { RESULT_FORMAT_VERSION, type ChannelResult, type ComputeOutcome, type ScenarioResult } from "./result";
 import { ScenarioInputError } from "./scenario/input-error";
+import { rangeIssues } from "./scenario/ranges";
 import { parseScenarioDocument, type ScenarioDocument } from "./scenario/schema";
 
 export interface ComputeOptions {
@@ -88,6 +89,8 @@ function combine(electromagnetic: ChannelResult, gravitational: ChannelResult): 
  * path) for a document that parses but cannot be computed; computeScenarioFromJson turns those into issues.
  */
 export function computeScenario(document: ScenarioDocument, options: ComputeOptions = {}): ScenarioResult {
+  const outOfRange = rangeIssues(document);
+  if (outOfRange.length > 0) throw new ScenarioInputError(outOfRange[0].path, outOfRange[0].message);
   const history = separationHistory(document);
   const background = makeBackground(document.background, document.lab);
   const estimates = [electromagneticSource(document, history), gravitationalSource(document, history)].map((source) => estimateChannel(document, history, background, source, options));
@@ -144,11 +147,18 @@ export function computeScenario(document: ScenarioDocument, options: ComputeOpti
 export function computeScenarioFromJson(input: unknown, options: ComputeOptions = {}): ComputeOutcome {
   const parsed = parseScenarioDocument(input);
   if (!parsed.ok) return { ok: false, issues: parsed.issues };
+  const outOfRange = rangeIssues(parsed.document);
+  if (outOfRange.length > 0) return { ok: false, issues: outOfRange };
   try {
     return { ok: true, result: computeScenario(parsed.document, options) };
   } catch (error) {
     if (error instanceof ScenarioInputError || error instanceof BackgroundInputError) {
       return { ok: false, issues: [{ path: error.path, message: error.message }] };
+    }
+    // A quantity that overflowed or lost every digit (physics/estimators/quantity.ts): a combination of parameters,
+    // each inside its range, that the engine still cannot compute. Said in words, not thrown at the caller.
+    if (error instanceof RangeError) {
+      return { ok: false, issues: [{ path: "", message: `this combination of parameters cannot be computed (${error.message}); move a parameter away from the extremes of its range` }] };
     }
     throw error;
   }

@@ -5,6 +5,7 @@
  * current one; an unknown or malformed document is answered with the list of what is wrong, never a crash.
  */
 import { z } from "zod";
+import { keptText } from "./text";
 
 export const CURRENT_SCHEMA_VERSION = 1 as const;
 
@@ -57,7 +58,7 @@ export const segmentsProtocolSchema = z.object({
 /** A separation profile s(t) ∈ [0, 1] × d, as a mathjs expression in t (seconds), over [0, durationSeconds]. */
 export const formulaProtocolSchema = z.object({
   kind: z.literal("formula"),
-  expression: z.string().min(1, "formula must not be empty").max(2000, "formula is too long"),
+  expression: keptText("formula must be text").min(1, "formula must not be empty").max(2000, "formula is too long"),
   durationSeconds: positive("formula duration"),
 });
 

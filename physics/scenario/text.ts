@@ -4,6 +4,8 @@
  * not a Unicode character at all and cannot be written as UTF-8.
  */
 
+import { z } from "zod";
+
 /** Why the text cannot be kept, in words, or null when it can. */
 export function textProblem(text: string): string | null {
   if (text.includes("\u0000")) return "must not contain a NUL character (U+0000)";
@@ -47,3 +49,10 @@ export function firstTextProblem(value: unknown): { path: string; message: strin
   }
   return null;
 }
+
+/** A zod string that refuses what textProblem refuses (typeError: the message when the value is not a string). */
+export const keptText = (typeError?: string) =>
+  z.string(typeError ? { error: typeError } : undefined).superRefine((value, ctx) => {
+    const problem = textProblem(value);
+    if (problem) ctx.addIssue({ code: "custom", message: problem });
+  });

@@ -20,11 +20,11 @@ export default async function EmbedPage({ params, searchParams }: { params: Prom
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
-  const { result } = computeShared(scenario.document);
+  const { result, resultIssues } = computeShared(scenario.document);
   return (
     <>
       <title>{`${scenario.title} · Branchline`}</title>
-      <EmbeddedDiagram title={scenario.title} document={scenario.document} version={scenario.version} result={result} sharePath={`/share/${encodeURIComponent(token)}`} options={options} />
+      <EmbeddedDiagram title={scenario.title} document={scenario.document} version={scenario.version} result={result} resultIssues={resultIssues} sharePath={`/share/${encodeURIComponent(token)}`} options={options} />
     </>
   );
 }

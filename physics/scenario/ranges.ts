@@ -42,9 +42,13 @@ export const PARAMETER_RANGES = {
   sourceMass: range("source.massKg", "source mass", 1e-40, 1e60, "kg", { zeroAllowed: true }),
   labMass: range("source.labMassKg", "lab mass", 1e-40, 1e60, "kg", { zeroAllowed: true }),
   separation: range("separation.distanceMetres", "separation", 1e-40, 1e30, "m", { zeroAllowed: true }),
-  rampDuration: range("protocol.*.durationSeconds", "ramp duration", 1e-20, 1e20, "s"),
-  holdDuration: range("protocol.hold.durationSeconds", "hold duration", 1e-20, 1e20, "s", { zeroAllowed: true }),
-  protocolDuration: range("protocol.durationSeconds", "protocol duration", 1e-20, 1e20, "s"),
+  // A hold computes up to 1e300 s (a count beyond a double is then reported by its log10 alone). A ramp many
+  // decades longer than a horizon's thermal time (about 1e140 thermal times) loses every digit, and below about
+  // 1e-110 s a ramp near a black hole does: ramps and whole profiles keep to 1e-30..1e20 s (the age of the
+  // universe is 4e17 s).
+  rampDuration: range("protocol.*.durationSeconds", "ramp duration", 1e-30, 1e20, "s"),
+  holdDuration: range("protocol.hold.durationSeconds", "hold duration", 1e-30, 1e300, "s", { zeroAllowed: true }),
+  protocolDuration: range("protocol.durationSeconds", "protocol duration", 1e-30, 1e20, "s"),
   sampleSeparation: range("protocol.samples.*.separationMetres", "sampled separation", 1e-40, 1e30, "m", { zeroAllowed: true, magnitude: true }),
 } as const satisfies Record<string, ParameterRange>;
 

@@ -2,5 +2,6 @@
 import type { NextConfig } from "next";
 
 export declare const frameHeaderRules: { source: string; headers: { key: string; value: string }[] }[];
+export declare const everyResponseHeaders: { source: string; headers: { key: string; value: string }[] };
 declare const nextConfig: NextConfig;
 export default nextConfig;

@@ -15,12 +15,25 @@ export const frameHeaderRules = [
   },
 ];
 
+/**
+ * Said on every response, pages, API and static files alike: never guess a content type (a JSON answer or a
+ * download is never run as a page), and send only the origin to other sites. The pages' Content-Security-Policy
+ * (script-src with a nonce, object-src, base-uri) is built per request in proxy.ts.
+ */
+export const everyResponseHeaders = {
+  source: "/:path*",
+  headers: [
+    { key: "X-Content-Type-Options", value: "nosniff" },
+    { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+  ],
+};
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   serverExternalPackages: ["pg", "nodemailer", "bcryptjs", "rate-limiter-flexible", "esbuild"],
   poweredByHeader: false,
   async headers() {
-    return frameHeaderRules;
+    return [...frameHeaderRules, everyResponseHeaders];
   },
 };
 

@@ -1,6 +1,7 @@
 import "server-only";
 import { type Kysely, sql } from "kysely";
 import { differsOnlyInDisplay } from "../physics/scenario/compare";
+import { rangeIssues } from "../physics/scenario/ranges";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
 import { AppError, invalid, notFound } from "./errors";
@@ -50,13 +51,18 @@ export interface ScenarioPage {
   pageSize: number;
 }
 
-/** Validates (and upgrades) a document from a client; throws a 400 listing every problem with its field path. */
-export function validDocument(input: unknown): ScenarioDocument {
+/**
+ * Validates (and upgrades) a document from a client, and checks every parameter against the range where the
+ * computation is defined (physics/scenario/ranges.ts); throws a 400 listing every problem with its field path.
+ * `ranges: false` only re-reads a stored document that is kept as it is (a title change).
+ */
+export function validDocument(input: unknown, options: { ranges?: boolean } = {}): ScenarioDocument {
   const parsed = parseScenarioDocument(input);
-  if (!parsed.ok) {
+  const issues = parsed.ok ? (options.ranges === false ? [] : rangeIssues(parsed.document)) : parsed.issues;
+  if (!parsed.ok || issues.length > 0) {
     throw invalid(
       "the scenario document is not valid",
-      parsed.issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })),
+      issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })),
     );
   }
   return parsed.document;
@@ -236,7 +242,7 @@ export async function updateScenario(
         { currentVersion: current.version },
       );
     }
-    return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document) };
+    return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document, { ranges: false }) };
   }, { amendDisplay: true });
 }
 

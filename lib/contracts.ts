@@ -3,30 +3,32 @@
  * (which show the same messages inline). Pure zod: no server code, safe to import in the browser.
  */
 import { z } from "zod";
+import { keptText } from "../physics/scenario/text";
 
-export const emailSchema = z.string().trim().toLowerCase().email("enter a valid e-mail address").max(320, "e-mail address is too long");
-export const passwordSchema = z.string().min(10, "use at least 10 characters").max(200, "use at most 200 characters");
-export const displayNameSchema = z.string().trim().min(1, "enter a name").max(200, "use at most 200 characters");
+// Every text a request carries goes through keptText: no NUL and no lone surrogate, refused with the field's path.
+export const emailSchema = keptText().trim().toLowerCase().email("enter a valid e-mail address").max(320, "e-mail address is too long");
+export const passwordSchema = keptText().min(10, "use at least 10 characters").max(200, "use at most 200 characters");
+export const displayNameSchema = keptText().trim().min(1, "enter a name").max(200, "use at most 200 characters");
 export const projectRoleSchema = z.enum(["owner", "editor", "viewer"], { error: "role must be owner, editor or viewer" });
 export const siteRoleSchema = z.enum(["admin", "member"], { error: "site role must be admin or member" });
 
 export const signUpSchema = z.object({ email: emailSchema, name: displayNameSchema, password: passwordSchema });
 export const passwordResetRequestSchema = z.object({ email: emailSchema });
-export const passwordResetConfirmSchema = z.object({ token: z.string().min(10, "the reset token is missing"), password: passwordSchema });
+export const passwordResetConfirmSchema = z.object({ token: keptText().min(10, "the reset token is missing"), password: passwordSchema });
 export const accountUpdateSchema = z.object({ name: displayNameSchema.optional() }).strict();
 export const siteRoleUpdateSchema = z.object({ siteRole: siteRoleSchema }).strict();
 
-export const projectNameSchema = z.string().trim().min(1, "enter a project name").max(200, "use at most 200 characters");
-export const projectCreateSchema = z.object({ name: projectNameSchema, description: z.string().max(2000, "use at most 2000 characters").optional() }).strict();
+export const projectNameSchema = keptText().trim().min(1, "enter a project name").max(200, "use at most 200 characters");
+export const projectCreateSchema = z.object({ name: projectNameSchema, description: keptText().max(2000, "use at most 2000 characters").optional() }).strict();
 export const projectUpdateSchema = z
-  .object({ name: projectNameSchema.optional(), description: z.string().max(2000, "use at most 2000 characters").optional() })
+  .object({ name: projectNameSchema.optional(), description: keptText().max(2000, "use at most 2000 characters").optional() })
   .strict()
   .refine((v) => v.name !== undefined || v.description !== undefined, { message: "nothing to change: give a name or a description" });
 
 export const memberAddSchema = z.object({ email: emailSchema, role: projectRoleSchema }).strict();
 export const memberUpdateSchema = z.object({ role: projectRoleSchema }).strict();
 
-export const scenarioTitleSchema = z.string().trim().min(1, "enter a title").max(200, "use at most 200 characters");
+export const scenarioTitleSchema = keptText().trim().min(1, "enter a title").max(200, "use at most 200 characters");
 /** The document itself is checked against the physics schema (with upgrades of older versions) by the server. */
 export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: z.unknown().optional() }).strict();
 export const scenarioUpdateSchema = z
@@ -43,17 +45,17 @@ export const scenarioListQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(100, "at most 100 per page").default(25),
   sort: z.enum(["title", "updatedAt", "createdAt", "backgroundKind"]).default("updatedAt"),
   order: z.enum(["asc", "desc"]).default("desc"),
-  q: z.string().max(200).optional(),
+  q: keptText().max(200).optional(),
   background: z.enum(["minkowski", "schwarzschild", "rindler", "de-sitter"]).optional(),
 });
 export type ScenarioListQueryInput = z.input<typeof scenarioListQuerySchema>;
 
 export const invitedRoleSchema = z.enum(["editor", "viewer"], { error: "invite as editor or viewer; make someone an owner once they have joined" });
 export const invitationCreateSchema = z.object({ email: emailSchema, role: invitedRoleSchema }).strict();
-export const ownershipTransferSchema = z.object({ userId: z.string({ error: "choose the member who becomes owner" }).min(1, "choose the member who becomes owner") }).strict();
+export const ownershipTransferSchema = z.object({ userId: keptText("choose the member who becomes owner").min(1, "choose the member who becomes owner") }).strict();
 
 export const SHARE_LINK_MAX_DAYS = 365;
-export const shareLinkLabelSchema = z.string().trim().min(1, "say who the link is for, e.g. “for the referee”").max(200, "use at most 200 characters");
+export const shareLinkLabelSchema = keptText().trim().min(1, "say who the link is for, e.g. “for the referee”").max(200, "use at most 200 characters");
 export const shareLinkCreateSchema = z
   .object({
     label: shareLinkLabelSchema,
@@ -96,8 +98,8 @@ const yes = z
 
 /** The settings of a sequencer profile upload, from the query, the multipart fields or the JSON body. */
 export const sequencerProfileOptionsSchema = z.object({
-  timeUnit: z.string().trim().max(20, "a unit is at most 20 characters").optional(),
-  separationUnit: z.string().trim().max(20, "a unit is at most 20 characters").optional(),
+  timeUnit: keptText().trim().max(20, "a unit is at most 20 characters").optional(),
+  separationUnit: keptText().trim().max(20, "a unit is at most 20 characters").optional(),
   interpolation: z.enum(["linear", "cubic-spline"], { error: "interpolation is linear or cubic-spline" }).default("linear"),
   dryRun: z.union([z.boolean(), yes]).default(false),
   /** The scenario version the caller edited; required unless dryRun. */
@@ -105,7 +107,7 @@ export const sequencerProfileOptionsSchema = z.object({
 });
 /** A sequencer profile as JSON: the CSV text beside the same settings. */
 export const sequencerProfileJsonSchema = sequencerProfileOptionsSchema.extend({
-  csv: z.string({ error: "csv must be the file's text" }).min(1, "the file is empty"),
+  csv: keptText("csv must be the file's text").min(1, "the file is empty"),
 });
 
 /** ?what= of the export routes: the scenario file or the Budget as CSV. */

@@ -3,6 +3,8 @@ import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
 import type { Actor } from "../db/access";
 import { AppError, type ErrorCode, type FieldIssue } from "../db/errors";
+import { firstTextProblem } from "../physics/scenario/text";
+import { readBodyText } from "./request-body";
 import { actorFromRequest } from "./session";
 
 const statusOf: Record<ErrorCode, number> = {
@@ -37,29 +39,36 @@ function zodIssues(error: z.ZodError, prefix = ""): FieldIssue[] {
   return error.issues.map((i) => ({ path: [prefix, ...i.path.map(String)].filter(Boolean).join("."), message: i.message }));
 }
 
-export async function readJson<T extends z.ZodType>(req: Request, schema: T): Promise<z.infer<T>> {
-  const length = Number(req.headers.get("content-length") ?? 0);
-  if (length > MAX_JSON_BYTES) throw new AppError("payload_too_large", `the request body is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB`);
-  let text: string;
-  try {
-    text = await req.text();
-  } catch {
-    throw new AppError("bad_request", "the request body could not be read");
-  }
-  if (text.length > MAX_JSON_BYTES) throw new AppError("payload_too_large", `the request body is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB`);
+/** Where a text problem sits, as a field path the client can show ("the request body" for the body itself). */
+function textIssue(where: string, found: { path: string; message: string }): AppError {
+  const field = found.path || where;
+  return new AppError("validation_failed", `${field} ${found.message}`, [{ path: found.path, message: found.message }]);
+}
+
+/**
+ * Reads a JSON body through the one streaming reader (lib/request-body.ts) and validates it: 413 past
+ * `limitBytes`, 400 for broken JSON, a NUL or lone surrogate anywhere (naming the field), or a schema failure.
+ */
+export async function readJson<T extends z.ZodType>(req: Request, schema: T, limitBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
+  const text = await readBodyText(req, { limit: limitBytes, what: "the request body" });
   let json: unknown;
   try {
     json = text ? JSON.parse(text) : undefined;
   } catch {
     throw new AppError("bad_request", "the request body is not valid JSON");
   }
+  const problem = firstTextProblem(json);
+  if (problem) throw textIssue("the request body", problem);
   const parsed = schema.safeParse(json);
   if (!parsed.success) throw new AppError("validation_failed", "the request body is not valid", zodIssues(parsed.error));
   return parsed.data;
 }
 
 export function readQuery<T extends z.ZodType>(req: NextRequest, schema: T): z.infer<T> {
-  const parsed = schema.safeParse(Object.fromEntries(req.nextUrl.searchParams));
+  const query = Object.fromEntries(req.nextUrl.searchParams);
+  const problem = firstTextProblem(query);
+  if (problem) throw textIssue("the query", problem);
+  const parsed = schema.safeParse(query);
   if (!parsed.success) throw new AppError("validation_failed", "the query parameters are not valid", zodIssues(parsed.error));
   return parsed.data;
 }

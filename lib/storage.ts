@@ -115,7 +115,7 @@ export function createObjectStore(config: StorageConfig = storageConfig()): Obje
     bucket: config.bucket,
     put: (key, body, contentType) =>
       guarded(async () => {
-        await client.send(new PutObjectCommand({ Bucket: config.bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.byteLength }));
+        await client.send(new PutObjectCommand({ Bucket: config.bucket, Key: key, Body: body, ContentType: contentType, ContentDisposition: "attachment", ContentLength: body.byteLength }));
       }),
     get: (key) =>
       guarded(async () => {

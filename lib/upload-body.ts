@@ -8,7 +8,7 @@ import "server-only";
  */
 import type { NextRequest } from "next/server";
 import { AppError } from "../db/errors";
-import { fileSize } from "./contracts";
+import { bodyTooLarge, readBodyBytes } from "./request-body";
 
 /** A request whose content type the route does not take, or a file whose content is not what it says (415). */
 export const unsupportedMediaType = (message: string) => new AppError("unsupported_media_type", message);
@@ -24,43 +24,6 @@ export interface UploadedFile {
 /** Room for the multipart boundaries and headers around the file itself. */
 const MULTIPART_OVERHEAD = 64 * 1024;
 
-
-const tooLarge = (what: string, maxBytes: number, size?: number) =>
-  new AppError("payload_too_large", `${what} is ${size === undefined ? "larger than the limit" : fileSize(size)}; the limit is ${fileSize(maxBytes)}`, undefined, {
-    limitBytes: maxBytes,
-  });
-
-async function readLimited(req: NextRequest, limit: number, what: string, maxBytes: number): Promise<Uint8Array> {
-  const declared = Number(req.headers.get("content-length") ?? NaN);
-  if (Number.isFinite(declared) && declared > limit) throw tooLarge(what, maxBytes, declared);
-  if (!req.body) return new Uint8Array();
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  try {
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      size += value.byteLength;
-      if (size > limit) {
-        await reader.cancel();
-        throw tooLarge(what, maxBytes);
-      }
-      chunks.push(value);
-    }
-  } catch (error) {
-    if (error instanceof AppError) throw error;
-    throw new AppError("bad_request", "the request body could not be read");
-  }
-  const bytes = new Uint8Array(size);
-  let at = 0;
-  for (const chunk of chunks) {
-    bytes.set(chunk, at);
-    at += chunk.byteLength;
-  }
-  return bytes;
-}
-
 const mediaTypeOf = (req: NextRequest) => (req.headers.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
 
 /**
@@ -72,7 +35,7 @@ export async function readUpload(req: NextRequest, options: { maxBytes: number; 
   const type = mediaTypeOf(req);
   const query = Object.fromEntries(req.nextUrl.searchParams);
   if (type === "multipart/form-data") {
-    const raw = await readLimited(req, maxBytes + MULTIPART_OVERHEAD, what, maxBytes);
+    const raw = await readBodyBytes(req, { limit: maxBytes + MULTIPART_OVERHEAD, what, maxBytes });
     let form: FormData;
     try {
       form = await new Response(raw as BodyInit, { headers: { "content-type": req.headers.get("content-type")! } }).formData();
@@ -82,7 +45,7 @@ export async function readUpload(req: NextRequest, options: { maxBytes: number; 
     const file = form.get("file");
     if (!(file instanceof Blob)) throw new AppError("bad_request", "a multipart upload needs the file in a field named 'file'", [{ path: "file", message: "choose a file" }]);
     const bytes = new Uint8Array(await file.arrayBuffer());
-    if (bytes.byteLength > maxBytes) throw tooLarge(what, maxBytes, bytes.byteLength);
+    if (bytes.byteLength > maxBytes) throw bodyTooLarge(what, maxBytes, bytes.byteLength);
     if (bytes.byteLength === 0) throw new AppError("unprocessable", `${what} is empty`, [{ path: "file", message: "the file is empty" }]);
     const fields: Record<string, string> = { ...query };
     for (const [key, value] of form.entries()) if (typeof value === "string") fields[key] = value;
@@ -92,7 +55,7 @@ export async function readUpload(req: NextRequest, options: { maxBytes: number; 
   if (!accepted) {
     throw unsupportedMediaType(`${what} must be sent as ${[...options.accept, "multipart/form-data"].join(", ")}; this request is ${type || "without a content type"}`);
   }
-  const bytes = await readLimited(req, maxBytes, what, maxBytes);
+  const bytes = await readBodyBytes(req, { limit: maxBytes, what });
   if (bytes.byteLength === 0) throw new AppError("unprocessable", `${what} is empty`, [{ path: "file", message: "the file is empty" }]);
   const header = req.headers.get("x-file-name");
   let name: string | null = query.name ?? null;

@@ -20,6 +20,7 @@ import { peakBranchSpeed, separationHistory } from "./protocols";
 import type { SeparationHistory } from "./protocols/types";
 import { RESULT_FORMAT_VERSION, type ChannelResult, type ComputeOutcome, type ScenarioResult } from "./result";
 import { ScenarioInputError } from "./scenario/input-error";
+import { rangeIssues } from "./scenario/ranges";
 import { parseScenarioDocument, type ScenarioDocument } from "./scenario/schema";
 
 export interface ComputeOptions {
@@ -89,6 +90,8 @@ function combine(electromagnetic: ChannelResult, gravitational: ChannelResult): 
  * path) for a document that parses but cannot be computed; computeScenarioFromJson turns those into issues.
  */
 export function computeScenario(document: ScenarioDocument, options: ComputeOptions = {}): ScenarioResult {
+  const outOfRange = rangeIssues(document);
+  if (outOfRange.length > 0) throw new ScenarioInputError(outOfRange[0].path, outOfRange[0].message);
   const history = separationHistory(document);
   const background = makeBackground(document.background, document.lab);
   const estimates = [electromagneticSource(document, history), gravitationalSource(document, history)].map((source) => estimateChannel(document, history, background, source, options));
@@ -156,13 +159,20 @@ export function computeScenarioFromJson(input: unknown, options: ComputeOptions 
   return computeParsedScenario(parsed.document, options);
 }
 
-/** Computes a parsed document: the result, or the issue of a document that parses but cannot be computed. */
+/** Computes a parsed document: the result, or the issues of a document that parses but cannot be computed. */
 export function computeParsedScenario(document: ScenarioDocument, options: ComputeOptions = {}): ComputeOutcome {
+  const outOfRange = rangeIssues(document);
+  if (outOfRange.length > 0) return { ok: false, issues: outOfRange };
   try {
     return { ok: true, result: computeScenario(document, options) };
   } catch (error) {
     if (error instanceof ScenarioInputError || error instanceof BackgroundInputError) {
       return { ok: false, issues: [{ path: error.path, message: error.message }] };
+    }
+    // A quantity that overflowed or lost every digit (physics/estimators/quantity.ts): a combination of parameters,
+    // each inside its range, that the engine still cannot compute. Said in words, not thrown at the caller.
+    if (error instanceof RangeError) {
+      return { ok: false, issues: [{ path: "", message: `this combination of parameters cannot be computed (${error.message}); move a parameter away from the extremes of its range` }] };
     }
     throw error;
   }

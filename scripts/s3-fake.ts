@@ -6,16 +6,20 @@
  * What the SDK needs and no more: CreateBucket (PUT /b), HeadBucket (HEAD /b), ListObjectsV2 (GET /b?list-type=2),
  * PutObject, GetObject, HeadObject and DeleteObject. Errors are S3's XML error documents.
  *
- * Requests signed in the Authorization header are accepted from anyone who can reach loopback. Presigned requests
- * (the signature in the query) are checked for real: AWS Signature Version 4 over the canonical request, with the
- * secret key of S3_FAKE_ACCESS_KEY_ID / S3_FAKE_SECRET_ACCESS_KEY, and refused with 403 once X-Amz-Date plus
- * X-Amz-Expires has passed. (Signature Version 4 as AWS documents it: "Authenticating Requests: Using Query
- * Parameters", Amazon S3 API Reference.)
+ * Every request must be signed, as a real store wants: in the Authorization header or in the query (a presigned
+ * link), with AWS Signature Version 4 and the key S3_FAKE_ACCESS_KEY_ID / S3_FAKE_SECRET_ACCESS_KEY. The check is the
+ * AWS SDK's own signer (@smithy/signature-v4) run again over the request as received and compared; an unsigned
+ * request (a presigned link with its query removed) is 403, a presigned one is 403 once X-Amz-Date plus
+ * X-Amz-Expires has passed, a header-signed one when its date is more than 15 minutes off, and a PUT whose body
+ * does not match its signed x-amz-content-sha256 is 400. Objects are served with Content-Security-Policy: sandbox
+ * and their Content-Disposition. (Signature Version 4 as AWS documents it: "Authenticating Requests", Amazon S3 API
+ * Reference.)
  */
 import { createHash, createHmac, timingSafeEqual } from "node:crypto";
 import { mkdirSync, existsSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync } from "node:fs";
 import http from "node:http";
 import path from "node:path";
+import { SignatureV4 } from "@smithy/signature-v4";
 
 const port = Number(process.env.S3_FAKE_PORT ?? 4566);
 const root = path.resolve(process.env.S3_FAKE_DIR ?? ".data/s3");
@@ -26,6 +30,7 @@ const MAX_OBJECT_BYTES = 64 * 1024 * 1024;
 
 interface ObjectMeta {
   contentType: string;
+  contentDisposition?: string;
   size: number;
   etag: string;
   lastModified: string;
@@ -75,11 +80,25 @@ async function readBody(req: http.IncomingMessage): Promise<Buffer | "too large"
   return Buffer.concat(chunks);
 }
 
-const sha256Hex = (data: string) => createHash("sha256").update(data).digest("hex");
-const hmac = (key: Buffer | string, data: string) => createHmac("sha256", key).update(data).digest();
-
-/** RFC 3986 encoding as Signature Version 4 wants it (encodeURIComponent leaves !'()* alone). */
-const uriEncode = (text: string) => encodeURIComponent(text).replace(/[!'()*]/g, (ch) => `%${ch.charCodeAt(0).toString(16).toUpperCase()}`);
+/** SHA-256 and HMAC-SHA-256 from node:crypto, in the shape the SDK's signer takes (its ChecksumConstructor). */
+class NodeSha256 {
+  private readonly hash;
+  constructor(secret?: SourceData) {
+    this.hash = secret === undefined ? createHash("sha256") : createHmac("sha256", toBuffer(secret));
+  }
+  update(data: SourceData): void {
+    this.hash.update(toBuffer(data));
+  }
+  async digest(): Promise<Uint8Array> {
+    return new Uint8Array(this.hash.digest());
+  }
+  reset(): void {
+    throw new Error("not used by the signer");
+  }
+}
+type SourceData = string | ArrayBuffer | ArrayBufferView;
+const toBuffer = (data: SourceData) =>
+  typeof data === "string" ? Buffer.from(data, "utf8") : ArrayBuffer.isView(data) ? Buffer.from(data.buffer, data.byteOffset, data.byteLength) : Buffer.from(data);
 
 /** X-Amz-Date is yyyymmddThhmmssZ. */
 function parseAmzDate(text: string): Date | null {
@@ -87,8 +106,44 @@ function parseAmzDate(text: string): Date | null {
   return m ? new Date(Date.UTC(+m[1], +m[2] - 1, +m[3], +m[4], +m[5], +m[6])) : null;
 }
 
-/** Checks a presigned request; answers null when it may go ahead, else [status, code, message]. */
-function checkPresigned(req: http.IncomingMessage, url: URL): [number, string, string] | null {
+/** The signer as S3 uses it: paths are signed as sent (S3 does not encode them twice). */
+const signerFor = (region: string, service: string) =>
+  new SignatureV4({ credentials: { accessKeyId, secretAccessKey }, region, service, sha256: NodeSha256, uriEscapePath: false, applyChecksum: false });
+
+type Refusal = [number, string, string];
+const mismatch: Refusal = [403, "SignatureDoesNotMatch", "The request signature we calculated does not match the signature you provided"];
+
+function sameSignature(given: string, expected: string): boolean {
+  const a = Buffer.from(given);
+  const b = Buffer.from(expected);
+  return a.length === b.length && timingSafeEqual(a, b);
+}
+
+/** The incoming request as the signer sees one: only the headers the client signed, the query without `omit`. */
+function asHttpRequest(req: http.IncomingMessage, url: URL, signedHeaders: string[], omit: (key: string) => boolean) {
+  const headers: Record<string, string> = {};
+  for (const name of signedHeaders) headers[name] = String(req.headers[name] ?? "");
+  const query: Record<string, string | string[]> = {};
+  for (const [k, v] of url.searchParams) {
+    if (omit(k)) continue;
+    const had = query[k];
+    query[k] = had === undefined ? v : Array.isArray(had) ? [...had, v] : [had, v];
+  }
+  return { method: req.method ?? "GET", protocol: "http:", hostname: url.hostname, port: Number(url.port) || undefined, path: url.pathname, query, headers };
+}
+
+function parseCredential(text: string): { day: string; region: string; service: string } | Refusal {
+  const credential = text.split("/");
+  if (credential.length !== 5 || credential[4] !== "aws4_request") return [400, "AuthorizationHeaderMalformed", "The credential is malformed"];
+  if (credential[0] !== accessKeyId) return [403, "InvalidAccessKeyId", "The access key in the request is not known to this store"];
+  return { day: credential[1], region: credential[2], service: credential[3] };
+}
+
+/**
+ * Checks a presigned request (Signature Version 4 in the query) by presigning the same request again with the
+ * SDK's own signer and comparing; answers null when it may go ahead.
+ */
+async function checkPresigned(req: http.IncomingMessage, url: URL): Promise<Refusal | null> {
   const q = url.searchParams;
   if (q.get("X-Amz-Algorithm") !== "AWS4-HMAC-SHA256") return [400, "AuthorizationQueryParametersError", "X-Amz-Algorithm must be AWS4-HMAC-SHA256"];
   const signedAt = parseAmzDate(q.get("X-Amz-Date") ?? "");
@@ -97,27 +152,50 @@ function checkPresigned(req: http.IncomingMessage, url: URL): [number, string, s
     return [400, "AuthorizationQueryParametersError", "X-Amz-Date and X-Amz-Expires (1 to 604800 seconds) are required"];
   }
   if (Date.now() > signedAt.getTime() + expires * 1000) return [403, "AccessDenied", "Request has expired"];
-  const credential = (q.get("X-Amz-Credential") ?? "").split("/");
-  if (credential.length !== 5 || credential[0] !== accessKeyId) return [403, "InvalidAccessKeyId", "The access key in the request is not known to this store"];
-  const [, day, region, service] = credential;
+  const credential = parseCredential(q.get("X-Amz-Credential") ?? "");
+  if (Array.isArray(credential)) return credential;
   const signedHeaders = (q.get("X-Amz-SignedHeaders") ?? "").split(";").filter(Boolean);
-  const canonicalQuery = [...q.entries()]
-    .filter(([k]) => k !== "X-Amz-Signature")
-    .map(([k, v]) => [uriEncode(k), uriEncode(v)])
-    .sort(([a, av], [b, bv]) => (a < b ? -1 : a > b ? 1 : av < bv ? -1 : av > bv ? 1 : 0))
-    .map(([k, v]) => `${k}=${v}`)
-    .join("&");
-  const canonicalHeaders = signedHeaders.map((h) => `${h}:${String(req.headers[h] ?? "").trim().replace(/\s+/g, " ")}\n`).join("");
-  const canonicalRequest = [req.method, url.pathname, canonicalQuery, canonicalHeaders, signedHeaders.join(";"), "UNSIGNED-PAYLOAD"].join("\n");
-  const scope = `${day}/${region}/${service}/aws4_request`;
-  const stringToSign = ["AWS4-HMAC-SHA256", q.get("X-Amz-Date"), scope, sha256Hex(canonicalRequest)].join("\n");
-  const signingKey = hmac(hmac(hmac(hmac(`AWS4${secretAccessKey}`, day), region), service), "aws4_request");
-  const expected = Buffer.from(createHmac("sha256", signingKey).update(stringToSign).digest("hex"));
-  const given = Buffer.from(q.get("X-Amz-Signature") ?? "");
-  if (given.length !== expected.length || !timingSafeEqual(given, expected)) {
-    return [403, "SignatureDoesNotMatch", "The request signature we calculated does not match the signature you provided"];
-  }
-  return null;
+  const authParams = new Set(["X-Amz-Algorithm", "X-Amz-Credential", "X-Amz-Date", "X-Amz-Expires", "X-Amz-SignedHeaders", "X-Amz-Signature"]);
+  // The presigner hoists its X-Amz-Content-Sha256 header (UNSIGNED-PAYLOAD) into the query, and the signer reads the
+  // payload hash from a header: hand it back as the header it was (same spelling, so it is hoisted to the same key).
+  const payloadHash = q.get("X-Amz-Content-Sha256");
+  const request = asHttpRequest(req, url, signedHeaders, (k) => authParams.has(k) || k === "X-Amz-Content-Sha256");
+  if (payloadHash !== null) request.headers["X-Amz-Content-Sha256"] = payloadHash;
+  const presigned = await signerFor(credential.region, credential.service).presign(request, {
+    signingDate: signedAt,
+    expiresIn: expires,
+    signableHeaders: new Set(signedHeaders),
+    unsignableHeaders: new Set(Object.keys(request.headers).filter((h) => !signedHeaders.includes(h))),
+  });
+  return sameSignature(q.get("X-Amz-Signature") ?? "", String(presigned.query?.["X-Amz-Signature"] ?? "")) ? null : mismatch;
+}
+
+/**
+ * Checks a request signed in the Authorization header by signing the same request again with the SDK's signer and
+ * comparing; the payload hash the client declared (x-amz-content-sha256) is what is signed, and a PUT's body is
+ * checked against it when it arrives.
+ */
+async function checkHeaderSigned(req: http.IncomingMessage, url: URL): Promise<Refusal | null> {
+  const m = /^AWS4-HMAC-SHA256 Credential=([^,\s]+),\s*SignedHeaders=([^,\s]+),\s*Signature=([0-9a-f]{64})$/.exec(String(req.headers.authorization ?? ""));
+  if (!m) return [400, "AuthorizationHeaderMalformed", "The authorization header is malformed"];
+  const credential = parseCredential(m[1]);
+  if (Array.isArray(credential)) return credential;
+  const signedAt = parseAmzDate(String(req.headers["x-amz-date"] ?? ""));
+  if (!signedAt) return [403, "AccessDenied", "X-Amz-Date is required"];
+  if (Math.abs(Date.now() - signedAt.getTime()) > 15 * 60 * 1000) return [403, "RequestTimeTooSkewed", "The difference between the request time and the current time is too large"];
+  const signedHeaders = m[2].split(";");
+  if (!signedHeaders.includes("host") || !signedHeaders.includes("x-amz-date")) return mismatch;
+  const request = asHttpRequest(req, url, signedHeaders, () => false);
+  const signed = await signerFor(credential.region, credential.service).sign(request, { signingDate: signedAt });
+  const expected = /Signature=([0-9a-f]{64})/.exec(String(signed.headers.authorization ?? signed.headers.Authorization ?? ""))?.[1] ?? "";
+  return sameSignature(m[3], expected) ? null : mismatch;
+}
+
+/** Every request is signed, in the Authorization header or in the query; anything else is refused with 403. */
+function checkSigned(req: http.IncomingMessage, url: URL): Promise<Refusal | null> {
+  if (url.searchParams.has("X-Amz-Signature")) return checkPresigned(req, url);
+  if (req.headers.authorization) return checkHeaderSigned(req, url);
+  return Promise.resolve([403, "AccessDenied", "Anonymous access is forbidden: sign the request or use a presigned link"]);
 }
 
 function listObjects(res: http.ServerResponse, bucket: string, url: URL): void {
@@ -174,9 +252,14 @@ async function handleObject(req: http.IncomingMessage, res: http.ServerResponse,
     }
     const body = await readBody(req);
     if (body === "too large") return sendError(res, 400, "EntityTooLarge", "Your proposed upload exceeds the maximum allowed size", resource);
+    const declaredHash = String(req.headers["x-amz-content-sha256"] ?? "");
+    if (/^[0-9a-f]{64}$/.test(declaredHash) && createHash("sha256").update(body).digest("hex") !== declaredHash) {
+      return sendError(res, 400, "XAmzContentSHA256Mismatch", "The provided 'x-amz-content-sha256' header does not match what was computed", resource);
+    }
     const etag = createHash("md5").update(body).digest("hex");
     const meta: ObjectMeta = {
       contentType: String(req.headers["content-type"] ?? "application/octet-stream"),
+      contentDisposition: req.headers["content-disposition"] ? String(req.headers["content-disposition"]) : undefined,
       size: body.length,
       etag,
       lastModified: new Date().toISOString(),
@@ -202,8 +285,11 @@ async function handleObject(req: http.IncomingMessage, res: http.ServerResponse,
       "content-length": meta.size,
       etag: `"${meta.etag}"`,
       "last-modified": new Date(meta.lastModified).toUTCString(),
+      // What a store's bucket policy or CDN should add for user files: never run them as a page of this origin.
+      "content-security-policy": "sandbox",
+      "x-content-type-options": "nosniff",
     };
-    const disposition = url.searchParams.get("response-content-disposition");
+    const disposition = url.searchParams.get("response-content-disposition") ?? meta.contentDisposition;
     if (disposition) headers["content-disposition"] = disposition;
     res.writeHead(200, headers);
     if (req.method === "HEAD") return void res.end();
@@ -218,10 +304,8 @@ const server = http.createServer((req, res) => {
   const [bucket, ...rest] = url.pathname.slice(1).split("/");
   const key = rest.map((part) => decodeURIComponent(part)).join("/");
   const handle = async () => {
-    if (url.searchParams.has("X-Amz-Signature")) {
-      const refusal = checkPresigned(req, url);
-      if (refusal) return sendError(res, refusal[0], refusal[1], refusal[2], url.pathname);
-    }
+    const refusal = await checkSigned(req, url);
+    if (refusal) return sendError(res, refusal[0], refusal[1], refusal[2], url.pathname);
     if (!bucket) return sendError(res, 501, "NotImplemented", "This fake store does not list buckets", "/");
     if (key) return handleObject(req, res, decodeURIComponent(bucket), key, url);
     return handleBucket(req, res, decodeURIComponent(bucket), url);

@@ -34,6 +34,8 @@ export interface EmbeddedDiagramProps {
   document: ScenarioDocument | null;
   version: number;
   result: ScenarioResult | null;
+  /** Why the numbers cannot be computed (a stored document outside the ranges where the computation is defined). */
+  resultIssues?: { path: string; message: string }[] | null;
   /** The share page of the same link ("open in Branchline"). */
   sharePath: string;
   options: EmbedOptions;
@@ -109,7 +111,7 @@ function RunningCounts({ running, result }: { running: RunningQuanta; result: Sc
   );
 }
 
-function EmbedBody({ title, result, sharePath, options, palette }: Omit<EmbeddedDiagramProps, "document" | "version"> & { palette: FigurePalette }) {
+function EmbedBody({ title, result, resultIssues, sharePath, options, palette }: Omit<EmbeddedDiagramProps, "document" | "version"> & { palette: FigurePalette }) {
   const document = useEditor((s) => s.document);
   const outcome = useEditor((s) => s.diagramScene(s.document));
   const history = useMemo(() => profileHistory(document), [document]);
@@ -195,6 +197,11 @@ function EmbedBody({ title, result, sharePath, options, palette }: Omit<Embedded
             approximation: the computed totals shared out along lab time
           </span>
         </div>
+      )}
+      {!result && resultIssues && resultIssues.length > 0 && (
+        <p className={`px-3 pt-1 ${text}`} role="status" data-testid="embed-issues">
+          The numbers cannot be computed: {resultIssues.map((i) => `${i.message}${i.path ? ` (${i.path})` : ""}`).join("; ")}
+        </p>
       )}
       {outcome.ok && outcome.scene.notes.length > 0 && (
         <p className={`px-3 pt-1 ${text} opacity-80`} data-testid="embed-notes">

@@ -8,6 +8,8 @@
  *     "exportedAt": "2026-12-02T10:00:00.000Z", "document": { "schemaVersion": 1, ... } }
  */
 import { z } from "zod";
+import { rangeIssues } from "./ranges";
+import { keptText } from "./text";
 import { parseScenarioDocument, type ScenarioDocument, type SchemaIssue } from "./schema";
 
 export const SCENARIO_FILE_FORMAT = "branchline-scenario" as const;
@@ -22,8 +24,8 @@ const envelopeSchema = z.object({
     .int("formatVersion must be a whole number")
     .min(1, "formatVersion must be at least 1")
     .max(SCENARIO_FILE_VERSION, `formatVersion is newer than this Branchline (${SCENARIO_FILE_VERSION}); update Branchline to read it`),
-  title: z.string({ error: "title must be text" }).trim().min(1, "title must not be empty").max(200, "title may have at most 200 characters"),
-  description: z.string({ error: "description must be text" }).max(5000, "description may have at most 5000 characters").optional(),
+  title: keptText("title must be text").trim().min(1, "title must not be empty").max(200, "title may have at most 200 characters"),
+  description: keptText("description must be text").max(5000, "description may have at most 5000 characters").optional(),
   exportedAt: z.string().optional(),
   document: z.unknown(),
 });
@@ -86,7 +88,8 @@ export function parseScenarioFile(input: unknown): ScenarioFileParse {
     return { ok: false, issues };
   }
   const document = parseScenarioDocument(raw);
-  if (!document.ok) issues.push(...document.issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })));
+  const documentIssues = document.ok ? rangeIssues(document.document) : document.issues;
+  issues.push(...documentIssues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })));
   if (issues.length > 0 || !envelope.success || !document.ok) return { ok: false, issues };
   return { ok: true, title: envelope.data.title, description: envelope.data.description, document: document.document };
 }

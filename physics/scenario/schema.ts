@@ -7,6 +7,7 @@
  */
 import { z } from "zod";
 import { environmentSchema, upgradeVersion1To2 } from "./environment-schema";
+import { keptText } from "./text";
 
 export const CURRENT_SCHEMA_VERSION = 2 as const;
 
@@ -59,7 +60,7 @@ export const segmentsProtocolSchema = z.object({
 /** A separation profile s(t) ∈ [0, 1] × d, as a mathjs expression in t (seconds), over [0, durationSeconds]. */
 export const formulaProtocolSchema = z.object({
   kind: z.literal("formula"),
-  expression: z.string().min(1, "formula must not be empty").max(2000, "formula is too long"),
+  expression: keptText("formula must be text").min(1, "formula must not be empty").max(2000, "formula is too long"),
   durationSeconds: positive("formula duration"),
 });
 

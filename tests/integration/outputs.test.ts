@@ -101,4 +101,28 @@ describe("the proxy in front of the embeds", () => {
     await call(shareLinkRoute.DELETE, "DELETE", "/x", { as: f.users.owner, params: { ...S(f), linkId: link.id } });
     expect(await status(`/embed/${link.token}`)).toBe(404);
   });
+
+  it("answers 400 for a path segment that does not decode (%ff), on every dynamic page", async () => {
+    for (const path of ["/share/%ff", "/embed/%ff", "/invitations/%ff", "/projects/%ff", "/projects/%ff/scenarios/%ff", "/projects/p/scenarios/%E0%A4%A/files"]) {
+      expect(await status(path), path).toBe(400);
+    }
+  });
+
+  it("gives every page a Content-Security-Policy with a fresh script nonce, also handed to Next.js on the request", async () => {
+    const policyOf = async (path: string) => {
+      const res = await proxy(new NextRequest(new URL(path, "http://localhost:3999")));
+      return { policy: res.headers.get("content-security-policy") ?? "", forwarded: res.headers.get("x-middleware-request-content-security-policy") ?? "" };
+    };
+    const a = await policyOf("/projects");
+    const b = await policyOf("/projects");
+    const nonce = /'nonce-([^']+)'/.exec(a.policy)?.[1];
+    expect(nonce).toBeTruthy();
+    expect(b.policy).not.toContain(nonce);
+    expect(a.forwarded).toBe(a.policy);
+    expect(a.policy).toMatch(/script-src 'self' 'nonce-[^']+' 'strict-dynamic'/);
+    expect(a.policy).toContain("object-src 'none'");
+    expect(a.policy).toContain("base-uri 'self'");
+    expect(a.policy).toContain("frame-ancestors 'none'");
+    expect((await policyOf("/embed/not-a-token-of-ours")).policy).toContain("frame-ancestors *");
+  });
 });

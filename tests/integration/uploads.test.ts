@@ -265,7 +265,13 @@ describe("attachments", () => {
     const download = await fetch(link.body.url);
     expect(download.status).toBe(200);
     expect(await download.text()).toBe(csv);
-    expect(download.headers.get("content-disposition")).toContain("run-2026-11-30.csv");
+    expect(download.headers.get("content-disposition")).toMatch(/^attachment;.*run-2026-11-30\.csv/);
+    expect(download.headers.get("content-security-policy")).toBe("sandbox");
+    expect(download.headers.get("x-content-type-options")).toBe("nosniff");
+    // The same object without the presigned query string: refused, as a real store refuses it.
+    const bare = await fetch(link.body.url.split("?")[0]);
+    expect(bare.status).toBe(403);
+    expect(await bare.text()).toContain("<Code>AccessDenied</Code>");
 
     const redirect = await call(attachmentRoute.GET, "GET", `${base(f)}/attachments/${up.body.attachment.id}`, { as: f.users.viewer, params: { ...S(f), attachmentId: up.body.attachment.id }, query: { redirect: "1" } });
     expect(redirect.status).toBe(303);
@@ -332,6 +338,12 @@ describe("attachments", () => {
       { name: "a PDF named .png", file: "figure.png", bytes: () => "%PDF-1.7\n%...", status: 415, reason: /named as a PNG image but its content is a PDF/ },
       { name: "a .json that does not parse", file: "fit.json", bytes: () => "{ not json", status: 415, reason: /not valid JSON/ },
       { name: "an SVG with a script", file: "plot.svg", bytes: () => '<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>', status: 415, reason: /<script>/ },
+      // The bypasses of the old text filter (issue 13): an entity-encoded javascript: link, an animation that rewrites
+      // a link, HTML (an iframe) inside <foreignObject>, and <set> rewriting xlink:href.
+      { name: "an SVG with a jav&#x61;script: link", file: "plot.svg", bytes: () => '<svg xmlns="http://www.w3.org/2000/svg"><a href="jav&#x61;script:alert(1)"><text>x</text></a></svg>', status: 415, reason: /unsafe href/ },
+      { name: "an SVG with <animate> rewriting href", file: "plot.svg", bytes: () => '<svg xmlns="http://www.w3.org/2000/svg"><a><animate attributeName="href" values="javascript:alert(1)"/><text>x</text></a></svg>', status: 415, reason: /<animate>/ },
+      { name: "an SVG with an iframe in <foreignObject>", file: "plot.svg", bytes: () => '<svg xmlns="http://www.w3.org/2000/svg"><foreignObject width="9" height="9"><iframe xmlns="http://www.w3.org/1999/xhtml" src="javascript:alert(1)"></iframe></foreignObject></svg>', status: 415, reason: /<foreignObject>/ },
+      { name: "an SVG with <set> rewriting xlink:href", file: "plot.svg", bytes: () => '<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink"><a><set attributeName="xlink:href" to="javascript:alert(1)"/><circle r="4"/></a></svg>', status: 415, reason: /<set>/ },
       { name: "an HTML page named .svg", file: "plot.svg", bytes: () => "<html><body>hi</body></html>", status: 415, reason: /<html> root/ },
       { name: "binary bytes named .csv", file: "run.csv", bytes: () => Uint8Array.from([0x00, 0xff, 0x10, 0x80]), status: 415, reason: /neither a PDF, a PNG nor UTF-8/ },
       { name: "an ending not kept", file: "run.exe", bytes: () => "MZ", status: 415, reason: /not a kind of file Branchline keeps/ },
@@ -349,6 +361,16 @@ describe("attachments", () => {
         expect((await objectKeysUnder(scenarioPrefix(f))).length).toBe(objectsBefore);
       });
     }
+  });
+
+  it("keeps a plotting library's SVG (metadata, <use> links inside the file, an embedded PNG)", async () => {
+    const figure =
+      '<?xml version="1.0" encoding="utf-8"?>\n<!DOCTYPE svg PUBLIC "-//W3C//DTD SVG 1.1//EN" "http://www.w3.org/Graphics/SVG/1.1/DTD/svg11.dtd">\n' +
+      '<svg xmlns:xlink="http://www.w3.org/1999/xlink" width="46pt" height="34pt" viewBox="0 0 46 34" xmlns="http://www.w3.org/2000/svg"><metadata><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"/></metadata>' +
+      '<defs><style type="text/css">*{stroke-linejoin: round}</style><path id="tick" d="M 0 0 L 0 3.5"/></defs><use xlink:href="#tick" x="5" y="30"/>' +
+      '<image xlink:href="data:image/png;base64,iVBORw0KGgo=" width="3" height="3"/><text x="1" y="9">d = 1 µm</text></svg>';
+    const res = await rawUpload(f, "fringes.svg", figure, "image/svg+xml");
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
   });
 
   it("keeps an SVG figure and a PDF note, typed by their content", async () => {

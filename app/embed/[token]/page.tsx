@@ -21,11 +21,11 @@ export default async function EmbedPage({ params, searchParams }: { params: Prom
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
-  const { result } = await computeShared(db, { scenarioId, version: scenario.version, document: scenario.document });
+  const { result, resultIssues } = await computeShared(db, { scenarioId, version: scenario.version, document: scenario.document });
   return (
     <>
       <title>{`${scenario.title} · Branchline`}</title>
-      <EmbeddedDiagram title={scenario.title} document={scenario.document} version={scenario.version} result={result} sharePath={`/share/${encodeURIComponent(token)}`} options={options} />
+      <EmbeddedDiagram title={scenario.title} document={scenario.document} version={scenario.version} result={result} resultIssues={resultIssues} sharePath={`/share/${encodeURIComponent(token)}`} options={options} />
     </>
   );
 }

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { getPathMatch } from "next/dist/shared/lib/router/utils/path-match";
-import nextConfig, { frameHeaderRules } from "@/next.config.mjs";
+import nextConfig, { everyResponseHeaders, frameHeaderRules } from "@/next.config.mjs";
 
 function headersFor(pathname: string): Record<string, string> {
   const found: Record<string, string> = {};
@@ -20,7 +20,7 @@ function headersFor(pathname: string): Record<string, string> {
 
 describe("frame headers", () => {
   it("are what next.config.mjs hands to Next.js", async () => {
-    expect(await nextConfig.headers!()).toEqual(frameHeaderRules);
+    expect(await nextConfig.headers!()).toEqual([...frameHeaderRules, everyResponseHeaders]);
   });
 
   it.each(["/embed/abc123", "/embed/abc123?theme=dark&scrub=1".split("?")[0]])("let any origin frame an embed (%s), without X-Frame-Options", (path) => {

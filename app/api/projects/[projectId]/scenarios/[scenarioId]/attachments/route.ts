@@ -4,6 +4,7 @@ import { AppError } from "@/db/errors";
 import { ATTACHMENT_MAX_BYTES } from "@/lib/contracts";
 import { json, requireActor, route } from "@/lib/http";
 import { classifyAttachment } from "@/lib/sniff";
+import { svgVerdict } from "@/lib/svg-safety";
 import { objectStore } from "@/lib/storage";
 import { readUpload, unsupportedMediaType } from "@/lib/upload-body";
 
@@ -26,6 +27,10 @@ export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
   if (!upload.name) throw new AppError("bad_request", "give the file's name (the multipart file name, or ?name=)", [{ path: "name", message: "the file needs a name" }]);
   const kind = classifyAttachment(upload.name, upload.bytes);
   if (!kind.ok) throw unsupportedMediaType(kind.reason);
+  if (kind.kind === "svg") {
+    const verdict = svgVerdict(new TextDecoder().decode(upload.bytes));
+    if (!verdict.ok) throw unsupportedMediaType(verdict.reason);
+  }
   const attachment = await uploadAttachment(getDb(), objectStore(), actor, projectId, scenarioId, { fileName: upload.name, mediaType: kind.mediaType, bytes: upload.bytes });
   return json({ attachment }, 201);
 });

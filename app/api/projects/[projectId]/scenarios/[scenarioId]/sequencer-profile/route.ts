@@ -1,14 +1,19 @@
 import { getDb } from "@/db";
-import { assertMayWriteScenarios } from "@/db/attachments";
+import { assertMayWriteScenarios, uploadAttachment } from "@/db/attachments";
 import { AppError } from "@/db/errors";
 import { getScenario, updateScenario } from "@/db/scenarios";
 import { sequencerProfileJsonSchema, sequencerProfileOptionsSchema } from "@/lib/contracts";
 import { json, requireActor, route } from "@/lib/http";
+import { objectStore } from "@/lib/storage";
 import { readUpload, utf8 } from "@/lib/upload-body";
 import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { MAX_STORED_SAMPLES, THIN_TOLERANCE_FRACTION, thinProfile } from "@/physics/protocols/thin-profile";
 import type { z } from "zod";
 
 type Params = { projectId: string; scenarioId: string };
+
+/** The original's file name: the upload's, ending in .csv. */
+const csvName = (name: string | null) => (name && /\.csv$/i.test(name) ? name : `${name ?? "sequencer-profile"}.csv`);
 
 /** How many samples the answer shows as a preview table. */
 const PREVIEW_ROWS = 20;
@@ -26,6 +31,8 @@ function options<T extends z.ZodType>(schema: T, input: unknown): z.infer<T> {
  * query), as multipart with a `file` field (settings as fields), or as JSON { csv, ...settings }. Settings:
  * timeUnit, separationUnit (when the header has none, or to override it), interpolation (linear, cubic-spline),
  * dryRun=1 to preview and store nothing, else version (the scenario version edited) to save a new revision.
+ * A profile longer than 10,000 rows is stored thinned (physics/protocols/thin-profile.ts) with the file kept as an
+ * attachment; one that cannot be thinned below 20,000 samples is 422.
  */
 export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
   const actor = await requireActor(req);
@@ -63,7 +70,19 @@ export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
       { rows: parsed.problems, problemCount: parsed.problemCount, missingUnits: parsed.missingUnits },
     );
   }
-  const protocol = toSampledProtocol(parsed.samples, settings.interpolation);
+  const thinned = thinProfile(parsed.samples);
+  if (thinned.samples.length > MAX_STORED_SAMPLES) {
+    throw new AppError(
+      "unprocessable",
+      `the profile keeps ${thinned.samples.length.toLocaleString("en")} samples even when thinned to within ${THIN_TOLERANCE_FRACTION} of its largest separation; a stored profile has at most ${MAX_STORED_SAMPLES.toLocaleString("en")} (smooth or average the export first)`,
+      [{ path: "file", message: "too irregular to store compactly" }],
+    );
+  }
+  const protocol = toSampledProtocol(thinned.samples, settings.interpolation);
+  const thinning =
+    thinned.originalCount === thinned.samples.length
+      ? null
+      : { originalCount: thinned.originalCount, storedCount: thinned.samples.length, toleranceMetres: thinned.toleranceMetres, largestErrorMetres: thinned.largestErrorMetres };
   const profile = {
     rowCount: parsed.samples.length,
     durationSeconds: parsed.durationSeconds,
@@ -72,6 +91,7 @@ export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
     separation: parsed.separation,
     flags: parsed.flags,
     preview: parsed.samples.slice(0, PREVIEW_ROWS),
+    thinning,
   };
   if (settings.dryRun) return json({ dryRun: true, profile, protocol });
 
@@ -82,5 +102,9 @@ export const POST = route<Params>(async (req, { projectId, scenarioId }) => {
   if (!current.document) throw new AppError("unprocessable", "this scenario's stored document cannot be read, so a profile cannot be added to it", current.documentIssues ?? []);
   // A stale version is refused by updateScenario (409) before anything is stored.
   const scenario = await updateScenario(db, actor, projectId, scenarioId, { version: settings.version, document: withSampledProtocol(current.document, protocol) });
-  return json({ dryRun: false, profile, scenario });
+  // A thinned profile keeps its original beside the scenario, as the file that was read.
+  const original = thinning
+    ? await uploadAttachment(db, objectStore(), actor, projectId, scenarioId, { fileName: csvName(upload.name), mediaType: "text/csv", bytes: new TextEncoder().encode(text) })
+    : null;
+  return json({ dryRun: false, profile, scenario, originalAttachment: original });
 });

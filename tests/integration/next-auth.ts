@@ -30,13 +30,26 @@ const cookieHeader = (jar: CookieJar) =>
     .map(([k, v]) => `${k}=${v}`)
     .join("; ");
 
-/** One request to /api/auth/{path}; the cookies it sets (or clears) land in the jar. */
+/**
+ * One request to /api/auth/{path}, handed over as the Next.js glue (next-auth/next's route handler) hands it:
+ * the form body parsed, the cookies and headers as plain objects, the action and provider from the path. The
+ * cookies the answer sets (or clears) land in the jar.
+ */
 export async function authRequest(jar: CookieJar, method: "GET" | "POST", path: string, form?: Record<string, string>): Promise<AuthAnswer> {
-  const base = process.env.NEXTAUTH_URL ?? "http://localhost:3999";
-  const headers: Record<string, string> = { cookie: cookieHeader(jar) };
-  if (form) headers["content-type"] = "application/x-www-form-urlencoded";
-  const request = new Request(`${base}/api/auth/${path}`, { method, headers, body: form ? new URLSearchParams(form).toString() : undefined });
-  const answer = (await AuthHandler({ req: request as never, options: authOptions })) as AuthAnswer;
+  const [action, providerId] = path.split("/");
+  const req = {
+    method,
+    body: form,
+    query: {},
+    cookies: { ...jar },
+    headers: { host: new URL(process.env.NEXTAUTH_URL ?? "http://localhost:3999").host, cookie: cookieHeader(jar) },
+    action,
+    providerId,
+    error: providerId,
+  };
+  // As the glue does: the secret from the environment (the spread reads useSecureCookies afresh).
+  const options = { ...authOptions, secret: process.env.NEXTAUTH_SECRET };
+  const answer = (await AuthHandler({ req: req as never, options })) as AuthAnswer;
   for (const cookie of answer.cookies ?? []) {
     if (cookie.value === "" || cookie.options?.maxAge === 0) delete jar[cookie.name];
     else jar[cookie.name] = cookie.value;

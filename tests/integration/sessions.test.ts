@@ -29,7 +29,8 @@ const account = (jar: CookieJar) => call(accountRoute.GET, "GET", "/api/account"
 
 const originalUrl = process.env.NEXTAUTH_URL;
 afterEach(() => {
-  process.env.NEXTAUTH_URL = originalUrl;
+  if (originalUrl === undefined) delete process.env.NEXTAUTH_URL;
+  else process.env.NEXTAUTH_URL = originalUrl;
 });
 
 describe("sessions that end", () => {

@@ -123,6 +123,7 @@ export async function consumeSignInSlot(db: Kysely<Database>, email: string, add
  */
 export async function settleSignInSlot(db: Kysely<Database>, slot: { keys: LimitKey[] }, email: string, address: string, succeeded: boolean): Promise<void> {
   await db.insertInto("signInAttempts").values({ email: lower(email), address, succeeded }).execute();
+  await forgetStaleKeys(db);
   if (!succeeded) return;
   for (const { key, policy } of slot.keys) {
     if (policy === ACCOUNT_FROM_ADDRESS_POLICY) {
@@ -139,6 +140,17 @@ export async function settleSignInSlot(db: Kysely<Database>, slot: { keys: Limit
       .where("key", "=", key)
       .execute();
   }
+}
+
+/** Deletes a bounded batch of keys that are open and untouched for a day (they would start over anyway). */
+async function forgetStaleKeys(db: Kysely<Database>): Promise<void> {
+  const stale = db
+    .selectFrom("signInLimits")
+    .select("key")
+    .where("updatedAt", "<", sql<Date>`now() - make_interval(hours => ${FORGET_AFTER_HOURS})`)
+    .where("nextAttemptAt", "<=", sql<Date>`now()`)
+    .limit(100);
+  await db.deleteFrom("signInLimits").where("key", "in", stale).execute();
 }
 
 /** Forgets the failures against an account (after its owner proved it with a reset link); address keys stay. */

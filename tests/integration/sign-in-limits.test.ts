@@ -56,7 +56,8 @@ afterEach(() => {
   delete process.env.TRUST_PROXY;
 });
 
-describe("sign-in limits", () => {
+// bcryptjs runs on the main thread: twenty checks take seconds each on a loaded machine.
+describe("sign-in limits", { timeout: 180_000 }, () => {
   it("100 concurrent wrong passwords from one address check at most the account-from-address limit, then refuse the right one", async () => {
     const user = await makeUser("stampede", { password: "correct horse battery" });
     const address = freshNet()(7);
@@ -121,6 +122,18 @@ describe("sign-in limits", () => {
     expect(await attempt(address, user.email, "correct horse battery")).toMatchObject({ id: user.id });
     const left = await getDb().selectFrom("signInLimits").select("key").where("key", "=", key).execute();
     expect(left).toEqual([]);
+  });
+
+  it("forgets a key untouched for a day: its failures start over, and stale keys are cleared away", async () => {
+    const user = await makeUser("forgotten", { password: "correct horse battery" });
+    const address = freshNet()(40);
+    for (let i = 0; i < ACCOUNT_FROM_ADDRESS_POLICY.freeFailures; i++) await attempt(address, user.email, `wrong ${i}`);
+    expect(await attempt(address, user.email, "correct horse battery")).toBe("limited");
+    await sql`update sign_in_limits set updated_at = now() - interval '25 hours' where key like ${`%${address}%`}`.execute(getDb());
+    const staleKey = `address:stale-${Date.now()}`;
+    await sql`insert into sign_in_limits (key, failures, next_attempt_at, updated_at) values (${staleKey}, 3, now() - interval '2 days', now() - interval '2 days')`.execute(getDb());
+    expect(await attempt(address, user.email, "correct horse battery")).toMatchObject({ id: user.id });
+    expect(await getDb().selectFrom("signInLimits").select("key").where("key", "=", staleKey).execute()).toEqual([]);
   });
 
   it("ignores X-Forwarded-For without TRUST_PROXY: a spray with a new forged address each time is one client", async () => {

@@ -20,6 +20,7 @@ import { ConflictDialog } from "./ConflictDialog";
 import { DiagramPanel } from "./DiagramPanel";
 import { EditorToolbar } from "./EditorToolbar";
 import { LabViewPanel } from "./LabViewPanel";
+import { NewerVersionBanner } from "./NewerVersionBanner";
 import { ParametersPanel } from "./ParametersPanel";
 import { ProtocolStrip } from "./ProtocolStrip";
 import { filesPath, historyPath, sharingPath } from "@/components/sharing/ScenarioSharingIndex";
@@ -32,7 +33,7 @@ import { useUndoShortcuts } from "./useUndoShortcuts";
 export interface ScenarioEditorProps {
   projectId: string;
   scenarioId: string;
-  /** The page a scenario's editor lives at (where "keep mine as a new scenario" goes). */
+  /** The page a scenario's editor lives at (where "save my edits as a copy" goes). */
   editPath(projectId: string, scenarioId: string): string;
   /** Shown under the editor (the revision list), given the version the editor last loaded or saved. */
   footer?(version: number): ReactNode;
@@ -101,6 +102,7 @@ function EditorBody({
         </span>
       </nav>
       <EditorToolbar title={scenario.title} onRetrySave={saveNow} />
+      <NewerVersionBanner projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <DiagramPanel />
         <LabViewPanel />

@@ -27,7 +27,6 @@ import { filesPath, historyPath, sharingPath } from "@/components/sharing/Scenar
 import { EditorSequencerImport } from "@/components/uploads/EditorSequencerImport";
 import { SweepPanel } from "./SweepPanel";
 import { useAutosave } from "./useAutosave";
-import { useBudgetWorker } from "./useBudgetWorker";
 import { useUndoShortcuts } from "./useUndoShortcuts";
 
 export interface ScenarioEditorProps {
@@ -77,7 +76,6 @@ function EditorBody({
 }) {
   const store = useEditorStore();
   const { saveNow } = useAutosave(store, project.id, scenario.id);
-  useBudgetWorker(store);
   useUndoShortcuts(store);
   const version = useEditor((s) => s.save.baseVersion);
   return (

@@ -3,5 +3,7 @@
  * (instrumentation-node.ts), loaded only in that runtime so that the Edge build never sees node: modules.
  */
 export async function register(): Promise<void> {
-  if (process.env.NEXT_RUNTIME === "nodejs") await import("./instrumentation-node");
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const { startServerServices } = await import("./instrumentation-node");
+  await startServerServices();
 }

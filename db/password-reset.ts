@@ -2,7 +2,8 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { AppError } from "./errors";
 import { hashToken, newToken } from "./tokens";
-import { findUserByEmail, setPassword } from "./users";
+import { clearAccountLimits } from "./sign-in-limits";
+import { endAllSessions, findUserByEmail, setPassword } from "./users";
 import type { Database } from "./schema";
 
 const RESET_TOKEN_HOURS = 1;
@@ -39,9 +40,11 @@ export async function completePasswordReset(db: Kysely<Database>, token: string,
       ]);
     }
     await setPassword(trx, row.userId, password);
-    // Other outstanding links die with this one; the failed sign-ins are forgiven, or the owner would stay locked out.
+    // Every session signed in with the old password ends (whoever knew it is out); other outstanding links die
+    // with this one; the failures against the account are forgiven, or its owner would still be held back.
+    await endAllSessions(trx, row.userId);
     await trx.deleteFrom("passwordResetTokens").where("userId", "=", row.userId).where("usedAt", "is", null).execute();
     const user = await trx.selectFrom("users").select("email").where("id", "=", row.userId).executeTakeFirstOrThrow();
-    await trx.deleteFrom("signInAttempts").where("email", "=", user.email).where("succeeded", "=", false).execute();
+    await clearAccountLimits(trx, user.email);
   });
 }

@@ -17,6 +17,8 @@ export interface UsersTable {
   passwordHash: string | null;
   siteRole: ColumnType<SiteRole, SiteRole | undefined, SiteRole>;
   emailVerifiedAt: Date | null;
+  /** Raised to end every session of this account; each session token carries the version it was issued under. */
+  sessionVersion: Generated<number>;
   createdAt: Generated<Date>;
   updatedAt: Timestamp;
 }
@@ -41,6 +43,16 @@ export interface SignInAttemptsTable {
   address: string;
   succeeded: boolean;
   attemptedAt: Generated<Date>;
+}
+
+/** One limiter key (an address, an account, or an account from one address); see db/sign-in-limits.ts. */
+export interface SignInLimitsTable {
+  key: string;
+  /** The lower-cased account the key is about, so a password reset can clear its keys; null for address keys. */
+  account: string | null;
+  failures: number;
+  nextAttemptAt: Date;
+  updatedAt: Timestamp;
 }
 
 export interface ProjectsTable {
@@ -185,6 +197,7 @@ export interface Database {
   verificationTokens: VerificationTokensTable;
   passwordResetTokens: PasswordResetTokensTable;
   signInAttempts: SignInAttemptsTable;
+  signInLimits: SignInLimitsTable;
   projects: ProjectsTable;
   projectMembers: ProjectMembersTable;
   scenarios: ScenariosTable;

@@ -1,5 +1,6 @@
 import "server-only";
 import bcrypt from "bcryptjs";
+import { randomBytes } from "node:crypto";
 import { type Kysely, sql } from "kysely";
 import { type Actor, assertSiteAccess } from "./access";
 import { AppError, conflict, notFound } from "./errors";
@@ -43,9 +44,42 @@ export async function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, BCRYPT_ROUNDS);
 }
 
-/** Checks a password against a stored hash; a user without a password (magic-link only) never matches. */
-export async function passwordMatches(user: User, password: string): Promise<boolean> {
-  return user.passwordHash !== null && bcrypt.compare(password, user.passwordHash);
+// A hash of a random password that nobody knows, made with the same cost as real ones: an address without an
+// account, or an account without a password, is compared against it, so the answer takes as long as for a real one.
+let dummyHash: Promise<string> | undefined;
+const dummyPasswordHash = () => (dummyHash ??= bcrypt.hash(randomBytes(18).toString("base64"), BCRYPT_ROUNDS));
+
+const comparisons = { count: 0 };
+
+/** How many bcrypt comparisons this process has made: a real counter, read by the tests of the sign-in limits. */
+export const passwordComparisonCount = () => comparisons.count;
+
+/**
+ * Checks a password against the account's stored hash. Every call makes exactly one bcrypt comparison: against
+ * a dummy hash when there is no account or it has no password (magic-link only), which never matches.
+ */
+export async function checkPassword(user: User | undefined, password: string): Promise<boolean> {
+  const hash = user?.passwordHash ?? (await dummyPasswordHash());
+  comparisons.count += 1;
+  const same = await bcrypt.compare(password, hash);
+  return same && user?.passwordHash != null;
+}
+
+/** The version a new session of this account is issued under (see sessionIsCurrent in lib/session.ts). */
+export async function sessionVersionOf(db: Kysely<Database>, userId: string): Promise<number | undefined> {
+  if (!isUuid(userId)) return undefined;
+  const row = await db.selectFrom("users").select("sessionVersion").where("id", "=", userId).executeTakeFirst();
+  return row?.sessionVersion;
+}
+
+/** Ends every session of the account at once: tokens issued under an older version are refused from now on. */
+export async function endAllSessions(db: Kysely<Database>, userId: string): Promise<void> {
+  if (!isUuid(userId)) return;
+  await db
+    .updateTable("users")
+    .set({ sessionVersion: sql<number>`session_version + 1`, updatedAt: new Date() })
+    .where("id", "=", userId)
+    .execute();
 }
 
 export async function createUser(
@@ -67,6 +101,19 @@ export async function createUser(
     .executeTakeFirst();
   if (!row) throw conflict("an account with this e-mail address already exists", [{ path: "email", message: "already registered" }]);
   return toUserDto(row);
+}
+
+/**
+ * Sign-up: the new account, or null when the address already has one. The password is hashed either way, before
+ * the insert, so both answers take the same time.
+ */
+export async function createUserIfNew(db: Kysely<Database>, input: { email: string; name: string; password: string }): Promise<UserDto | null> {
+  try {
+    return await createUser(db, input);
+  } catch (error) {
+    if (error instanceof AppError && error.code === "conflict") return null;
+    throw error;
+  }
 }
 
 export async function setPassword(db: Kysely<Database>, userId: string, password: string): Promise<void> {

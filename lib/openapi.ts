@@ -48,9 +48,10 @@ const scenarioFileSchema = z.object({
 export const operations: Operation[] = [
   { method: "post", path: "/api/compute", tag: "Compute", summary: "Compute the decoherence budget of a scenario document", access: "anyone", body: { schema: scenarioDocumentSchema }, success: { status: 200, description: "The result (resultVersion 1): every channel's quanta, rates, decoherence and flags" } },
 
-  { method: "post", path: "/api/users", tag: "Account", summary: "Create an account", access: "anyone", body: { schema: contracts.signUpSchema }, success: { status: 201, description: "The account" } },
+  { method: "post", path: "/api/users", tag: "Account", summary: "Create an account", access: "anyone", body: { schema: contracts.signUpSchema }, success: { status: 201, description: "Signed up (the same answer whether or not the address already has an account; its owner is e-mailed instead)" } },
   { method: "get", path: "/api/account", tag: "Account", summary: "The signed-in account", access: "signed in", success: { status: 200, description: "The account" } },
   { method: "patch", path: "/api/account", tag: "Account", summary: "Change the account's name", access: "signed in", body: { schema: contracts.accountUpdateSchema }, success: { status: 200, description: "The account" } },
+  { method: "delete", path: "/api/account/sessions", tag: "Account", summary: "Sign out everywhere: end every session of the account, this one included", access: "signed in", success: { status: 204, description: "Every session ended" } },
   { method: "post", path: "/api/password-reset", tag: "Account", summary: "Send a password-reset link by e-mail", access: "anyone", body: { schema: contracts.passwordResetRequestSchema }, success: { status: 202, description: "Accepted (the same answer whether or not the address has an account)" } },
   { method: "post", path: "/api/password-reset/confirm", tag: "Account", summary: "Set a new password with a reset token", access: "anyone", body: { schema: contracts.passwordResetConfirmSchema }, success: { status: 200, description: "The password is changed" } },
 

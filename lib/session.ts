@@ -5,20 +5,26 @@ import type { NextRequest } from "next/server";
 import { getDb } from "../db";
 import type { Actor } from "../db/access";
 import { findUserById, type UserDto, toUserDto } from "../db/users";
-import { authOptions } from "./auth";
+import { authOptions, tokenSessionVersion, useSecureCookies } from "./auth";
 
 /**
  * The signed-in caller of a route handler, read from the session cookie and checked against the database on
- * every request (a deleted account or a changed site role takes effect at once). Null when signed out.
+ * every request: a deleted account, a changed site role, or a session ended since the token was issued (sign-out,
+ * password reset, "sign out everywhere": the account's session version moved on) take effect at once. Null when
+ * signed out.
  */
 export async function actorFromRequest(req: NextRequest): Promise<Actor | null> {
-  const token = await getToken({ req });
+  const token = await getToken({ req, secureCookie: useSecureCookies() });
   if (!token?.sub) return null;
   const user = await findUserById(getDb(), token.sub);
-  return user ? { userId: user.id, siteRole: user.siteRole } : null;
+  if (!user || user.sessionVersion !== tokenSessionVersion(token)) return null;
+  return { userId: user.id, siteRole: user.siteRole };
 }
 
-/** The signed-in user for a server component, or null. */
+/**
+ * The signed-in user for a server component, or null. getServerSession runs the jwt callback of lib/auth.ts,
+ * which refuses a token whose session has ended.
+ */
 export async function currentUser(): Promise<UserDto | null> {
   const session = await getServerSession(authOptions);
   const id = (session?.user as { id?: string } | undefined)?.id;

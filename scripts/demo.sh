@@ -34,6 +34,7 @@ cat <<MSG
   Demo owner (also site administrator):  owner@lindenbrook.example    / lindenbrook-demo-owner
   Demo viewer (read-only):               referee@lindenbrook.example  / lindenbrook-demo-viewer
   Mail sent by the demo (sign-in links, password resets):  http://localhost:$PORT/dev/mailbox
+    (signed in as the site administrator, from this machine only)
 
 MSG
 node_modules/.bin/next start -p "$PORT"

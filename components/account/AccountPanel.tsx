@@ -1,10 +1,12 @@
 "use client";
 
+import { signOut } from "next-auth/react";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { z } from "zod";
-import { useAccount, useUpdateAccount, type UserDto } from "@/components/api/account";
+import { useAccount, useSignOutEverywhere, useUpdateAccount, type UserDto } from "@/components/api/account";
+import { messageOf } from "@/components/api/client";
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
@@ -61,7 +63,36 @@ function AccountDetails({ user }: { user: UserDto }) {
             </Link>
           </p>
         </div>
+        <SignOutEverywhere />
       </section>
+    </div>
+  );
+}
+
+/** Ends every session of the account at once: other browsers and devices are signed out at their next request. */
+function SignOutEverywhere() {
+  const end = useSignOutEverywhere();
+  const [problem, setProblem] = useState<string | null>(null);
+  const onClick = async () => {
+    setProblem(null);
+    try {
+      await end.mutateAsync();
+      await signOut({ callbackUrl: "/sign-in" });
+    } catch (error) {
+      setProblem(messageOf(error));
+    }
+  };
+  return (
+    <div>
+      <h3 className="text-sm font-semibold">Sessions</h3>
+      <p className="mt-1 text-sm text-ink-soft">
+        Signed in somewhere you no longer use, or on a shared computer? This signs you out on every browser and
+        device, this one included.
+      </p>
+      <FormProblem problem={problem} />
+      <button type="button" onClick={onClick} disabled={end.isPending} className={`${buttonStyles.secondary} mt-3`}>
+        {end.isPending ? "Signing out everywhere…" : "Sign out everywhere"}
+      </button>
     </div>
   );
 }

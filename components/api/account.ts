@@ -20,3 +20,10 @@ export function useUpdateAccount() {
     onSuccess: (user) => queryClient.setQueryData(accountKeys.me, user),
   });
 }
+
+/** Ends every session of the account (this browser's too); the caller then clears its own cookie. */
+export function useSignOutEverywhere() {
+  return useMutation({
+    mutationFn: () => apiFetch<void>("/api/account/sessions", { method: "DELETE" }),
+  });
+}

@@ -1,11 +1,10 @@
 import { useMutation } from "@tanstack/react-query";
-import type { UserDto } from "@/db/users";
 import { apiFetch } from "./client";
 
 export function useSignUp() {
   return useMutation({
     mutationFn: (input: { email: string; name: string; password: string }) =>
-      apiFetch<{ user: UserDto }>("/api/users", { method: "POST", json: input }).then((r) => r.user),
+      apiFetch<{ message: string }>("/api/users", { method: "POST", json: input }),
   });
 }
 

@@ -19,7 +19,9 @@ export function SignUpForm({ callbackUrl, email = "" }: { callbackUrl: string; e
     await signUp.mutateAsync(input);
     const result = await signIn("credentials", { redirect: false, email: input.email, password: input.password, callbackUrl });
     if (result?.ok && !result.error) window.location.assign(callbackUrl);
-    else setProblem("your account is ready, but signing in did not work; sign in with your new password");
+    // The server answers a sign-up the same whether or not the address already had an account (its owner gets a
+    // message instead), so all we can say here is both.
+    else setProblem("signing in did not work: if this address already has an account, we have e-mailed it; otherwise sign in with your new password");
   });
 
   return (

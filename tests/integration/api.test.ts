@@ -10,9 +10,12 @@ import * as duplicateRoute from "@/app/api/projects/[projectId]/scenarios/[scena
 import * as revisionsRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/revisions/route";
 import * as revisionRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/route";
 import * as usersRoute from "@/app/api/users/route";
+import { getDb } from "@/db";
+import { checkPassword, findUserByEmail } from "@/db/users";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { call, makeUser, type TestUser } from "./harness";
 import { projectFixture, type ProjectFixture } from "./fixtures";
+import { waitForMailTo } from "./mailbox";
 
 const missingId = "00000000-0000-4000-8000-000000000000";
 
@@ -56,12 +59,22 @@ describe("projects", () => {
 });
 
 describe("sign-up", () => {
-  it("refuses a duplicate e-mail address in any letter case with 409", async () => {
+  // Sign-up must not tell whether an address has an account: a taken address (in any letter case) gets exactly
+  // the answer a new one gets, the account stays as it was, and its owner is told by e-mail instead.
+  it("answers a taken address in any letter case exactly as a new one, changes nothing, and mails the owner", async () => {
     const body = { email: `Dup.${Date.now()}@Example.test`, name: "First", password: "a long enough password" };
-    expect((await call(usersRoute.POST, "POST", "/api/users", { body })).status).toBe(201);
-    const again = await call(usersRoute.POST, "POST", "/api/users", { body: { ...body, email: body.email.toUpperCase() } });
-    expect(again.status).toBe(409);
-    expect(again.body.error.fields).toEqual([{ path: "email", message: "already registered" }]);
+    const first = await call(usersRoute.POST, "POST", "/api/users", { body });
+    expect(first.status).toBe(201);
+    const again = await call(usersRoute.POST, "POST", "/api/users", { body: { ...body, email: body.email.toUpperCase(), name: "Second", password: "another long password" } });
+    expect(again.status).toBe(first.status);
+    expect(again.body).toEqual(first.body);
+    expect(again.headers.get("content-type")).toBe(first.headers.get("content-type"));
+    const owner = await findUserByEmail(getDb(), body.email);
+    expect(owner?.name).toBe("First");
+    expect(await checkPassword(owner, "a long enough password")).toBe(true);
+    const [mail] = await waitForMailTo(body.email.toLowerCase());
+    expect(mail.subject).toBe("Someone tried to sign up with your address");
+    expect(mail.text).toContain("/reset-password");
   });
 
   it("asks for a password of at least 10 characters", async () => {

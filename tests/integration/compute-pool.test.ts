@@ -11,7 +11,7 @@ import * as scenarioRoute from "@/app/api/projects/[projectId]/scenarios/[scenar
 import * as shareLinksRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/share-links/route";
 import * as sharedExportRoute from "@/app/api/share/[token]/export/route";
 import * as shareRoute from "@/app/api/share/[token]/route";
-import { SOCKET_ADDRESS_HEADER } from "@/lib/client-address";
+import { withSocketAddress } from "@/lib/client-address";
 import { computePool } from "@/lib/compute-pool";
 import { computeScenario } from "@/physics";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
@@ -88,7 +88,7 @@ describe("a computation past its time budget", () => {
 
 describe("the cost ceiling", () => {
   it("refuses a document over it with 422, naming the numerics fields to change", async () => {
-    const res = await call(computeRoute.POST, "POST", "/api/compute", { body: tooCostly, headers: { [SOCKET_ADDRESS_HEADER]: "198.51.100.1" } });
+    const res = await withSocketAddress("198.51.100.1", () => call(computeRoute.POST, "POST", "/api/compute", { body: tooCostly }));
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe("compute_too_costly");
     expect(res.body.error.message).toMatch(/relax the numerics/);
@@ -154,7 +154,7 @@ describe("the rate limit on anonymous computation", () => {
     process.env.BRANCHLINE_COMPUTE_RATE_PER_MINUTE = "3";
     // A fresh address per run: the counts live in PostgreSQL for a minute.
     const address = `203.0.113.${Math.floor(Math.random() * 250) + 1}-${Date.now()}`;
-    const anonymous = (from: string) => call(computeRoute.POST, "POST", "/api/compute", { body: defaultScenarioDocument(), headers: { [SOCKET_ADDRESS_HEADER]: from } });
+    const anonymous = (from: string) => withSocketAddress(from, () => call(computeRoute.POST, "POST", "/api/compute", { body: defaultScenarioDocument() }));
     for (let i = 0; i < 3; i++) expect((await anonymous(address)).status).toBe(200);
     const limited = await anonymous(address);
     expect(limited.status).toBe(429);
@@ -165,11 +165,11 @@ describe("the rate limit on anonymous computation", () => {
     expect(retryAfter).toBeLessThanOrEqual(60);
 
     // A client-supplied X-Forwarded-For does not make another client while no proxy is trusted.
-    const spoofed = await call(computeRoute.POST, "POST", "/api/compute", { body: defaultScenarioDocument(), headers: { [SOCKET_ADDRESS_HEADER]: address, "x-forwarded-for": "192.0.2.99" } });
+    const spoofed = await withSocketAddress(address, () => call(computeRoute.POST, "POST", "/api/compute", { body: defaultScenarioDocument(), headers: { "x-forwarded-for": "192.0.2.99" } }));
     expect(spoofed.status).toBe(429);
 
     expect((await anonymous(`${address}-other`)).status).toBe(200);
     const member = await makeUser("computing");
-    for (let i = 0; i < 4; i++) expect((await call(computeRoute.POST, "POST", "/api/compute", { as: member, body: defaultScenarioDocument(), headers: { [SOCKET_ADDRESS_HEADER]: address } })).status).toBe(200);
+    for (let i = 0; i < 4; i++) expect((await withSocketAddress(address, () => call(computeRoute.POST, "POST", "/api/compute", { as: member, body: defaultScenarioDocument() }))).status).toBe(200);
   });
 });

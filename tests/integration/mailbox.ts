@@ -9,3 +9,13 @@ export async function mailboxMessagesTo(address: string): Promise<MailboxMessage
   const { messages } = (await res.json()) as { messages: MailboxMessage[] };
   return messages.filter((m) => m.to.includes(address));
 }
+
+/** Every message to this address once at least one has arrived (mail that answers must not wait for goes out in the background). */
+export async function waitForMailTo(address: string, timeoutMs = 10_000): Promise<MailboxMessage[]> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const messages = await mailboxMessagesTo(address);
+    if (messages.length > 0 || Date.now() > deadline) return messages;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+}

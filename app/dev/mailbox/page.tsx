@@ -1,17 +1,19 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { mailboxUrlFor } from "@/lib/dev-mailbox";
 import type { MailboxMessage } from "@/lib/mailbox";
+import { currentUser } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Development mailbox" };
 export const dynamic = "force-dynamic";
 
-
 /**
- * The messages the local fake SMTP server received, for the demo and for development. Exists only when
+ * The messages the local fake SMTP server received, for the demo and for development. Exists only for a signed-in
+ * site administrator, on a server whose public URL is loopback and for a request that came over loopback, when
  * BRANCHLINE_MAILBOX_URL points at the fake's mailbox API (the demo and test scripts set it); otherwise 404.
  */
 export default async function MailboxPage() {
-  const base = process.env.BRANCHLINE_MAILBOX_URL;
+  const base = mailboxUrlFor(await currentUser());
   if (!base) notFound();
   let messages: MailboxMessage[] = [];
   let problem: string | null = null;

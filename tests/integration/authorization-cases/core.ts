@@ -10,6 +10,7 @@ export const coreCases: Case[] = [
   { file: "password-reset/confirm/route.ts", method: "POST", path: () => "/api/password-reset/confirm", body: () => ({ token: "not-a-real-token-at-all", password: "a long enough password" }), expected: everyone(422) },
   { file: "account/route.ts", method: "GET", path: () => "/api/account", expected: signedIn(200) },
   { file: "account/route.ts", method: "PATCH", path: () => "/api/account", body: () => ({ name: "Renamed Person" }), expected: signedIn(200) },
+  { file: "account/sessions/route.ts", method: "DELETE", path: () => "/api/account/sessions", expected: signedIn(204) },
   { file: "admin/users/route.ts", method: "GET", path: () => "/api/admin/users", expected: { ...signedIn(403) } },
   { file: "admin/users/[userId]/route.ts", method: "PATCH", path: (f) => `/api/admin/users/${f.users.viewer.id}`, params: (f) => ({ userId: f.users.viewer.id }), body: () => ({ siteRole: "admin" }), expected: signedIn(403) },
   { file: "projects/route.ts", method: "GET", path: () => "/api/projects", expected: signedIn(200) },

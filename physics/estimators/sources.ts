@@ -163,12 +163,12 @@ const entries = {
       "\\Delta\\mathcal E_{ab} = -\\frac{G}{2}\\Delta I_{cd}\\,\\partial_a\\partial_b\\partial_c\\partial_d\\frac1R\\Big|_{R=b},\\ \\Delta I = m_{\\rm eff}d^2(\\hat n\\hat n)^{\\rm STF}" +
       "\\ \\Rightarrow\\ \\frac{96}{5\\pi}\\ (\\text{radial}),\\ \\frac{26}{5\\pi}\\ (\\text{tangential})\\times\\frac{G^6M^5(m_{\\rm eff}d^2)^2}{\\hbar c^{10}b^{10}}",
     assumptions: [
-      "b ≥ 100 GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole",
+      "b ≫ GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole; relative corrections of order GM/(c²b) are not computed (their size is the measure of the flag schwarzschild-gravity-model)",
       "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff d² (zero for a symmetric split)",
       "Unruh state; slow variation (hold long compared with GM/c³)",
     ],
     failureModes: [
-      "no exact near-zone gravitational rate is computed: inside 100 GM/c² the published estimate is reported instead, with a caution",
+      "no exact near-zone gravitational rate is computed: the same leading-order rate is reported at every radius (continuous in b), a caution beyond GM/(c²b) = 1 %, invalid beyond 10 %; the published estimate is only shown beside it",
       "the tidal-heating coefficient is recalled, cross-checked against two independent results, not re-derived here",
     ],
   },

@@ -4,7 +4,9 @@
  * Thresholds for "≪" are common practice: a ratio below 0.01 is ok, below 0.1 a caution, above it invalid.
  */
 import type { Background } from "./backgrounds";
-import { c } from "./constants";
+import { G, c, hbar, kB } from "./constants";
+import { squaredProfileIntegralSeconds } from "./estimators/hold-quanta";
+import { electromagneticChannel } from "./spectra/channels";
 import type { SeparationHistory } from "./protocols/types";
 import { CONVERGENCE_TARGET } from "./estimators/ramp-quanta";
 import { isOutsideDoubleRange } from "./estimators/quantity";
@@ -181,6 +183,51 @@ function modelNotes(document: ScenarioDocument, background: Background, gravitat
   return notes;
 }
 
+/**
+ * The hold rates are zero-frequency limits of the field's noise: they describe the count as a steady rate only when
+ * the time the branches spend apart (∫σ²dτ, lab proper time) is long against the time over which the noise is
+ * correlated. That time, in the lab's proper time:
+ * - Schwarzschild: the hole's response, GM/c³ and the light time b/c, both Killing times, times the lapse (the
+ *   written assumption of the exact rate and of the far-zone gravitational rate, sources.ts);
+ * - Rindler: c/a; de Sitter: 1/α = c/√(a² + c²H²) (the thermal time ħ/(2πk_B T_local)).
+ * Schwarzschild is judged by ratioStatus (a rate outside its assumption is invalid). In Rindler and de Sitter the
+ * spectral count is exact for any protocol and only the reading of the hold-driven part as a steady rate fails, so
+ * the status stops at caution.
+ */
+function holdTimescale(document: ScenarioDocument, history: SeparationHistory, background: Background): ValidityFlag {
+  const code = "hold-timescale";
+  const kind = document.background.kind;
+  if (kind === "minkowski") return { code, status: "not-applicable", message: "no horizon: no hold rate" };
+  const apart = squaredProfileIntegralSeconds(history, electromagneticChannel);
+  if (!(apart > 0)) return { code, status: "not-applicable", message: "the branches are never apart" };
+  const apartText = `the time spent apart, ∫σ²dτ = ${apart.toPrecision(3)} s of lab proper time`;
+  if (kind === "schwarzschild") {
+    const massTime = (G * document.background.massKg) / c ** 3;
+    const lightTime = background.labRadiusMetres / c;
+    const response = background.labRedshiftFactor * Math.max(massTime, lightTime);
+    const ratio = response / apart;
+    return {
+      code,
+      status: ratioStatus(ratio),
+      message:
+        `the Schwarzschild hold rates are zero-frequency limits: they need ${apartText}, long against the hole's response ` +
+        `time, GM/c³ = ${massTime.toPrecision(3)} s and b/c = ${lightTime.toPrecision(3)} s of Killing time (${response.toPrecision(3)} s of lab time); ratio ${ratio.toExponential(2)}`,
+      measure: ratio,
+    };
+  }
+  const correlation = hbar / (2 * Math.PI * kB * background.labLocalTemperatureKelvin);
+  const ratio = correlation / apart;
+  const status = ratioStatus(ratio);
+  return {
+    code,
+    status: status === "invalid" ? "caution" : status,
+    message:
+      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${correlation.toPrecision(3)} s; ` +
+      `ratio ${ratio.toExponential(2)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
+    measure: ratio,
+  };
+}
+
 function doubleRange(reported: FlagInputs["reported"]): ValidityFlag {
   const outside = reported.filter((r) => isOutsideDoubleRange(r.quantity)).map((r) => r.name);
   return outside.length === 0
@@ -195,6 +242,7 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
     samplingConverged(channels),
     ...kinkFlags(inputs.history, channels),
+    holdTimescale(inputs.document, inputs.history, inputs.background),
     schwarzschildRegime(inputs.document, inputs.electromagnetic),
     ...modelChecks(inputs.modelFlags),
     ...modelNotes(inputs.document, inputs.background, inputs.gravitational),

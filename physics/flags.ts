@@ -144,23 +144,25 @@ function modelChecks(raised: ValidityFlag[]): ValidityFlag[] {
   return [...raised, ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no exact Schwarzschild rate computed for this channel" }))];
 }
 
-function modelNotes(document: ScenarioDocument, background: Background, gravitational: ChannelResult): ValidityFlag[] {
+function modelNotes(document: ScenarioDocument, gravitational: ChannelResult): ValidityFlag[] {
   const kind = document.background.kind;
   const notes: ValidityFlag[] = [];
   const thermal = kind === "rindler" || kind === "de-sitter";
   const gravityActive = gravitational.exactZeroReason === null;
-  const offCentre = kind === "de-sitter" && background.labProperAccelerationMetresPerSecondSquared > 0;
   notes.push(
-    thermal && (gravityActive || offCentre)
+    kind === "de-sitter" && gravityActive
       ? {
           code: "thermal-form-assumed",
           status: "note",
-          message: [
-            gravityActive ? "the gravitational spectrum uses the thermal spin-2 form, assumed (to confirm)" : null,
-            offCentre ? "off the de Sitter centre the electromagnetic spectrum is taken thermal at the local temperature (exact only at the centre)" : null,
-          ].filter(Boolean).join("; "),
+          message:
+            "de Sitter gravity: the spin-2 field equation of the Weyl tensor is conformally invariant, but that the Bunch–Davies graviton state's " +
+            "Weyl correlator is the conformal image of the Minkowski vacuum's is assumed, not established here",
         }
-      : { code: "thermal-form-assumed", status: "not-applicable", message: "no assumed spectrum in use" },
+      : {
+          code: "thermal-form-assumed",
+          status: "not-applicable",
+          message: thermal ? "the spectrum in use is derived (Rindler: boost invariance of the vacuum; de Sitter electromagnetism: conformal invariance)" : "no thermal spectrum in use",
+        },
   );
   notes.push(
     kind === "schwarzschild"
@@ -245,7 +247,7 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     holdTimescale(inputs.document, inputs.history, inputs.background),
     schwarzschildRegime(inputs.document, inputs.electromagnetic),
     ...modelChecks(inputs.modelFlags),
-    ...modelNotes(inputs.document, inputs.background, inputs.gravitational),
+    ...modelNotes(inputs.document, inputs.gravitational),
     doubleRange(inputs.reported),
     ...inputs.background.flags.map((f) => ({ code: `background:${f.code}`, status: f.severity, message: f.message }) satisfies ValidityFlag),
   ];

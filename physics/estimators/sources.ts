@@ -62,36 +62,58 @@ const entries = {
     failureModes: ["separation comparable with c²/a", "kinked paths (ramp-driven part reported at the stated resolution)"],
   },
   "rindler-gw": {
-    title: "Uniformly accelerated lab, gravity: thermal spectrum with the spin-2 factor (assumed form)",
+    title: "Uniformly accelerated lab, gravity: thermal spectrum with the spin-2 factor (derived)",
     citation:
-      "scalings from D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026; " +
-      "the (ω² + a²/c²)(ω² + 4a²/c²) density of states is the Fourier transform of a csch⁶ correlator, assumed here, to confirm",
+      "derived: the Minkowski vacuum is boost invariant, so the tidal field's Wightman function along the uniformly accelerated worldline depends on " +
+      "τ − τ' only, through the interval (2c/a)² sinh²(a(τ − τ' − iε)/2c): the csch⁶ correlator of a spin-2 field strength, whose Fourier transform is " +
+      "the density of states (ω² + a²/c²)(ω² + 4a²/c²) (checked numerically in tests/unit/physics/vacuum-spectra.test.ts); as a → 0 it is the " +
+      "quadrupole formula counted in quanta. Scalings: D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026",
     formula:
       "\\langle N\\rangle = \\int_0^\\infty \\frac{2G}{15\\pi\\hbar c^5}\\,\\frac{(\\omega^2+\\alpha^2)(\\omega^2+4\\alpha^2)}{\\omega}\\coth\\frac{\\pi\\omega}{\\alpha}\\,|\\tilde{\\dot Q}(\\omega)|^2 d\\omega,\\ \\alpha = a/c",
-    assumptions: [...thermalAssumptions, "isotropic tidal-field correlator along the accelerated worldline (assumed; not established)"],
-    failureModes: ["the coefficient of the hold rate is not established independently: treat as an order-of-magnitude estimate"],
+    assumptions: [
+      ...thermalAssumptions,
+      "the count uses the one-axis quadrupole weight Σ(n_in_j − δ_ij/3)² = 2/3 with the same csch⁶ spectrum for every component, as the electric field's correlator is the same for every component (Boyer 1980); a separation along the acceleration and one across it are not distinguished",
+    ],
+    failureModes: ["separation comparable with c²/a", "acceleration jumps in the ramps (the count grows with the bandwidth)"],
   },
   "de-sitter-em": {
-    title: "de Sitter static patch: the thermal spectrum at α = √(a² + c²H²)/c (conformal invariance of Maxwell theory)",
+    title: "de Sitter static patch: the thermal spectrum at α = √(a² + c²H²)/c, exact at and off the centre (conformal invariance of Maxwell theory)",
     citation:
       "G. W. Gibbons & S. W. Hawking, PRD 15, 2738 (1977); H. Narnhofer, I. Peter, W. Thirring, Int. J. Mod. Phys. B 10, 1507 (1996); " +
       "S. Deser & O. Levin, CQG 14, L163 (1997); D. L. Danielson, G. Satishchandran, R. M. Wald, arXiv:2301.00026",
-    formula: "S(\\omega)\\ \\text{as for Rindler with}\\ a \\to \\sqrt{a_{\\rm lab}^2 + c^2H^2} = 2\\pi c k_B T_{\\rm local}/\\hbar",
-    assumptions: [...thermalAssumptions, "exact at the centre; off the centre the thermal form at the local temperature is an estimate (to confirm)"],
+    formula:
+      "S(\\omega)\\ \\text{as for Rindler with}\\ a \\to \\sqrt{a_{\\rm lab}^2 + c^2H^2} = 2\\pi c k_B T_{\\rm local}/\\hbar,\\quad " +
+      "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{q^2d^2H^3}{6\\pi^2\\varepsilon_0\\hbar c^3\\,(1 - H^2r^2/c^2)^{3/2}}",
+    assumptions: [
+      ...thermalAssumptions,
+      "exact at every static radius r < c/H: in the conformally flat slicing the static lab's worldline is a uniformly accelerated line of Minkowski space " +
+        "(acceleration √(a² + c²H²) in the flat metric), Maxwell's equations are conformally invariant in four dimensions and the Bunch–Davies state is " +
+        "the conformal vacuum, so the electric-field correlator along the lab is the Rindler one at α = √(a² + c²H²)/c, the field's conformal weight " +
+        "cancelling against the lab's proper time",
+    ],
     failureModes: ["separation comparable with the distance to the cosmological horizon"],
   },
   "de-sitter-gw": {
-    title: "de Sitter static patch, gravity: thermal spin-2 form at the local temperature (assumed form)",
-    citation: "as de-sitter-em and rindler-gw; gravity is not conformally invariant, so this is an estimate",
+    title: "de Sitter static patch, gravity: the spin-2 thermal form at the local temperature (state identified by assumption)",
+    citation:
+      "as de-sitter-em and rindler-gw. Established: the linearised Weyl tensor obeys the massless spin-2 field equation, which is conformally invariant " +
+      "on a conformally flat background such as de Sitter (R. Penrose, Proc. R. Soc. A 284, 159 (1965)), so the field strength maps to flat space as " +
+      "Maxwell's field does. Not established here: that the graviton state (Bunch–Davies) restricted to the Weyl tensor is the conformal image of the " +
+      "Minkowski vacuum — the metric perturbation itself is not conformally coupled (each polarisation obeys the minimally coupled scalar equation)",
     formula: "\\text{as rindler-gw with}\\ \\alpha = 2\\pi k_B T_{\\rm local}/\\hbar",
-    assumptions: [...thermalAssumptions, "thermal spin-2 density of states assumed"],
-    failureModes: ["order-of-magnitude only"],
+    assumptions: [...thermalAssumptions, "the Weyl-tensor correlator of the graviton state is the conformal image of the Minkowski vacuum's (flagged: thermal-form-assumed)"],
+    failureModes: ["if the graviton state's Weyl correlator differs from the conformal image, the coefficient (not the a-, H-scaling of the field equation) changes"],
   },
   "schwarzschild-far-em": {
     title: "Black hole, lab far away: published order-of-magnitude estimate of the horizon decoherence rate",
     citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, 'Black holes decohere quantum superpositions', IJMPD 31, 2241003 (2022), arXiv:2205.06279",
     formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^3M^3q^2d^2}{\\varepsilon_0\\hbar c^6 D^6}\\quad(\\text{Planck units: } M^3q^2d^2/D^6),\\ D = \\text{areal radius of the lab}",
-    assumptions: ["D ≫ 2GM/c²", "Unruh state", "rate per Killing time, converted to lab proper time by the redshift factor"],
+    assumptions: [
+      "D ≫ 2GM/c²",
+      "Unruh state",
+      "rate per Killing time, converted to lab proper time by the redshift factor",
+      "charge convention: the Planck-unit q² is read in Heaviside–Lorentz units, q² → q²/(ε₀ħc); read in Gaussian units, q² → q²/(4πε₀ħc), the estimate is 4π smaller and every ratio of the exact rate to it 4π larger",
+    ],
     failureModes: ["order of magnitude only: the coefficient is not given by the source", "not valid near the horizon"],
   },
   "schwarzschild-far-gw": {
@@ -178,7 +200,10 @@ const entries = {
     formula:
       "\\Gamma_{\\rm exact}/\\Gamma_{\\rm estimate}\\ \\to\\ \\frac{2}{3\\pi^2}\\ (\\text{radial}),\\ \\frac{1}{6\\pi^2}\\ (\\text{tangential}),\\ " +
       "\\frac{96}{5\\pi},\\ \\frac{26}{5\\pi}\\ (\\text{gravity})\\ \\text{as}\\ b \\gg GM/c^2",
-    assumptions: ["both rates per second of lab proper time, for the same source and separation"],
+    assumptions: [
+      "both rates per second of lab proper time, for the same source and separation",
+      "charge convention of the estimate: Heaviside–Lorentz (q² → q²/(ε₀ħc)); in Gaussian units (q² → q²/(4πε₀ħc)) the electromagnetic ratios are 4π larger: 8/(3π) and 2/(3π)",
+    ],
     failureModes: ["near the horizon the estimate is the Rindler limit, which the tangential exact rate equals and the radial one approaches as 1 + 3(b/M − 2)"],
   },
   "schwarzschild-ramps": {

@@ -144,6 +144,39 @@ function modelChecks(raised: ValidityFlag[]): ValidityFlag[] {
   return [...raised, ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no exact Schwarzschild rate computed for this channel" }))];
 }
 
+/**
+ * The quadrupole difference depends on where the body sits relative to the lab's centre of mass, x₀
+ * (channel-source.ts): ΔI = m_eff(2x₀d + d²) when one branch stays, 2m_eff·x₀·d for a symmetric split.
+ */
+function bodyOffsetNote(document: ScenarioDocument): ValidityFlag {
+  const code = "symmetric-split-quadrupole";
+  const offset = document.separation.bodyOffsetMetres ?? 0;
+  const d = document.separation.distanceMetres;
+  const symmetric = document.separation.split === "symmetric";
+  if (document.source.massKg === 0 || d === 0) return { code, status: "not-applicable", message: "no body mass or no separation: no quadrupole difference" };
+  if (offset === 0) {
+    return {
+      code,
+      status: "caution",
+      message:
+        "x₀ = 0: the body is taken to sit exactly at the lab's centre of mass before the split, an idealisation" +
+        (symmetric
+          ? " — a symmetric split then leaves the quadrupoles equal and the gravitational count exactly zero at leading order; any offset x₀ gives ΔI = 2m_eff·x₀·d, (2x₀/d)² times the one-branch-stays count for x₀ ≫ d"
+          : " — one branch staying then gives ΔI = m_eff d²; an offset x₀ gives m_eff(2x₀d + d²)") +
+        ". Set separation.bodyOffsetMetres to the body's place along the axis, measured from the lab's centre of mass",
+    };
+  }
+  const ratio = d > 0 ? (2 * offset) / d : 0;
+  return {
+    code,
+    status: "note",
+    message: symmetric
+      ? `body offset x₀ = ${offset.toPrecision(3)} m: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${ratio.toPrecision(3)})`
+      : `body offset x₀ = ${offset.toPrecision(3)} m: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${ratio.toPrecision(3)})`,
+    measure: ratio,
+  };
+}
+
 function modelNotes(document: ScenarioDocument, gravitational: ChannelResult): ValidityFlag[] {
   const kind = document.background.kind;
   const notes: ValidityFlag[] = [];
@@ -169,16 +202,11 @@ function modelNotes(document: ScenarioDocument, gravitational: ChannelResult): V
       ? { code: "far-field-flat-approximation", status: "note", message: "the ramps' quanta to null infinity are counted in the lab's local flat approximation (no redshift or back-scattering)" }
       : { code: "far-field-flat-approximation", status: "not-applicable", message: "not needed in this background" },
   );
-  const split = document.separation.split;
+  notes.push(bodyOffsetNote(document));
   notes.push(
-    split === "symmetric"
-      ? { code: "symmetric-split-quadrupole", status: "note", message: "symmetric split: the branches' mass quadrupoles are equal, so the gravitational count is exactly zero at leading order" }
-      : { code: "symmetric-split-quadrupole", status: "not-applicable", message: "one branch stays: the quadrupole difference is m d²" },
-  );
-  notes.push(
-    split !== "symmetric" && document.source.massKg > 0
+    gravitational.exactZeroReason === null
       ? document.source.labMassKg
-        ? { code: "lab-recoil", status: "ok", message: "the lab's recoil is included through m_eff = m(1 + m/M_lab)" }
+        ? { code: "lab-recoil", status: "ok", message: "the lab's recoil is included through m_eff = m M_lab/(m + M_lab), with d and x₀ measured by the lab" }
         : { code: "lab-recoil", status: "note", message: "no lab mass given: the lab is taken as immovable (m_eff = m)" }
       : { code: "lab-recoil", status: "not-applicable", message: "no quadrupole difference to correct" },
   );

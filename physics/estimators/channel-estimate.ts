@@ -31,7 +31,8 @@ export interface ChannelEstimate {
 
 function comparisonResult(estimate: ChannelEstimate): HorizonRateComparison | null {
   const comparison = estimate.comparison;
-  if (comparison === null) return null;
+  // No comparison where the hold rate at full separation is exactly zero (a body offset x₀ = −d/2, one branch staying).
+  if (comparison === null || comparison.log10HoldRate === -Infinity) return null;
   return {
     estimateHoldRate: quantityFromLog10(comparison.log10HoldRate, "s^-1", comparison.sourceKey),
     ratioExactToEstimate: quantityFromLog10(estimate.log10HoldRate - comparison.log10HoldRate, "1", "schwarzschild-exact-vs-estimate"),

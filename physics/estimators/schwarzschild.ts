@@ -50,14 +50,18 @@ export function schwarzschildEstimate(
     exactZeroReason: null,
     log10RampQuanta: timesSquaredSource(source.log10Source, ramp.log10PerSquaredSource),
     log10HoldQuanta: log10Product(rate.log10RatePerSecond, Math.log10(timeApart)),
-    log10HoldRate: rate.log10RatePerSecond,
+    log10HoldRate: log10Product(rate.log10RatePerSecond, source.log10FullSeparationFactor),
     counts: "far-field-and-horizon",
     regime: rate.regime,
     rampSourceKey: "schwarzschild-ramps",
     holdSourceKey: rate.sourceKey,
     totalSourceKey: rate.sourceKey,
     convergence: ramp.convergence,
-    comparison: rate.estimate && { log10HoldRate: rate.estimate.log10RatePerSecond, regime: rate.estimate.regime, sourceKey: rate.estimate.sourceKey },
+    comparison: rate.estimate && {
+      log10HoldRate: log10Product(rate.estimate.log10RatePerSecond, source.log10FullSeparationFactor),
+      regime: rate.estimate.regime,
+      sourceKey: rate.estimate.sourceKey,
+    },
     modelFlags: rate.flags,
   };
 }

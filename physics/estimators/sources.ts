@@ -43,11 +43,11 @@ const entries = {
       "L. D. Landau & E. M. Lifshitz, The Classical Theory of Fields, §110; P. C. Peters & J. Mathews, Phys. Rev. 131, 435 (1963); " +
       "D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 105, 086001 (2022), arXiv:2112.10798",
     formula:
-      "\\langle N\\rangle_\\infty = \\frac{G}{5\\pi\\hbar c^5}\\int_0^\\infty \\omega^5 \\sum_{ij}|\\Delta\\tilde I^{\\rm STF}_{ij}(\\omega)|^2 d\\omega,\\quad \\Delta I_{ij} = m_{\\rm eff}(x_A^2 - x_B^2)(n_in_j - \\tfrac13\\delta_{ij})",
+      "\\langle N\\rangle_\\infty = \\frac{G}{5\\pi\\hbar c^5}\\int_0^\\infty \\omega^5 \\sum_{ij}|\\Delta\\tilde I^{\\rm STF}_{ij}(\\omega)|^2 d\\omega,\\quad \\Delta I_{ij} = m_{\\rm eff}\\big[(x_0 + x_A)^2 - (x_0 + x_B)^2\\big](n_in_j - \\tfrac13\\delta_{ij})",
     assumptions: [
       ...farFieldAssumptions,
-      "the lab recoils to keep the centre of mass fixed: m_eff = m(1 + m/M_lab) when the document gives a lab mass, m otherwise",
-      "a symmetric split has equal branch quadrupoles: the leading-order difference is exactly zero (higher multipoles not computed)",
+      "the lab recoils to keep the centre of mass fixed: m_eff = m M_lab/(m + M_lab) when the document gives a lab mass, m otherwise; d and x₀ are measured by the lab",
+      "x₀ is the body's place before the split, from the lab's centre of mass: ΔI = m_eff(2x₀d + d²) (one branch stays), 2m_eff x₀ d (symmetric split, zero only for x₀ = 0)",
     ],
     failureModes: ["as for the electromagnetic count; octupole and higher orders are not included"],
   },
@@ -119,8 +119,8 @@ const entries = {
   "schwarzschild-far-gw": {
     title: "Black hole, lab far away, gravity: published order-of-magnitude estimate",
     citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, IJMPD 31, 2241003 (2022), arXiv:2205.06279",
-    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^6M^5 (m_{\\rm eff}d^2)^2}{\\hbar c^{10}D^{10}}",
-    assumptions: ["D ≫ 2GM/c²", "the quadrupole scale m d² of the source difference (zero for a symmetric split)"],
+    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^6M^5 (\\Delta I)^2}{\\hbar c^{10}D^{10}},\\ \\Delta I = m_{\\rm eff}(2x_0d + d^2)\\ \\text{or}\\ 2m_{\\rm eff}x_0d",
+    assumptions: ["D ≫ 2GM/c²", "the quadrupole difference ΔI at full separation (m_eff d² for x₀ = 0 and one branch staying)"],
     failureModes: ["order of magnitude only", "not valid near the horizon"],
   },
   "schwarzschild-near-em": {
@@ -186,7 +186,7 @@ const entries = {
       "\\ \\Rightarrow\\ \\frac{96}{5\\pi}\\ (\\text{radial}),\\ \\frac{26}{5\\pi}\\ (\\text{tangential})\\times\\frac{G^6M^5(m_{\\rm eff}d^2)^2}{\\hbar c^{10}b^{10}}",
     assumptions: [
       "b ≫ GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole; relative corrections of order GM/(c²b) are not computed (their size is the measure of the flag schwarzschild-gravity-model)",
-      "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff d² (zero for a symmetric split)",
+      "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff(2x₀d + d²) (one branch stays) or 2m_eff x₀ d (symmetric), m_eff = m M_lab/(m + M_lab)",
       "Unruh state; slow variation (hold long compared with GM/c³)",
     ],
     failureModes: [
@@ -228,9 +228,10 @@ const entries = {
     failureModes: [],
   },
   "source-strength-gw": {
-    title: "Quadrupole difference scale m_eff·d² (lab recoil included when the lab mass is given)",
-    citation: "definition; two-body reduced quadrupole μ r² with r = x(1 + m/M_lab)",
-    formula: "A = m\\,(1 + m/M_{\\rm lab})\\,d_0^2\\ \\text{(one branch stays)},\\quad 0\\ \\text{(symmetric split)}",
+    title: "Quadrupole difference scale (lab recoil included when the lab mass is given)",
+    citation: "definition; two-body quadrupole about the common centre of mass, μ x² with μ = m M_lab/(m + M_lab) and x measured by the lab",
+    formula:
+      "A = m_{\\rm eff}\\,d_0^2\\,\\max_{\\sigma\\in[0,1]}|g(\\sigma)|,\\ g = 2\\tfrac{x_0}{d_0}\\sigma + \\sigma^2\\ \\text{(one branch stays)},\\ 2\\tfrac{x_0}{d_0}\\sigma\\ \\text{(symmetric)},\\ m_{\\rm eff} = \\frac{mM_{\\rm lab}}{m + M_{\\rm lab}}",
     assumptions: ["point mass"],
     failureModes: [],
   },

@@ -45,7 +45,7 @@ export function thermalHorizonEstimate(
     exactZeroReason: null,
     log10RampQuanta: timesSquaredSource(source.log10Source, ramp.log10PerSquaredSource),
     log10HoldQuanta: log10Product(log10Rate, Math.log10(timeApart)),
-    log10HoldRate: log10Rate,
+    log10HoldRate: log10Product(log10Rate, source.log10FullSeparationFactor),
     ...keys,
     convergence: ramp.convergence,
     comparison: null,

@@ -44,6 +44,8 @@ export interface ChannelDefinition {
   profileRate(sigma: number, sigmaRate: number): number;
   /** Whether profileRate reads σ (the quadrupole's 2σσ′ does, the dipole's σ′ does not): samplers skip σ otherwise. */
   profileRateReadsProfile: boolean;
+  /** Names the profile in spectrum caches when it differs from the channel's default (a body offset x₀ ≠ 0). */
+  profileKey?: string;
 }
 
 export const electromagneticChannel: ChannelDefinition = {

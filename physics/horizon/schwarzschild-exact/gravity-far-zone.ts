@@ -7,7 +7,8 @@
  *    trace-free quadrupole, not their dipole. With the body (mass m) at x_A in one branch and x_B in the other,
  *    relative to the centre of mass of body + lab (mass M_lab), ΔI_ij = μ (x_B x_B − x_A x_A)_ij^STF with
  *    μ = m M_lab/(m + M_lab). "One-sided" splitting (x_A = 0, x_B = d ê) gives μ d² (ê ê)^STF; a split symmetric
- *    about the centre of mass (x = ±d ê/2) gives ΔI = 0: the effect then starts at octupole order (not computed).
+ *    about the centre of mass (x = ±d ê/2) gives ΔI = 0 (with the body offset x₀ from it, 2μx₀d: the engine's
+ *    estimators take x₀ through physics/estimators/channel-source.ts and call this module per unit quadrupole).
  * 2. Tidal field at the hole, Newtonian (leading order in GM/(c² b)), of a quadrupole at distance b along n̂:
  *      ΔE_ab = −(G/2) ΔI_cd ∂_a∂_b∂_c∂_d (1/R)
  *            = −(G/(2b⁵)) [105 n_a n_b I_nn − 15 δ_ab I_nn − 30 (n_a (I n)_b + n_b (I n)_a) + 6 I_ab].

@@ -124,7 +124,7 @@ describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
     for (const axis of ["radial", "tangential"] as const) {
       const doc = withSource(oneSided(1e3, axis), { labMassKg: 1e-13 });
       const gw = computeScenario(doc).gravitational;
-      const mEff = doc.source.massKg * (1 + doc.source.massKg / doc.source.labMassKg!);
+      const mEff = (doc.source.massKg * doc.source.labMassKg!) / (doc.source.massKg + doc.source.labMassKg!);
       const module = schwarzschildGravityFarZoneRate({ massKg: M, labArealRadiusMetres: 1e3 * m, bodyMassKg: mEff, separationMetres: doc.separation.distanceMetres, axis });
       expect(valueOf(gw.holdRate) / module.ratePerLabSecond, axis).toBeCloseTo(1, 12);
       expect(gw.regime).toBe("far-zone");

@@ -137,11 +137,19 @@ function schwarzschildRegime(document: ScenarioDocument, electromagnetic: Channe
 }
 
 /** Checks that every result carries, filled in as not applicable where the rate model did not raise them. */
-const ALWAYS_PRESENT_MODEL_CHECKS = ["schwarzschild-multipole-check", "schwarzschild-gravity-model"] as const;
+const ALWAYS_PRESENT_MODEL_CHECKS = ["schwarzschild-multipole-check", "schwarzschild-gravity-model", "schwarzschild-ramp-model"] as const;
 
+const SEVERITY: Record<FlagStatus, number> = { "not-applicable": 0, ok: 1, note: 2, caution: 3, invalid: 4 };
+
+/** The raised checks, one per code (both channels may raise the ramp model's: the more severe is kept), and the always-present ones. */
 function modelChecks(raised: ValidityFlag[]): ValidityFlag[] {
-  const missing = ALWAYS_PRESENT_MODEL_CHECKS.filter((code) => !raised.some((f) => f.code === code));
-  return [...raised, ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no exact Schwarzschild rate computed for this channel" }))];
+  const byCode = new Map<string, ValidityFlag>();
+  for (const flag of raised) {
+    const kept = byCode.get(flag.code);
+    if (!kept || SEVERITY[flag.status] > SEVERITY[kept.status]) byCode.set(flag.code, flag);
+  }
+  const missing = ALWAYS_PRESENT_MODEL_CHECKS.filter((code) => !byCode.has(code));
+  return [...byCode.values(), ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no Schwarzschild model computed for this channel" }))];
 }
 
 /**
@@ -196,11 +204,6 @@ function modelNotes(document: ScenarioDocument, gravitational: ChannelResult): V
           status: "not-applicable",
           message: thermal ? "the spectrum in use is derived (Rindler: boost invariance of the vacuum; de Sitter electromagnetism: conformal invariance)" : "no thermal spectrum in use",
         },
-  );
-  notes.push(
-    kind === "schwarzschild"
-      ? { code: "far-field-flat-approximation", status: "note", message: "the ramps' quanta to null infinity are counted in the lab's local flat approximation (no redshift or back-scattering)" }
-      : { code: "far-field-flat-approximation", status: "not-applicable", message: "not needed in this background" },
   );
   notes.push(bodyOffsetNote(document));
   notes.push(

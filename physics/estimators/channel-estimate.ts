@@ -16,8 +16,11 @@ export interface ChannelEstimate {
   log10HoldQuanta: number;
   /** log10 of the hold-driven quanta per second of lab proper time at full separation. */
   log10HoldRate: number;
-  /** Minkowski: the whole count reaches null infinity. Schwarzschild: the ramps' quanta go to null infinity, the hold's into the horizon. Thermal: one count. */
-  counts: "far-field-only" | "far-field-and-horizon" | "single-spectral";
+  /**
+   * Minkowski: the whole count reaches null infinity. Schwarzschild: the hold's quanta go into the horizon, the
+   * ramps' to ℐ⁺ or into the horizon depending on the regime (not split: no far-field count). Thermal: one count.
+   */
+  counts: "far-field-only" | "ramps-and-horizon" | "single-spectral";
   regime: RateRegime;
   rampSourceKey: SourceKey;
   holdSourceKey: SourceKey;
@@ -51,8 +54,8 @@ export function channelResult(estimate: ChannelEstimate): ChannelResult {
     totalQuanta: quantityFromLog10(total, "1", estimate.totalSourceKey),
     rampDrivenQuanta: ramp,
     holdDrivenQuanta: hold,
-    farFieldQuanta: estimate.counts === "far-field-only" ? quantityFromLog10(total, "1", estimate.totalSourceKey) : estimate.counts === "far-field-and-horizon" ? ramp : null,
-    horizonQuanta: estimate.counts === "far-field-and-horizon" ? hold : null,
+    farFieldQuanta: estimate.counts === "far-field-only" ? quantityFromLog10(total, "1", estimate.totalSourceKey) : null,
+    horizonQuanta: estimate.counts === "ramps-and-horizon" ? hold : null,
     holdRate: quantityFromLog10(estimate.log10HoldRate, "s^-1", estimate.holdSourceKey),
     regime: estimate.regime,
     comparison: comparisonResult(estimate),

@@ -207,11 +207,24 @@ const entries = {
     failureModes: ["near the horizon the estimate is the Rindler limit, which the tangential exact rate equals and the radial one approaches as 1 + 3(b/M − 2)"],
   },
   "schwarzschild-ramps": {
-    title: "Black hole: quanta of the ramps to null infinity, in the flat-space approximation at the lab",
-    citation: "far-field-em / far-field-gw evaluated in the lab's proper time",
-    formula: "\\langle N\\rangle_\\infty\\ \\text{as far-field, local flat approximation}",
-    assumptions: ["ramp wavelengths short compared with the distance to the hole", "redshift and back-scattering neglected"],
-    failureModes: ["ramps with c·duration comparable with the distance to the horizon"],
+    title: "Black hole: the ramps' quanta — to null infinity ℐ⁺ for slow ramps far from the hole, mostly into the horizon near it",
+    citation:
+      "slow ramps: the dipole at infinity of the static Copson–Linet field, q(b − 2GM/c²) (E. T. Copson, Proc. R. Soc. A 118, 184 (1928); " +
+      "B. Linet, J. Phys. A 9, 1081 (1976)), with the Killing-time stretch of the profile; near the horizon: the Rindler spectrum at the lab's " +
+      "acceleration (T. H. Boyer, PRD 21, 2137 (1980); S. Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986)); physics/estimators/schwarzschild-ramps.ts",
+    formula:
+      "N_{\\rm slow}(\\mathscr I^+) = \\beta^2 f\\,N_{\\rm flat},\\ f = 1 - \\frac{2GM}{c^2b},\\ \\beta^2 = f\\ (\\text{radial}),\\ f^2\\ (\\text{tangential});\\ " +
+      "N_{\\rm near} = N_{\\rm Rindler}(a);\\ \\log N = w\\log N_{\\rm slow} + (1-w)\\log N_{\\rm near},\\ w = \\frac{h^2}{1+h^2}\\frac{s^2}{1+s^2},\\ " +
+      "h = \\frac{c^2b}{2GM} - 1,\\ s = \\frac{c\\,\\tau_{\\rm ramp}}{\\sqrt f\\, b}",
+    assumptions: [
+      "slow-ramp limit: ramps long against b/c (and so GM/c³) in Killing time; exact in GM/(c²b) for photons; gravitons: the Killing-time stretch f² only, the quadrupole's matching to the hole not computed (relative corrections O(GM/(c²b)))",
+      "near-horizon limit: b − 2GM/c² ≪ 2GM/c², where the geometry around the lab is Rindler's; any ramp speed",
+      "fast ramps far away: the flat count, which the Rindler count at the small local acceleration equals",
+    ],
+    failureModes: [
+      "between the limits the count is interpolated, not computed: the flag schwarzschild-ramp-model gives the weight and the factor between the limits, the size of the uncertainty",
+      "no split of the ramps' quanta into those reaching ℐ⁺ and those crossing the horizon is reported",
+    ],
   },
   "spectral-split": {
     title: "Split of the spectral count into hold-driven (zero-frequency noise) and ramp-driven parts",

@@ -25,9 +25,9 @@ const groups: { id: string; title: string; intro: string; keys: SourceKey[]; mor
   {
     id: "schwarzschild",
     more: { href: "/methods/schwarzschild-exact", label: "The exact horizon rate at any radius: derivation, checks and the ratio to the far-zone estimate" },
-    title: "Schwarzschild: quanta into the horizon and to infinity",
+    title: "Schwarzschild: quanta into the horizon and to null infinity ℐ⁺",
     intro:
-      "Outside a black hole the two counts are distinct and add: the ramps radiate to null infinity, and the held superposition's field change is absorbed by the horizon at a steady rate.",
+      "Outside a black hole two counts add: the held superposition's field change is absorbed by the horizon at a steady rate (into the horizon), and the ramps radiate — to null infinity ℐ⁺ when they are slow and the lab is far from the hole (β²·f times the flat count, from the static Copson–Linet dipole), mostly into the horizon when the lab is near it (the Rindler count at the lab's acceleration). Between those limits the ramps' count is interpolated and flagged with the size of its uncertainty. The hold rates are zero-frequency limits: the flag hold-timescale checks that the time apart is long against GM/c³ and b/c.",
     keys: [
       "schwarzschild-far-em",
       "schwarzschild-far-gw",

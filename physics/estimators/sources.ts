@@ -166,7 +166,7 @@ const entries = {
       "test charge: no back-reaction on the metric; the lab is static at areal radius b and the field is in the Unruh state",
       "d is the proper separation measured by the lab, small compared with the proper distance to the horizon (leading order in d)",
       "hold long compared with GM/c³: the zero-frequency limit; α = 0 for a radial separation, π/2 for a tangential one",
-      "hold-driven count Γ∫f²dτ over the lab's proper time, as in the Rindler/de Sitter split; the ramps' quanta to infinity add to it",
+      "hold-driven count Γ∫f²dτ over the lab's proper time, as in the Rindler/de Sitter split; the ramps' quanta (schwarzschild-ramps) add to it",
     ],
     failureModes: [
       "separation comparable with the distance to the horizon (flagged by the module: the rate is the leading term in d)",

@@ -4,7 +4,9 @@
  * Thresholds for "≪" are common practice: a ratio below 0.01 is ok, below 0.1 a caution, above it invalid.
  */
 import type { Background } from "./backgrounds";
-import { c } from "./constants";
+import { G, c, hbar, kB } from "./constants";
+import { squaredProfileIntegralSeconds } from "./estimators/hold-quanta";
+import { electromagneticChannel } from "./spectra/channels";
 import type { SeparationHistory } from "./protocols/types";
 import { CONVERGENCE_TARGET } from "./estimators/ramp-quanta";
 import { isOutsideDoubleRange } from "./estimators/quantity";
@@ -135,50 +137,128 @@ function schwarzschildRegime(document: ScenarioDocument, electromagnetic: Channe
 }
 
 /** Checks that every result carries, filled in as not applicable where the rate model did not raise them. */
-const ALWAYS_PRESENT_MODEL_CHECKS = ["schwarzschild-multipole-check", "schwarzschild-gravity-model"] as const;
+const ALWAYS_PRESENT_MODEL_CHECKS = ["schwarzschild-multipole-check", "schwarzschild-gravity-model", "schwarzschild-ramp-model"] as const;
 
+const SEVERITY: Record<FlagStatus, number> = { "not-applicable": 0, ok: 1, note: 2, caution: 3, invalid: 4 };
+
+/** The raised checks, one per code (both channels may raise the ramp model's: the more severe is kept), and the always-present ones. */
 function modelChecks(raised: ValidityFlag[]): ValidityFlag[] {
-  const missing = ALWAYS_PRESENT_MODEL_CHECKS.filter((code) => !raised.some((f) => f.code === code));
-  return [...raised, ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no exact Schwarzschild rate computed for this channel" }))];
+  const byCode = new Map<string, ValidityFlag>();
+  for (const flag of raised) {
+    const kept = byCode.get(flag.code);
+    if (!kept || SEVERITY[flag.status] > SEVERITY[kept.status]) byCode.set(flag.code, flag);
+  }
+  const missing = ALWAYS_PRESENT_MODEL_CHECKS.filter((code) => !byCode.has(code));
+  return [...byCode.values(), ...missing.map((code): ValidityFlag => ({ code, status: "not-applicable", message: "no Schwarzschild model computed for this channel" }))];
 }
 
-function modelNotes(document: ScenarioDocument, background: Background, gravitational: ChannelResult): ValidityFlag[] {
+/**
+ * The quadrupole difference depends on where the body sits relative to the lab's centre of mass, x₀
+ * (channel-source.ts): ΔI = m_eff(2x₀d + d²) when one branch stays, 2m_eff·x₀·d for a symmetric split.
+ */
+function bodyOffsetNote(document: ScenarioDocument): ValidityFlag {
+  const code = "symmetric-split-quadrupole";
+  const offset = document.separation.bodyOffsetMetres ?? 0;
+  const d = document.separation.distanceMetres;
+  const symmetric = document.separation.split === "symmetric";
+  if (document.source.massKg === 0 || d === 0) return { code, status: "not-applicable", message: "no body mass or no separation: no quadrupole difference" };
+  if (offset === 0) {
+    return {
+      code,
+      status: "caution",
+      message:
+        "x₀ = 0: the body is taken to sit exactly at the lab's centre of mass before the split, an idealisation" +
+        (symmetric
+          ? " — a symmetric split then leaves the quadrupoles equal and the gravitational count exactly zero at leading order; any offset x₀ gives ΔI = 2m_eff·x₀·d, (2x₀/d)² times the one-branch-stays count for x₀ ≫ d"
+          : " — one branch staying then gives ΔI = m_eff d²; an offset x₀ gives m_eff(2x₀d + d²)") +
+        ". Set separation.bodyOffsetMetres to the body's place along the axis, measured from the lab's centre of mass",
+    };
+  }
+  const ratio = d > 0 ? (2 * offset) / d : 0;
+  return {
+    code,
+    status: "note",
+    message: symmetric
+      ? `body offset x₀ = ${offset.toPrecision(3)} m: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${ratio.toPrecision(3)})`
+      : `body offset x₀ = ${offset.toPrecision(3)} m: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${ratio.toPrecision(3)})`,
+    measure: ratio,
+  };
+}
+
+function modelNotes(document: ScenarioDocument, gravitational: ChannelResult): ValidityFlag[] {
   const kind = document.background.kind;
   const notes: ValidityFlag[] = [];
   const thermal = kind === "rindler" || kind === "de-sitter";
   const gravityActive = gravitational.exactZeroReason === null;
-  const offCentre = kind === "de-sitter" && background.labProperAccelerationMetresPerSecondSquared > 0;
   notes.push(
-    thermal && (gravityActive || offCentre)
+    kind === "de-sitter" && gravityActive
       ? {
           code: "thermal-form-assumed",
           status: "note",
-          message: [
-            gravityActive ? "the gravitational spectrum uses the thermal spin-2 form, assumed (to confirm)" : null,
-            offCentre ? "off the de Sitter centre the electromagnetic spectrum is taken thermal at the local temperature (exact only at the centre)" : null,
-          ].filter(Boolean).join("; "),
+          message:
+            "de Sitter gravity: the spin-2 field equation of the Weyl tensor is conformally invariant, but that the Bunch–Davies graviton state's " +
+            "Weyl correlator is the conformal image of the Minkowski vacuum's is assumed, not established here",
         }
-      : { code: "thermal-form-assumed", status: "not-applicable", message: "no assumed spectrum in use" },
+      : {
+          code: "thermal-form-assumed",
+          status: "not-applicable",
+          message: thermal ? "the spectrum in use is derived (Rindler: boost invariance of the vacuum; de Sitter electromagnetism: conformal invariance)" : "no thermal spectrum in use",
+        },
   );
+  notes.push(bodyOffsetNote(document));
   notes.push(
-    kind === "schwarzschild"
-      ? { code: "far-field-flat-approximation", status: "note", message: "the ramps' quanta to null infinity are counted in the lab's local flat approximation (no redshift or back-scattering)" }
-      : { code: "far-field-flat-approximation", status: "not-applicable", message: "not needed in this background" },
-  );
-  const split = document.separation.split;
-  notes.push(
-    split === "symmetric"
-      ? { code: "symmetric-split-quadrupole", status: "note", message: "symmetric split: the branches' mass quadrupoles are equal, so the gravitational count is exactly zero at leading order" }
-      : { code: "symmetric-split-quadrupole", status: "not-applicable", message: "one branch stays: the quadrupole difference is m d²" },
-  );
-  notes.push(
-    split !== "symmetric" && document.source.massKg > 0
+    gravitational.exactZeroReason === null
       ? document.source.labMassKg
-        ? { code: "lab-recoil", status: "ok", message: "the lab's recoil is included through m_eff = m(1 + m/M_lab)" }
+        ? { code: "lab-recoil", status: "ok", message: "the lab's recoil is included through m_eff = m M_lab/(m + M_lab), with d and x₀ measured by the lab" }
         : { code: "lab-recoil", status: "note", message: "no lab mass given: the lab is taken as immovable (m_eff = m)" }
       : { code: "lab-recoil", status: "not-applicable", message: "no quadrupole difference to correct" },
   );
   return notes;
+}
+
+/**
+ * The hold rates are zero-frequency limits of the field's noise: they describe the count as a steady rate only when
+ * the time the branches spend apart (∫σ²dτ, lab proper time) is long against the time over which the noise is
+ * correlated. That time, in the lab's proper time:
+ * - Schwarzschild: the hole's response, GM/c³ and the light time b/c, both Killing times, times the lapse (the
+ *   written assumption of the exact rate and of the far-zone gravitational rate, sources.ts);
+ * - Rindler: c/a; de Sitter: 1/α = c/√(a² + c²H²) (the thermal time ħ/(2πk_B T_local)).
+ * Schwarzschild is judged by ratioStatus (a rate outside its assumption is invalid). In Rindler and de Sitter the
+ * spectral count is exact for any protocol and only the reading of the hold-driven part as a steady rate fails, so
+ * the status stops at caution.
+ */
+function holdTimescale(document: ScenarioDocument, history: SeparationHistory, background: Background): ValidityFlag {
+  const code = "hold-timescale";
+  const kind = document.background.kind;
+  if (kind === "minkowski") return { code, status: "not-applicable", message: "no horizon: no hold rate" };
+  const apart = squaredProfileIntegralSeconds(history, electromagneticChannel);
+  if (!(apart > 0)) return { code, status: "not-applicable", message: "the branches are never apart" };
+  const apartText = `the time spent apart, ∫σ²dτ = ${apart.toPrecision(3)} s of lab proper time`;
+  if (kind === "schwarzschild") {
+    const massTime = (G * document.background.massKg) / c ** 3;
+    const lightTime = background.labRadiusMetres / c;
+    const response = background.labRedshiftFactor * Math.max(massTime, lightTime);
+    const ratio = response / apart;
+    return {
+      code,
+      status: ratioStatus(ratio),
+      message:
+        `the Schwarzschild hold rates are zero-frequency limits: they need ${apartText}, long against the hole's response ` +
+        `time, GM/c³ = ${massTime.toPrecision(3)} s and b/c = ${lightTime.toPrecision(3)} s of Killing time (${response.toPrecision(3)} s of lab time); ratio ${ratio.toExponential(2)}`,
+      measure: ratio,
+    };
+  }
+  const correlation = hbar / (2 * Math.PI * kB * background.labLocalTemperatureKelvin);
+  const ratio = correlation / apart;
+  const status = ratioStatus(ratio);
+  return {
+    code,
+    status: status === "invalid" ? "caution" : status,
+    message:
+      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${correlation.toPrecision(3)} s; ` +
+      `ratio ${ratio.toExponential(2)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
+    measure: ratio,
+  };
 }
 
 function doubleRange(reported: FlagInputs["reported"]): ValidityFlag {
@@ -195,9 +275,10 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
     samplingConverged(channels),
     ...kinkFlags(inputs.history, channels),
+    holdTimescale(inputs.document, inputs.history, inputs.background),
     schwarzschildRegime(inputs.document, inputs.electromagnetic),
     ...modelChecks(inputs.modelFlags),
-    ...modelNotes(inputs.document, inputs.background, inputs.gravitational),
+    ...modelNotes(inputs.document, inputs.gravitational),
     doubleRange(inputs.reported),
     ...inputs.background.flags.map((f) => ({ code: `background:${f.code}`, status: f.severity, message: f.message }) satisfies ValidityFlag),
   ];

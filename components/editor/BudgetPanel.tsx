@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * The Budget: quanta to infinity, quanta into the horizon, the ramp/hold split, the total, decoherence and
+ * The Budget: quanta to null infinity ℐ⁺, quanta into the horizon, the ramp/hold split, the total, decoherence and
  * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
  * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
  */
@@ -26,8 +26,8 @@ function countRow(key: string, words: string, of: Row["of"]): Row {
 }
 
 const ROWS: Row[] = [
-  countRow("far-field", "Quanta to infinity", (c) => c.farFieldQuanta),
-  countRow("horizon", "Quanta into the horizon", (c) => c.horizonQuanta),
+  countRow("far-field", "To null infinity ℐ⁺", (c) => c.farFieldQuanta),
+  countRow("horizon", "Into the horizon", (c) => c.horizonQuanta),
   countRow("ramp", "Ramp-driven", (c) => c.rampDrivenQuanta),
   countRow("hold", "Hold-driven", (c) => c.holdDrivenQuanta),
   { key: "total", words: "Total ⟨N⟩", of: (c) => c.totalQuanta, combined: (r) => r.combined.totalQuanta },

@@ -89,10 +89,10 @@ function totalsOf(result: ScenarioResult): { ramp: number; hold: number } {
 function RunningCounts({ running, result }: { running: RunningQuanta; result: ScenarioResult }) {
   const end = totalsOf(result);
   const rows: { key: string; words: string; now: number; of: number }[] =
-    running.split === "far-field-and-horizon"
+    running.split === "ramps-and-horizon"
       ? [
-          { key: "far-field", words: "to ℐ⁺", now: running.log10FarField!, of: end.ramp },
-          { key: "horizon", words: "into H⁺", now: running.log10Horizon!, of: end.hold },
+          { key: "ramp", words: "ramp-driven", now: running.log10RampDriven, of: end.ramp },
+          { key: "horizon", words: "hold-driven, into H⁺", now: running.log10Horizon!, of: end.hold },
         ]
       : running.split === "far-field-only"
         ? [{ key: "far-field", words: "to ℐ⁺", now: running.log10FarField!, of: log10Sum(end.ramp, end.hold) }]

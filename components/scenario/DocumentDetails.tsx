@@ -185,6 +185,11 @@ export function DocumentDetails({ document }: { document: ScenarioDocument }) {
           mono={false}
         />
         <Row label="Full separation d" value={formatLength(separation.distanceMetres)} exactValue={exact(separation.distanceMetres, "m")} />
+        <Row
+          label="Body offset x₀ from the lab's centre of mass"
+          value={formatLength(separation.bodyOffsetMetres ?? 0)}
+          exactValue={exact(separation.bodyOffsetMetres ?? 0, "m")}
+        />
       </Section>
       <div className="lg:col-span-2">
         <Section title={protocolKindNames[document.protocol.kind]}>

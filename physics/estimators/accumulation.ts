@@ -13,9 +13,9 @@
  *   The interference between windows and the shape factor of each ramp are neglected. Inside a window the share
  *   grows with ∫₀^u (df/du′)² du′ / I_w.
  *
- * Where the result has separate counts (Schwarzschild: the ramps' quanta reach null infinity, the hold's go into
- * the horizon; Minkowski: everything reaches null infinity), the running counts follow the same split; in the
- * Rindler wedge and the de Sitter static patch the one count is given split by what drives it.
+ * Where the result has separate counts (Schwarzschild: the hold's quanta go into the horizon, the ramps' to ℐ⁺ or
+ * into the horizon by regime; Minkowski: everything reaches null infinity), the running counts follow the same
+ * split; in the Rindler wedge and the de Sitter static patch the one count is given split by what drives it.
  */
 import type { MotionWindow, SeparationHistory } from "../protocols/types";
 import type { ChannelResult, Quantity, ScenarioResult } from "../result";
@@ -25,7 +25,7 @@ import { log10Sum } from "./quantity";
 /** Grid points per moving window for the running integrals (trapezoid rule: the shares are for display). */
 const STEPS = 256;
 
-export type CountSplit = "far-field-and-horizon" | "far-field-only" | "single-spectral";
+export type CountSplit = "ramps-and-horizon" | "far-field-only" | "single-spectral";
 
 export interface RunningQuanta {
   tauSeconds: number;
@@ -132,7 +132,7 @@ const times = (log10: number, share: number) => (share <= 0 || log10 === -Infini
 
 export function countSplit(result: ScenarioResult): CountSplit {
   const channel = result.electromagnetic;
-  if (channel.farFieldQuanta !== null && channel.horizonQuanta !== null) return "far-field-and-horizon";
+  if (channel.horizonQuanta !== null) return "ramps-and-horizon";
   if (channel.farFieldQuanta !== null) return "far-field-only";
   return "single-spectral";
 }
@@ -157,8 +157,8 @@ export function createQuantaAccumulation(history: SeparationHistory, result: Sce
       split,
       log10RampDriven,
       log10HoldDriven,
-      log10FarField: split === "far-field-only" ? log10Sum(log10RampDriven, log10HoldDriven) : split === "far-field-and-horizon" ? log10RampDriven : null,
-      log10Horizon: split === "far-field-and-horizon" ? log10HoldDriven : null,
+      log10FarField: split === "far-field-only" ? log10Sum(log10RampDriven, log10HoldDriven) : null,
+      log10Horizon: split === "ramps-and-horizon" ? log10HoldDriven : null,
       shares: {
         electromagnetic: { ramp: parts[0].ramp, hold: parts[0].hold },
         gravitational: { ramp: parts[1].ramp, hold: parts[1].hold },

@@ -16,8 +16,11 @@ export interface ChannelEstimate {
   log10HoldQuanta: number;
   /** log10 of the hold-driven quanta per second of lab proper time at full separation. */
   log10HoldRate: number;
-  /** Minkowski: the whole count reaches null infinity. Schwarzschild: the ramps' quanta go to null infinity, the hold's into the horizon. Thermal: one count. */
-  counts: "far-field-only" | "far-field-and-horizon" | "single-spectral";
+  /**
+   * Minkowski: the whole count reaches null infinity. Schwarzschild: the hold's quanta go into the horizon, the
+   * ramps' to ℐ⁺ or into the horizon depending on the regime (not split: no far-field count). Thermal: one count.
+   */
+  counts: "far-field-only" | "ramps-and-horizon" | "single-spectral";
   regime: RateRegime;
   rampSourceKey: SourceKey;
   holdSourceKey: SourceKey;
@@ -31,7 +34,8 @@ export interface ChannelEstimate {
 
 function comparisonResult(estimate: ChannelEstimate): HorizonRateComparison | null {
   const comparison = estimate.comparison;
-  if (comparison === null) return null;
+  // No comparison where the hold rate at full separation is exactly zero (a body offset x₀ = −d/2, one branch staying).
+  if (comparison === null || comparison.log10HoldRate === -Infinity) return null;
   return {
     estimateHoldRate: quantityFromLog10(comparison.log10HoldRate, "s^-1", comparison.sourceKey),
     ratioExactToEstimate: quantityFromLog10(estimate.log10HoldRate - comparison.log10HoldRate, "1", "schwarzschild-exact-vs-estimate"),
@@ -50,8 +54,8 @@ export function channelResult(estimate: ChannelEstimate): ChannelResult {
     totalQuanta: quantityFromLog10(total, "1", estimate.totalSourceKey),
     rampDrivenQuanta: ramp,
     holdDrivenQuanta: hold,
-    farFieldQuanta: estimate.counts === "far-field-only" ? quantityFromLog10(total, "1", estimate.totalSourceKey) : estimate.counts === "far-field-and-horizon" ? ramp : null,
-    horizonQuanta: estimate.counts === "far-field-and-horizon" ? hold : null,
+    farFieldQuanta: estimate.counts === "far-field-only" ? quantityFromLog10(total, "1", estimate.totalSourceKey) : null,
+    horizonQuanta: estimate.counts === "ramps-and-horizon" ? hold : null,
     holdRate: quantityFromLog10(estimate.log10HoldRate, "s^-1", estimate.holdSourceKey),
     regime: estimate.regime,
     comparison: comparisonResult(estimate),

@@ -10,8 +10,9 @@
  * (arXiv:2205.06279, arXiv:2301.00026). d is the proper separation measured by the lab.
  * Gravity: the far-zone rate (leading order in GM/(c²b)) of schwarzschildGravityFarZoneRate for the channel's
  * quadrupole scale m_eff·d² (body mass m_eff, immovable lab, so that ΔI = m_eff d² (n̂n̂)^STF as in channel-source.ts).
- * Below b = GRAVITY_FAR_ZONE_MIN_B_OVER_M·GM/c² that formula does not hold and no exact near-zone gravity is
- * computed: the published estimate (near-horizon, interpolated or far) is reported instead, with a caution.
+ * It is used at every radius (no other value is ever swapped in, so the rate is continuous in b), with a flag whose
+ * measure is the size GM/(c²b) of the relative corrections it leaves out: a note up to 1 %, a caution up to 10 %,
+ * and invalid closer in, where the corrections are of order one. The published estimate is only shown beside it.
  *
  * Both module rates are exactly quadratic in the source, so each is evaluated for a unit charge (1 C, at the actual
  * d, which its separation check needs) or a unit quadrupole scale (1 kg m²) and multiplied by q² or (m_eff d²)² in
@@ -19,13 +20,14 @@
  * here and flagged: a lab placed so close to the horizon that its areal radius rounds onto 2GM/c² (the Rindler
  * rate with the background's precise acceleration, the exact limit to O(ε) below double resolution), and a lab so
  * far away that the rate underflows (the exact far-zone law, FAR_ZONE_COEFFICIENT times the estimate, exact to
- * O(GM/(c²b))). Flags raised: schwarzschild-multipole-check, schwarzschild-gravity-model, and the module's own
+ * O(GM/(c²b))); gravity likewise in the logarithm. Flags raised: schwarzschild-multipole-check, schwarzschild-gravity-model, and the module's own
  * cautions as schwarzschild-exact:<code>.
  */
 import type { FlagStatus, ValidityFlag } from "../result";
 import {
   FAR_ZONE_COEFFICIENT,
-  GRAVITY_FAR_ZONE_MIN_B_OVER_M,
+  GRAVITY_FAR_ZONE_CORRECTION_CAUTION,
+  farZoneCorrectionSize,
   massLengthMetres,
   schwarzschildGravityFarZoneRate,
   schwarzschildHorizonRate,
@@ -117,51 +119,53 @@ function exactElectromagneticRate(input: SchwarzschildHorizonRateInput, estimate
   return { log10RatePerSecond: Math.log10(coefficient) + estimate.log10RatePerSecond, regime: "exact", sourceKey: key, estimate, flags };
 }
 
-function gravityModelFlag(status: FlagStatus, message: string, measure: number): ValidityFlag {
-  return { code: "schwarzschild-gravity-model", status, message, measure };
-}
-
-function farZoneGravityRate(input: SchwarzschildHorizonRateInput, estimate: EstimatedRate): SchwarzschildHorizonRate {
-  const bOverM = input.labArealRadiusMetres / massLengthMetres(input.massKg);
-  const fallback = (why: string): SchwarzschildHorizonRate => ({
-    ...estimate,
-    estimate: null,
-    flags: [gravityModelFlag("caution", `${why}; the published estimate (${estimate.regime}) is reported as the gravitational hold rate`, bOverM)],
-  });
-  if (bOverM < GRAVITY_FAR_ZONE_MIN_B_OVER_M) {
-    return fallback(
-      `b = ${bOverM.toPrecision(3)} GM/c² is inside ${GRAVITY_FAR_ZONE_MIN_B_OVER_M} GM/c², where the far-zone tidal-heating rate does not hold ` +
-        "and no exact near-zone gravitational rate is computed",
-    );
+/** Size GM/(c²b) of the corrections the leading-order gravitational rate leaves out, judged as in physics/flags.ts. */
+function gravityModelFlag(correction: number): ValidityFlag {
+  const size = `relative corrections of order GM/(c²b) = ${correction.toPrecision(2)} (b = ${(1 / correction).toPrecision(3)} GM/c²) are not computed`;
+  const base = "gravitational hold rate: the far-zone tidal-heating rate, leading order in GM/(c²b), the same formula at every radius";
+  if (correction <= GRAVITY_FAR_ZONE_CORRECTION_CAUTION) {
+    return { code: "schwarzschild-gravity-model", status: "note", message: `${base}; ${size}`, measure: correction };
   }
-  const far = schwarzschildGravityFarZoneRate({
-    massKg: input.massKg,
-    labArealRadiusMetres: input.labArealRadiusMetres,
-    bodyMassKg: 1,
-    separationMetres: 1,
-    axis: input.axis,
-  });
-  if (!isPositiveFinite(far.ratePerLabSecond)) return fallback("the far-zone rate underflows a double this far out");
+  if (correction <= 0.1) {
+    return { code: "schwarzschild-gravity-model", status: "caution", message: `${base}; ${size}: the rate is uncertain by about that fraction`, measure: correction };
+  }
   return {
-    log10RatePerSecond: 2 * log10SourceAmplitude(input) + Math.log10(far.ratePerLabSecond),
-    regime: "far-zone",
-    sourceKey: "schwarzschild-exact-gw-far-zone",
-    estimate,
-    flags: [
-      gravityModelFlag(
-        "note",
-        `far-zone gravitational rate (tidal heating of the hole, leading order in GM/(c²b), b = ${bOverM.toPrecision(3)} GM/c²); ` +
-          "the exact near-zone gravitational rate is not computed",
-        bOverM,
-      ),
-    ],
+    code: "schwarzschild-gravity-model",
+    status: "invalid",
+    message:
+      `${base}; ${size}: corrections of order one, so not even the order of magnitude is assured this close to the hole ` +
+      "(the published order-of-magnitude estimate, the Rindler limit near the horizon, is shown beside it for comparison)",
+    measure: correction,
   };
 }
 
+/**
+ * The far-zone rate per unit quadrupole scale at every radius outside the horizon: the Killing-time rate is
+ * continuous in b down to 2GM/c², and the lab's lapse comes from the background (accurate however close the lab
+ * sits), so a lab whose areal radius rounds onto 2GM/c² still gets the limit of the same formula.
+ */
+function farZoneGravityRate(input: SchwarzschildHorizonRateInput, estimate: EstimatedRate): SchwarzschildHorizonRate {
+  const horizon = 2 * massLengthMetres(input.massKg);
+  const b = Math.max(input.labArealRadiusMetres, horizon * (1 + Number.EPSILON));
+  const far = schwarzschildGravityFarZoneRate({ massKg: input.massKg, labArealRadiusMetres: b, bodyMassKg: 1, separationMetres: 1, axis: input.axis });
+  const flags = [gravityModelFlag(farZoneCorrectionSize(input.massKg, input.labArealRadiusMetres))];
+  const log10Quadrupole = 2 * log10SourceAmplitude(input);
+  const base = { regime: "far-zone" as const, sourceKey: "schwarzschild-exact-gw-far-zone" as const, estimate, flags };
+  if (isPositiveFinite(far.ratePerKillingSecond)) {
+    return { ...base, log10RatePerSecond: log10Quadrupole + Math.log10(far.ratePerKillingSecond) - Math.log10(input.labRedshiftFactor) };
+  }
+  // So far out that the unit rate underflows: the same leading-order law, 96/(5π) or 26/(5π) times the published
+  // far estimate (which carries the same lapse), in the logarithm.
+  flags.push({ code: "schwarzschild-exact:far-zone-limit-used", status: "note", message: "the far-zone gravitational rate underflows a double this far out: it is computed in the logarithm" });
+  return { ...base, log10RatePerSecond: Math.log10(GRAVITY_FAR_ZONE_RATIO[input.axis]) + estimate.log10RatePerSecond };
+}
+
+/** The far-zone gravitational rate over the published estimate with coefficient 1 (one branch stays, gravity-far-zone.ts). */
+const GRAVITY_FAR_ZONE_RATIO = { radial: 96 / (5 * Math.PI), tangential: 26 / (5 * Math.PI) } as const;
+
 function describeExact(lab: SchwarzschildRateLab): Pick<SchwarzschildHorizonRate, "regime" | "sourceKey"> {
   if (lab.channel === "electromagnetic") return { regime: "exact", sourceKey: "schwarzschild-exact-em" };
-  const inFarZone = lab.labArealRadiusMetres / massLengthMetres(lab.massKg) >= GRAVITY_FAR_ZONE_MIN_B_OVER_M;
-  return inFarZone ? { regime: "far-zone", sourceKey: "schwarzschild-exact-gw-far-zone" } : describeEstimate(lab);
+  return { regime: "far-zone", sourceKey: "schwarzschild-exact-gw-far-zone" };
 }
 
 export const exactHorizonRateModel: SchwarzschildHorizonRateModel = {

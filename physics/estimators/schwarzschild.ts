@@ -1,24 +1,24 @@
 /**
- * Schwarzschild estimator (static lab at areal radius b outside a black hole of mass M, Unruh state). Two distinct
- * counts that add: the ramps' quanta to null infinity, from the far-field estimator in the lab's local flat
- * approximation (source "schwarzschild-ramps"), and the hold's quanta into the horizon,
+ * Schwarzschild estimator (static lab at areal radius b outside a black hole of mass M, Unruh state). Two counts
+ * that add: the ramps' quanta (schwarzschild-ramps.ts: to null infinity ℐ⁺ for slow ramps far from the hole, mostly
+ * into the horizon near it; source "schwarzschild-ramps"), and the hold's quanta into the horizon,
  *   ⟨N⟩_hold = Γ ∫ f(τ)² dτ,   f = Δp(τ)/Δp_max (EM) or ΔI(τ)/ΔI_max (gravity), τ the lab's proper time,
  * with Γ the rate at full separation from a SchwarzschildHorizonRateModel (default: exactHorizonRateModel, the exact
  * horizon-method rate; schwarzschild-horizon-rate.ts). This is the same definition of the hold-driven part as the
  * Rindler and de Sitter spectral split (physics/spectra/channels.ts: the zero-frequency noise times ∫f²dt, the time
  * spent apart during the ramps included), so the parts compare across backgrounds; here it is the count into the
  * horizon, which adds to the ramps' count at null infinity. Γ scales as d², so Γ(d_max) f² is the rate at d(τ).
- * Approximations: ramp wavelengths short compared with the distance to the hole; hold long compared with GM/c³
- * (the rate is the zero-frequency limit); those of the rate model.
- * Flags raised by the caller: Schwarzschild regime, flat-approximation note, separation vs the distance to the
- * horizon, and the rate model's own checks (carried in ChannelEstimate.modelFlags).
+ * Approximations: those of the ramp model (its flag schwarzschild-ramp-model); hold long compared with GM/c³ and
+ * b/c (the rate is the zero-frequency limit; flag hold-timescale); those of the rate model.
+ * Flags raised by the caller: Schwarzschild regime, separation vs the distance to the horizon, and the model's own
+ * checks (carried in ChannelEstimate.modelFlags).
  */
 import type { SeparationHistory } from "../protocols/types";
 import { timesSquaredSource, zeroEstimate, type ChannelEstimate } from "./channel-estimate";
 import type { ChannelSource } from "./channel-source";
 import { squaredProfileIntegralSeconds } from "./hold-quanta";
 import { log10Product } from "./quantity";
-import { rampQuantaPerSquaredSource } from "./ramp-quanta";
+import { schwarzschildRampQuanta } from "./schwarzschild-ramps";
 import type { SchwarzschildHorizonRateInput, SchwarzschildHorizonRateModel } from "./schwarzschild-horizon-rate";
 
 export type SchwarzschildLab = Omit<SchwarzschildHorizonRateInput, "channel" | "chargeOrEffectiveMass" | "separationMetres">;
@@ -37,12 +37,12 @@ export function schwarzschildEstimate(
       rampSourceKey: "schwarzschild-ramps",
       holdSourceKey: described.sourceKey,
       totalSourceKey: described.sourceKey,
-      counts: "far-field-and-horizon",
+      counts: "ramps-and-horizon",
       regime: described.regime,
     });
   }
   const rate = model.rate({ ...lab, channel, chargeOrEffectiveMass: source.chargeOrEffectiveMass, separationMetres: source.separationMetres });
-  const ramp = rampQuantaPerSquaredSource(history, source.definition, 0, kinkTimeResolutionSeconds);
+  const ramp = schwarzschildRampQuanta(history, source.definition, lab, kinkTimeResolutionSeconds);
   const timeApart = squaredProfileIntegralSeconds(history, source.definition);
   return {
     channel,
@@ -50,14 +50,18 @@ export function schwarzschildEstimate(
     exactZeroReason: null,
     log10RampQuanta: timesSquaredSource(source.log10Source, ramp.log10PerSquaredSource),
     log10HoldQuanta: log10Product(rate.log10RatePerSecond, Math.log10(timeApart)),
-    log10HoldRate: rate.log10RatePerSecond,
-    counts: "far-field-and-horizon",
+    log10HoldRate: log10Product(rate.log10RatePerSecond, source.log10FullSeparationFactor),
+    counts: "ramps-and-horizon",
     regime: rate.regime,
     rampSourceKey: "schwarzschild-ramps",
     holdSourceKey: rate.sourceKey,
     totalSourceKey: rate.sourceKey,
     convergence: ramp.convergence,
-    comparison: rate.estimate && { log10HoldRate: rate.estimate.log10RatePerSecond, regime: rate.estimate.regime, sourceKey: rate.estimate.sourceKey },
-    modelFlags: rate.flags,
+    comparison: rate.estimate && {
+      log10HoldRate: log10Product(rate.estimate.log10RatePerSecond, source.log10FullSeparationFactor),
+      regime: rate.estimate.regime,
+      sourceKey: rate.estimate.sourceKey,
+    },
+    modelFlags: [...rate.flags, ramp.flag],
   };
 }

@@ -45,11 +45,11 @@ const entries = {
       "L. D. Landau & E. M. Lifshitz, The Classical Theory of Fields, §110; P. C. Peters & J. Mathews, Phys. Rev. 131, 435 (1963); " +
       "D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 105, 086001 (2022), arXiv:2112.10798",
     formula:
-      "\\langle N\\rangle_\\infty = \\frac{G}{5\\pi\\hbar c^5}\\int_0^\\infty \\omega^5 \\sum_{ij}|\\Delta\\tilde I^{\\rm STF}_{ij}(\\omega)|^2 d\\omega,\\quad \\Delta I_{ij} = m_{\\rm eff}(x_A^2 - x_B^2)(n_in_j - \\tfrac13\\delta_{ij})",
+      "\\langle N\\rangle_\\infty = \\frac{G}{5\\pi\\hbar c^5}\\int_0^\\infty \\omega^5 \\sum_{ij}|\\Delta\\tilde I^{\\rm STF}_{ij}(\\omega)|^2 d\\omega,\\quad \\Delta I_{ij} = m_{\\rm eff}\\big[(x_0 + x_A)^2 - (x_0 + x_B)^2\\big](n_in_j - \\tfrac13\\delta_{ij})",
     assumptions: [
       ...farFieldAssumptions,
-      "the lab recoils to keep the centre of mass fixed: m_eff = m(1 + m/M_lab) when the document gives a lab mass, m otherwise",
-      "a symmetric split has equal branch quadrupoles: the leading-order difference is exactly zero (higher multipoles not computed)",
+      "the lab recoils to keep the centre of mass fixed: m_eff = m M_lab/(m + M_lab) when the document gives a lab mass, m otherwise; d and x₀ are measured by the lab",
+      "x₀ is the body's place before the split, from the lab's centre of mass: ΔI = m_eff(2x₀d + d²) (one branch stays), 2m_eff x₀ d (symmetric split, zero only for x₀ = 0)",
     ],
     failureModes: ["as for the electromagnetic count; octupole and higher orders are not included"],
   },
@@ -64,43 +64,65 @@ const entries = {
     failureModes: ["separation comparable with c²/a", "kinked paths (ramp-driven part reported at the stated resolution)"],
   },
   "rindler-gw": {
-    title: "Uniformly accelerated lab, gravity: thermal spectrum with the spin-2 factor (assumed form)",
+    title: "Uniformly accelerated lab, gravity: thermal spectrum with the spin-2 factor (derived)",
     citation:
-      "scalings from D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026; " +
-      "the (ω² + a²/c²)(ω² + 4a²/c²) density of states is the Fourier transform of a csch⁶ correlator, assumed here, to confirm",
+      "derived: the Minkowski vacuum is boost invariant, so the tidal field's Wightman function along the uniformly accelerated worldline depends on " +
+      "τ − τ' only, through the interval (2c/a)² sinh²(a(τ − τ' − iε)/2c): the csch⁶ correlator of a spin-2 field strength, whose Fourier transform is " +
+      "the density of states (ω² + a²/c²)(ω² + 4a²/c²) (checked numerically in tests/unit/physics/vacuum-spectra.test.ts); as a → 0 it is the " +
+      "quadrupole formula counted in quanta. Scalings: D. L. Danielson, G. Satishchandran, R. M. Wald, PRD 108, 025007 (2023), arXiv:2301.00026",
     formula:
       "\\langle N\\rangle = \\int_0^\\infty \\frac{2G}{15\\pi\\hbar c^5}\\,\\frac{(\\omega^2+\\alpha^2)(\\omega^2+4\\alpha^2)}{\\omega}\\coth\\frac{\\pi\\omega}{\\alpha}\\,|\\tilde{\\dot Q}(\\omega)|^2 d\\omega,\\ \\alpha = a/c",
-    assumptions: [...thermalAssumptions, "isotropic tidal-field correlator along the accelerated worldline (assumed; not established)"],
-    failureModes: ["the coefficient of the hold rate is not established independently: treat as an order-of-magnitude estimate"],
+    assumptions: [
+      ...thermalAssumptions,
+      "the count uses the one-axis quadrupole weight Σ(n_in_j − δ_ij/3)² = 2/3 with the same csch⁶ spectrum for every component, as the electric field's correlator is the same for every component (Boyer 1980); a separation along the acceleration and one across it are not distinguished",
+    ],
+    failureModes: ["separation comparable with c²/a", "acceleration jumps in the ramps (the count grows with the bandwidth)"],
   },
   "de-sitter-em": {
-    title: "de Sitter static patch: the thermal spectrum at α = √(a² + c²H²)/c (conformal invariance of Maxwell theory)",
+    title: "de Sitter static patch: the thermal spectrum at α = √(a² + c²H²)/c, exact at and off the centre (conformal invariance of Maxwell theory)",
     citation:
       "G. W. Gibbons & S. W. Hawking, PRD 15, 2738 (1977); H. Narnhofer, I. Peter, W. Thirring, Int. J. Mod. Phys. B 10, 1507 (1996); " +
       "S. Deser & O. Levin, CQG 14, L163 (1997); D. L. Danielson, G. Satishchandran, R. M. Wald, arXiv:2301.00026",
-    formula: "S(\\omega)\\ \\text{as for Rindler with}\\ a \\to \\sqrt{a_{\\rm lab}^2 + c^2H^2} = 2\\pi c k_B T_{\\rm local}/\\hbar",
-    assumptions: [...thermalAssumptions, "exact at the centre; off the centre the thermal form at the local temperature is an estimate (to confirm)"],
+    formula:
+      "S(\\omega)\\ \\text{as for Rindler with}\\ a \\to \\sqrt{a_{\\rm lab}^2 + c^2H^2} = 2\\pi c k_B T_{\\rm local}/\\hbar,\\quad " +
+      "\\frac{d\\langle N\\rangle}{d\\tau} = \\frac{q^2d^2H^3}{6\\pi^2\\varepsilon_0\\hbar c^3\\,(1 - H^2r^2/c^2)^{3/2}}",
+    assumptions: [
+      ...thermalAssumptions,
+      "exact at every static radius r < c/H: in the conformally flat slicing the static lab's worldline is a uniformly accelerated line of Minkowski space " +
+        "(acceleration √(a² + c²H²) in the flat metric), Maxwell's equations are conformally invariant in four dimensions and the Bunch–Davies state is " +
+        "the conformal vacuum, so the electric-field correlator along the lab is the Rindler one at α = √(a² + c²H²)/c, the field's conformal weight " +
+        "cancelling against the lab's proper time",
+    ],
     failureModes: ["separation comparable with the distance to the cosmological horizon"],
   },
   "de-sitter-gw": {
-    title: "de Sitter static patch, gravity: thermal spin-2 form at the local temperature (assumed form)",
-    citation: "as de-sitter-em and rindler-gw; gravity is not conformally invariant, so this is an estimate",
+    title: "de Sitter static patch, gravity: the spin-2 thermal form at the local temperature (state identified by assumption)",
+    citation:
+      "as de-sitter-em and rindler-gw. Established: the linearised Weyl tensor obeys the massless spin-2 field equation, which is conformally invariant " +
+      "on a conformally flat background such as de Sitter (R. Penrose, Proc. R. Soc. A 284, 159 (1965)), so the field strength maps to flat space as " +
+      "Maxwell's field does. Not established here: that the graviton state (Bunch–Davies) restricted to the Weyl tensor is the conformal image of the " +
+      "Minkowski vacuum — the metric perturbation itself is not conformally coupled (each polarisation obeys the minimally coupled scalar equation)",
     formula: "\\text{as rindler-gw with}\\ \\alpha = 2\\pi k_B T_{\\rm local}/\\hbar",
-    assumptions: [...thermalAssumptions, "thermal spin-2 density of states assumed"],
-    failureModes: ["order-of-magnitude only"],
+    assumptions: [...thermalAssumptions, "the Weyl-tensor correlator of the graviton state is the conformal image of the Minkowski vacuum's (flagged: thermal-form-assumed)"],
+    failureModes: ["if the graviton state's Weyl correlator differs from the conformal image, the coefficient (not the a-, H-scaling of the field equation) changes"],
   },
   "schwarzschild-far-em": {
     title: "Black hole, lab far away: published order-of-magnitude estimate of the horizon decoherence rate",
     citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, 'Black holes decohere quantum superpositions', IJMPD 31, 2241003 (2022), arXiv:2205.06279",
     formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^3M^3q^2d^2}{\\varepsilon_0\\hbar c^6 D^6}\\quad(\\text{Planck units: } M^3q^2d^2/D^6),\\ D = \\text{areal radius of the lab}",
-    assumptions: ["D ≫ 2GM/c²", "Unruh state", "rate per Killing time, converted to lab proper time by the redshift factor"],
+    assumptions: [
+      "D ≫ 2GM/c²",
+      "Unruh state",
+      "rate per Killing time, converted to lab proper time by the redshift factor",
+      "charge convention: the Planck-unit q² is read in Heaviside–Lorentz units, q² → q²/(ε₀ħc); read in Gaussian units, q² → q²/(4πε₀ħc), the estimate is 4π smaller and every ratio of the exact rate to it 4π larger",
+    ],
     failureModes: ["order of magnitude only: the coefficient is not given by the source", "not valid near the horizon"],
   },
   "schwarzschild-far-gw": {
     title: "Black hole, lab far away, gravity: published order-of-magnitude estimate",
     citation: "D. L. Danielson, G. Satishchandran, R. M. Wald, IJMPD 31, 2241003 (2022), arXiv:2205.06279",
-    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^6M^5 (m_{\\rm eff}d^2)^2}{\\hbar c^{10}D^{10}}",
-    assumptions: ["D ≫ 2GM/c²", "the quadrupole scale m d² of the source difference (zero for a symmetric split)"],
+    formula: "\\frac{d\\langle N\\rangle}{dt} \\sim \\frac{G^6M^5 (\\Delta I)^2}{\\hbar c^{10}D^{10}},\\ \\Delta I = m_{\\rm eff}(2x_0d + d^2)\\ \\text{or}\\ 2m_{\\rm eff}x_0d",
+    assumptions: ["D ≫ 2GM/c²", "the quadrupole difference ΔI at full separation (m_eff d² for x₀ = 0 and one branch staying)"],
     failureModes: ["order of magnitude only", "not valid near the horizon"],
   },
   "schwarzschild-near-em": {
@@ -146,7 +168,7 @@ const entries = {
       "test charge: no back-reaction on the metric; the lab is static at areal radius b and the field is in the Unruh state",
       "d is the proper separation measured by the lab, small compared with the proper distance to the horizon (leading order in d)",
       "hold long compared with GM/c³: the zero-frequency limit; α = 0 for a radial separation, π/2 for a tangential one",
-      "hold-driven count Γ∫f²dτ over the lab's proper time, as in the Rindler/de Sitter split; the ramps' quanta to infinity add to it",
+      "hold-driven count Γ∫f²dτ over the lab's proper time, as in the Rindler/de Sitter split; the ramps' quanta (schwarzschild-ramps) add to it",
     ],
     failureModes: [
       "separation comparable with the distance to the horizon (flagged by the module: the rate is the leading term in d)",
@@ -165,12 +187,12 @@ const entries = {
       "\\Delta\\mathcal E_{ab} = -\\frac{G}{2}\\Delta I_{cd}\\,\\partial_a\\partial_b\\partial_c\\partial_d\\frac1R\\Big|_{R=b},\\ \\Delta I = m_{\\rm eff}d^2(\\hat n\\hat n)^{\\rm STF}" +
       "\\ \\Rightarrow\\ \\frac{96}{5\\pi}\\ (\\text{radial}),\\ \\frac{26}{5\\pi}\\ (\\text{tangential})\\times\\frac{G^6M^5(m_{\\rm eff}d^2)^2}{\\hbar c^{10}b^{10}}",
     assumptions: [
-      "b ≥ 100 GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole",
-      "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff d² (zero for a symmetric split)",
+      "b ≫ GM/c²: leading order in GM/(c²b), Newtonian tidal field at the hole; relative corrections of order GM/(c²b) are not computed (their size is the measure of the flag schwarzschild-gravity-model)",
+      "the lab keeps its centre of mass fixed: the branches differ in their trace-free quadrupole m_eff(2x₀d + d²) (one branch stays) or 2m_eff x₀ d (symmetric), m_eff = m M_lab/(m + M_lab)",
       "Unruh state; slow variation (hold long compared with GM/c³)",
     ],
     failureModes: [
-      "no exact near-zone gravitational rate is computed: inside 100 GM/c² the published estimate is reported instead, with a caution",
+      "no exact near-zone gravitational rate is computed: the same leading-order rate is reported at every radius (continuous in b), a caution beyond GM/(c²b) = 1 %, invalid beyond 10 %; the published estimate is only shown beside it",
       "the tidal-heating coefficient is recalled, cross-checked against two independent results, not re-derived here",
     ],
   },
@@ -180,15 +202,31 @@ const entries = {
     formula:
       "\\Gamma_{\\rm exact}/\\Gamma_{\\rm estimate}\\ \\to\\ \\frac{2}{3\\pi^2}\\ (\\text{radial}),\\ \\frac{1}{6\\pi^2}\\ (\\text{tangential}),\\ " +
       "\\frac{96}{5\\pi},\\ \\frac{26}{5\\pi}\\ (\\text{gravity})\\ \\text{as}\\ b \\gg GM/c^2",
-    assumptions: ["both rates per second of lab proper time, for the same source and separation"],
+    assumptions: [
+      "both rates per second of lab proper time, for the same source and separation",
+      "charge convention of the estimate: Heaviside–Lorentz (q² → q²/(ε₀ħc)); in Gaussian units (q² → q²/(4πε₀ħc)) the electromagnetic ratios are 4π larger: 8/(3π) and 2/(3π)",
+    ],
     failureModes: ["near the horizon the estimate is the Rindler limit, which the tangential exact rate equals and the radial one approaches as 1 + 3(b/M − 2)"],
   },
   "schwarzschild-ramps": {
-    title: "Black hole: quanta of the ramps to null infinity, in the flat-space approximation at the lab",
-    citation: "far-field-em / far-field-gw evaluated in the lab's proper time",
-    formula: "\\langle N\\rangle_\\infty\\ \\text{as far-field, local flat approximation}",
-    assumptions: ["ramp wavelengths short compared with the distance to the hole", "redshift and back-scattering neglected"],
-    failureModes: ["ramps with c·duration comparable with the distance to the horizon"],
+    title: "Black hole: the ramps' quanta — to null infinity ℐ⁺ for slow ramps far from the hole, mostly into the horizon near it",
+    citation:
+      "slow ramps: the dipole at infinity of the static Copson–Linet field, q(b − 2GM/c²) (E. T. Copson, Proc. R. Soc. A 118, 184 (1928); " +
+      "B. Linet, J. Phys. A 9, 1081 (1976)), with the Killing-time stretch of the profile; near the horizon: the Rindler spectrum at the lab's " +
+      "acceleration (T. H. Boyer, PRD 21, 2137 (1980); S. Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986)); physics/estimators/schwarzschild-ramps.ts",
+    formula:
+      "N_{\\rm slow}(\\mathscr I^+) = \\beta^2 f\\,N_{\\rm flat},\\ f = 1 - \\frac{2GM}{c^2b},\\ \\beta^2 = f\\ (\\text{radial}),\\ f^2\\ (\\text{tangential});\\ " +
+      "N_{\\rm near} = N_{\\rm Rindler}(a);\\ \\log N = w\\log N_{\\rm slow} + (1-w)\\log N_{\\rm near},\\ w = \\frac{h^2}{1+h^2}\\frac{s^2}{1+s^2},\\ " +
+      "h = \\frac{c^2b}{2GM} - 1,\\ s = \\frac{c\\,\\tau_{\\rm ramp}}{\\sqrt f\\, b}",
+    assumptions: [
+      "slow-ramp limit: ramps long against b/c (and so GM/c³) in Killing time; exact in GM/(c²b) for photons; gravitons: the Killing-time stretch f² only, the quadrupole's matching to the hole not computed (relative corrections O(GM/(c²b)))",
+      "near-horizon limit: b − 2GM/c² ≪ 2GM/c², where the geometry around the lab is Rindler's; any ramp speed",
+      "fast ramps far away: the flat count, which the Rindler count at the small local acceleration equals",
+    ],
+    failureModes: [
+      "between the limits the count is interpolated, not computed: the flag schwarzschild-ramp-model gives the weight and the factor between the limits, the size of the uncertainty",
+      "no split of the ramps' quanta into those reaching ℐ⁺ and those crossing the horizon is reported",
+    ],
   },
   "spectral-split": {
     title: "Split of the spectral count into hold-driven (zero-frequency noise) and ramp-driven parts",
@@ -205,9 +243,10 @@ const entries = {
     failureModes: [],
   },
   "source-strength-gw": {
-    title: "Quadrupole difference scale m_eff·d² (lab recoil included when the lab mass is given)",
-    citation: "definition; two-body reduced quadrupole μ r² with r = x(1 + m/M_lab)",
-    formula: "A = m\\,(1 + m/M_{\\rm lab})\\,d_0^2\\ \\text{(one branch stays)},\\quad 0\\ \\text{(symmetric split)}",
+    title: "Quadrupole difference scale (lab recoil included when the lab mass is given)",
+    citation: "definition; two-body quadrupole about the common centre of mass, μ x² with μ = m M_lab/(m + M_lab) and x measured by the lab",
+    formula:
+      "A = m_{\\rm eff}\\,d_0^2\\,\\max_{\\sigma\\in[0,1]}|g(\\sigma)|,\\ g = 2\\tfrac{x_0}{d_0}\\sigma + \\sigma^2\\ \\text{(one branch stays)},\\ 2\\tfrac{x_0}{d_0}\\sigma\\ \\text{(symmetric)},\\ m_{\\rm eff} = \\frac{mM_{\\rm lab}}{m + M_{\\rm lab}}",
     assumptions: ["point mass"],
     failureModes: [],
   },

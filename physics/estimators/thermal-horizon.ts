@@ -5,11 +5,14 @@
  *   ⟨N⟩ = (1/ħ²) ∫ dω/2π |Δp̃(ω)|² S(ω),  S(ω) = ħω(ω² + α²)/(3π ε0 c³ (1 − e^{−2πω/α})),  α = 2π k_B T_local/ħ,
  *
  * which is a/c for Rindler (Boyer, PRD 21, 2137 (1980); Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986)) and
- * √(a_lab² + c²H²)/c for de Sitter (conformal invariance; Narnhofer–Peter–Thirring 1996, Deser–Levin 1997).
+ * √(a_lab² + c²H²)/c for de Sitter, exact at every static radius (the static lab is a uniformly accelerated line of the
+ * conformally flat slicing, Maxwell theory is conformally invariant and Bunch–Davies is the conformal vacuum;
+ * Narnhofer–Peter–Thirring 1996, Deser–Levin 1997): the hold rate is q²d²H³/(6π²ε0ħc³(1 − H²r²/c²)^{3/2}).
  * The spectral formula holds every quantum once (those through the horizon are those reaching null infinity,
  * arXiv:2301.00026), so one total is reported, split exactly into the hold-driven part S(0)/ħ² ∫Δp² dt
  * (S(0) = ħa³/(6π² ε0 c⁶)) and the ramp-driven rest (physics/spectra/channels.ts).
- * Gravity uses the thermal spin-2 form, an assumption flagged by the caller ("thermal-form-assumed").
+ * Gravity uses the spin-2 thermal form: derived for Rindler (boost invariance of the Minkowski vacuum, a csch⁶
+ * correlator); for de Sitter the graviton state's identification is assumed and flagged ("thermal-form-assumed").
  * Flags raised by the caller: separation vs distance to the horizon, kink, convergence, slow motion.
  */
 import type { SeparationHistory } from "../protocols/types";
@@ -42,7 +45,7 @@ export function thermalHorizonEstimate(
     exactZeroReason: null,
     log10RampQuanta: timesSquaredSource(source.log10Source, ramp.log10PerSquaredSource),
     log10HoldQuanta: log10Product(log10Rate, Math.log10(timeApart)),
-    log10HoldRate: log10Rate,
+    log10HoldRate: log10Product(log10Rate, source.log10FullSeparationFactor),
     ...keys,
     convergence: ramp.convergence,
     comparison: null,

@@ -47,6 +47,12 @@ export const separationSchema = z.object({
   split: z.enum(["symmetric", "one-branch-stays"]),
   /** Full separation d of the two branches at the hold. */
   distanceMetres: nonNegative("separation"),
+  /**
+   * x₀: where the body sits before the split, along the axis, measured by the lab from the lab's own centre of
+   * mass (the relative coordinate of body and lab, as d is). Absent means 0. Enters the quadrupole difference
+   * ΔI = m_eff[(x₀ + x_A)² − (x₀ + x_B)²], m_eff = m M_lab/(m + M_lab) (physics/estimators/channel-source.ts).
+   */
+  bodyOffsetMetres: z.number({ error: "body offset must be a number" }).finite().optional(),
 });
 export type SeparationSpec = z.infer<typeof separationSchema>;
 

@@ -12,8 +12,9 @@
  * 2137 (1980); Takagi, Prog. Theor. Phys. Suppl. 88, 1 (1986)), so K_EM = 1/(6π² ε0 ħ c³), and as α → 0,
  * W → K_EM ω, Larmor's formula counted in quanta. For gravity, K_GW = (2/3)·G/(5π ħ c⁵): the quadrupole formula
  * counted in quanta, (G/5πħc⁵)∫ω⁵Σ|ΔĨ_ij|², with Σ_ij (n_i n_j − δ_ij/3)² = 2/3 for a difference along one axis;
- * its thermal form with the spin-2 factor (ω² + α²)(ω² + 4α²) is an assumption (the Fourier transform of a
- * csch⁶ correlator), flagged where used.
+ * its thermal form with the spin-2 factor (ω² + α²)(ω² + 4α²) is the Fourier transform of the csch⁶ correlator of a
+ * spin-2 field strength along the accelerated worldline (derived for Rindler; for de Sitter the graviton state is
+ * identified by assumption, flagged where used).
  *
  * Split. W has a double pole at ω = 0, W ≈ W₀/ω² with W₀ = K α P(0)/π: it is the zero-frequency noise, whose share
  * is exactly Γ ∫ f(t)² dt with Γ = π W₀ = K α P(0) (per unit A², s⁻¹): the hold-driven part. The rest,
@@ -43,6 +44,8 @@ export interface ChannelDefinition {
   profileRate(sigma: number, sigmaRate: number): number;
   /** Whether profileRate reads σ (the quadrupole's 2σσ′ does, the dipole's σ′ does not): samplers skip σ otherwise. */
   profileRateReadsProfile: boolean;
+  /** Names the profile in spectrum caches when it differs from the channel's default (a body offset x₀ ≠ 0). */
+  profileKey?: string;
 }
 
 export const electromagneticChannel: ChannelDefinition = {

@@ -154,7 +154,7 @@ function levelMoments(input: Float64Array, samples: number): { fine: [number, nu
  * the cache and reuse its buffer: read it before asking for another (ramp-quanta.ts does, one group at a time).
  */
 export function windowSpectrum(window: MotionWindow, definition: ChannelDefinition, samples: number): WindowSpectrum {
-  const key = window.cacheKey === null ? null : `${window.cacheKey}|${definition.channel}|${samples}`;
+  const key = window.cacheKey === null ? null : `${window.cacheKey}|${definition.profileKey ?? definition.channel}|${samples}`;
   const cached = key === null ? undefined : cache.get(key);
   if (cached) return cached.spectrum;
 

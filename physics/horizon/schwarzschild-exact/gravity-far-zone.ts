@@ -7,7 +7,8 @@
  *    trace-free quadrupole, not their dipole. With the body (mass m) at x_A in one branch and x_B in the other,
  *    relative to the centre of mass of body + lab (mass M_lab), ΔI_ij = μ (x_B x_B − x_A x_A)_ij^STF with
  *    μ = m M_lab/(m + M_lab). "One-sided" splitting (x_A = 0, x_B = d ê) gives μ d² (ê ê)^STF; a split symmetric
- *    about the centre of mass (x = ±d ê/2) gives ΔI = 0: the effect then starts at octupole order (not computed).
+ *    about the centre of mass (x = ±d ê/2) gives ΔI = 0 (with the body offset x₀ from it, 2μx₀d: the engine's
+ *    estimators take x₀ through physics/estimators/channel-source.ts and call this module per unit quadrupole).
  * 2. Tidal field at the hole, Newtonian (leading order in GM/(c² b)), of a quadrupole at distance b along n̂:
  *      ΔE_ab = −(G/2) ΔI_cd ∂_a∂_b∂_c∂_d (1/R)
  *            = −(G/(2b⁵)) [105 n_a n_b I_nn − 15 δ_ab I_nn − 30 (n_a (I n)_b + n_b (I n)_a) + 6 I_ab].
@@ -27,7 +28,9 @@
  *
  * Validity: b ≫ GM/c² (relative corrections O(GM/(c² b)) are not computed), d ≪ b, slow variation. An exact
  * near-zone result (the gravitational counterpart of the Copson–Linet field) is out of reach here: the result always
- * carries the flag "far-zone-only", and "lab-not-in-far-zone" when b < 100 GM/c².
+ * carries the flag "far-zone-only", and "lab-not-in-far-zone" (a caution that states the size GM/(c²b) of the
+ * neglected corrections) once GM/(c²b) exceeds GRAVITY_FAR_ZONE_CORRECTION_CAUTION. The rate itself is the same
+ * formula at every radius: no other value is ever swapped in, so it is continuous in b.
  */
 import { G, c, hbar } from "../../constants";
 import { lapseFromHeight, heightOverMassLength, massLengthMetres } from "./geometrized-units";
@@ -36,8 +39,16 @@ import type { MemoryAxis } from "./multipoles";
 export type Vector3 = readonly [number, number, number];
 export type Matrix3 = readonly [Vector3, Vector3, Vector3];
 
-/** Below this b/M the far-zone formula is flagged as outside its domain. */
-export const GRAVITY_FAR_ZONE_MIN_B_OVER_M = 100;
+/**
+ * Above this size of the neglected relative corrections, GM/(c²b), the far-zone formula carries a caution
+ * (1 %: b < 100 GM/c²). Common practice for "≪", as in physics/flags.ts.
+ */
+export const GRAVITY_FAR_ZONE_CORRECTION_CAUTION = 0.01;
+
+/** GM/(c²b): the relative size of the corrections the leading-order (far-zone) rate leaves out. */
+export function farZoneCorrectionSize(massKg: number, labArealRadiusMetres: number): number {
+  return massLengthMetres(massKg) / labArealRadiusMetres;
+}
 
 export interface GravityFarZoneInput {
   massKg: number;
@@ -123,11 +134,12 @@ export function schwarzschildGravityFarZoneRate(input: GravityFarZoneInput): Gra
       message: "Leading order in GM/(c² b): no exact near-zone result for the gravitational case is computed.",
     },
   ];
-  if (bOverM < GRAVITY_FAR_ZONE_MIN_B_OVER_M) {
+  const correction = 1 / bOverM;
+  if (correction > GRAVITY_FAR_ZONE_CORRECTION_CAUTION) {
     flags.push({
       code: "lab-not-in-far-zone",
       severity: "caution",
-      message: `b = ${bOverM.toPrecision(3)} GM/c² is not ≫ GM/c²; the far-zone formula may be off by O(GM/(c² b)) or more.`,
+      message: `b = ${bOverM.toPrecision(3)} GM/c²: the far-zone formula leaves out relative corrections of order GM/(c² b) = ${correction.toPrecision(2)}.`,
     });
   }
   if (input.splitting === "symmetric") {

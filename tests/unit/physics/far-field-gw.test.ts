@@ -43,17 +43,19 @@ describe("far-field gravitational count (quadrupole formula in quanta)", () => {
     expect(result.gravitational.totalQuanta.value).toBe(0);
     expect(result.gravitational.totalQuanta.log10).toBeNull();
     expect(result.gravitational.exactZeroReason).toMatch(/symmetric split/);
-    expect(result.flags.find((f) => f.code === "symmetric-split-quadrupole")?.status).toBe("note");
+    // x₀ = 0 is an idealisation, and the caution says so (issue 17, item 3)
+    expect(result.flags.find((f) => f.code === "symmetric-split-quadrupole")).toMatchObject({ status: "caution", message: expect.stringMatching(/x₀ = 0.*idealisation/) });
   });
 
-  it("scales as m² d⁴ for one branch staying, and includes the lab's recoil as m(1 + m/M)", () => {
+  it("scales as m² d⁴ for one branch staying, and includes the lab's recoil as m M/(m + M)", () => {
     const base = withSeparation(scenario(), { split: "one-branch-stays" });
     const count = (doc: typeof base) => valueOf(computeScenario(doc).gravitational.totalQuanta);
     const n0 = count(base);
     expect(count(withSeparation(base, { distanceMetres: 2 * base.separation.distanceMetres })) / n0).toBeCloseTo(16, 6);
     expect(count(withSource(base, { massKg: 3 * base.source.massKg })) / n0).toBeCloseTo(9, 6);
-    // Reduced-mass quadrupole μr² with r = x(1 + m/M): m_eff = m(1 + m/M); M = m doubles m_eff, ×4 in N.
-    expect(count(withSource(base, { labMassKg: base.source.massKg })) / n0).toBeCloseTo(4, 6);
+    // Two-body quadrupole about the common centre of mass, μx² with x measured by the lab and μ = mM/(m + M)
+    // (Landau & Lifshitz, Mechanics §13, the reduced mass): M = m halves m_eff, ×1/4 in N.
+    expect(count(withSource(base, { labMassKg: base.source.massKg })) / n0).toBeCloseTo(0.25, 6);
   });
 
   it("falls as the inverse fourth power of the ramp time for minimum-jerk ramps (quadrupole: ω⁵ weight)", () => {

@@ -79,13 +79,14 @@ describe("Schwarzschild horizon estimate (arXiv:2205.06279) and its near-horizon
     expect(alone.flags.find((f) => f.code === "schwarzschild-regime")?.status).toBe("caution");
   });
 
-  it("adds the ramps' quanta to null infinity and the hold's quanta into the horizon", () => {
+  it("adds the ramps' quanta and the hold's quanta into the horizon (the ramps' count is no far-field count: tests/unit/physics/schwarzschild-ramps.test.ts)", () => {
     const doc = hovering(100 * rs);
-    const em = computeScenario(doc).electromagnetic;
-    expect(valueOf(em.totalQuanta) / (valueOf(em.farFieldQuanta) + valueOf(em.horizonQuanta))).toBeCloseTo(1, 12);
-    const flat = computeScenario({ ...doc, background: { kind: "minkowski" }, lab: { placement: "inertial" } }).electromagnetic;
-    expect(valueOf(em.farFieldQuanta) / valueOf(flat.totalQuanta)).toBeCloseTo(1, 12);
-    expect(computeScenario(doc).flags.find((f) => f.code === "far-field-flat-approximation")?.status).toBe("note");
+    const result = computeScenario(doc);
+    const em = result.electromagnetic;
+    expect(valueOf(em.totalQuanta) / (valueOf(em.rampDrivenQuanta) + valueOf(em.horizonQuanta))).toBeCloseTo(1, 12);
+    expect(em.horizonQuanta).toEqual(em.holdDrivenQuanta);
+    expect(em.farFieldQuanta).toBeNull();
+    expect(result.flags.find((f) => f.code === "schwarzschild-ramp-model")?.status).not.toBe("not-applicable");
   });
 
   it("reports counts beyond the range of a double by their log10 only, and says so", () => {

@@ -120,29 +120,36 @@ describe("the Schwarzschild electromagnetic hold rate of computeScenario", () =>
 describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
   const oneSided = (bOverM: number, axis: ScenarioDocument["separation"]["axis"]) => withSeparation(hovering(bOverM, axis), { split: "one-branch-stays" });
 
-  it("is the far-zone module's rate for the channel's quadrupole m_eff d² beyond 100 GM/c², with the estimate beside it", () => {
+  it("is the far-zone module's rate for the channel's quadrupole m_eff d², with the estimate beside it", () => {
     for (const axis of ["radial", "tangential"] as const) {
       const doc = withSource(oneSided(1e3, axis), { labMassKg: 1e-13 });
       const gw = computeScenario(doc).gravitational;
-      const mEff = doc.source.massKg * (1 + doc.source.massKg / doc.source.labMassKg!);
+      const mEff = (doc.source.massKg * doc.source.labMassKg!) / (doc.source.massKg + doc.source.labMassKg!);
       const module = schwarzschildGravityFarZoneRate({ massKg: M, labArealRadiusMetres: 1e3 * m, bodyMassKg: mEff, separationMetres: doc.separation.distanceMetres, axis });
       expect(valueOf(gw.holdRate) / module.ratePerLabSecond, axis).toBeCloseTo(1, 12);
       expect(gw.regime).toBe("far-zone");
       expect(gw.holdRate.sourceKey).toBe("schwarzschild-exact-gw-far-zone");
       expect(gw.comparison!.estimateRegime).toBe("far");
       expect(valueOf(gw.comparison!.ratioExactToEstimate)).toBeCloseTo(valueOf(gw.holdRate) / valueOf(gw.comparison!.estimateHoldRate), 12);
-      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/near-zone gravitational rate is not computed/) });
+      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/relative corrections of order GM\/\(c²b\) = 0.0010/) });
     }
   });
 
-  it("inside 100 GM/c² reports the published estimate as the rate, without a comparison, and flags it", () => {
-    const doc = oneSided(20, "radial");
-    const result = computeScenario(doc);
-    expect(result.gravitational.comparison).toBeNull();
-    expect(result.gravitational.regime).toBe("far");
-    expect(result.gravitational.holdRate.sourceKey).toBe("schwarzschild-far-gw");
-    expect(flag(result, "schwarzschild-gravity-model")?.status).toBe("caution");
+  it("keeps the computed far-zone rate inside 100 GM/c² (no estimate swapped in), with the estimate beside it and the size of its corrections", () => {
+    // Issue 17, item 1: at b = 99 GM/c² the rate once fell 6× below its value at 100 GM/c². The b⁻¹⁰ law
+    // (gravity-far-zone.ts; the published scaling of arXiv:2205.06279) gives (100/99)¹⁰ ≈ 1.105 between them, times
+    // the lapse ratio √((1 − 2/100)/(1 − 2/99)) ≈ 1.0001.
+    const at = (bOverM: number) => computeScenario(oneSided(bOverM, "radial"));
+    const ratio = valueOf(at(99).gravitational.holdRate) / valueOf(at(100).gravitational.holdRate);
+    expect(ratio / ((100 / 99) ** 10 * Math.sqrt((1 - 2 / 100) / (1 - 2 / 99)))).toBeCloseTo(1, 9);
+    const result = at(20);
+    expect(result.gravitational.regime).toBe("far-zone");
+    expect(result.gravitational.comparison!.estimateRegime).toBe("far");
+    expect(flag(result, "schwarzschild-gravity-model")).toMatchObject({ status: "caution", message: expect.stringMatching(/= 0.050/) });
+    expect(flag(result, "schwarzschild-gravity-model")!.measure!).toBeCloseTo(0.05, 9);
+    expect(flag(at(5), "schwarzschild-gravity-model")).toMatchObject({ status: "invalid", message: expect.stringMatching(/order one/) });
   });
+
 });
 
 describe("validity flags of the Schwarzschild rate", () => {

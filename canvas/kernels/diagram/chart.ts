@@ -64,7 +64,11 @@ export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
   const minkowskiScale = c * (duration > 0 ? ladderStepAtLeast(duration) : 1);
   let background: Background;
   try {
-    background = makeBackground(document.background, document.lab, { minkowskiDiagramScaleMetres: minkowskiScale });
+    background = makeBackground(document.background, document.lab, {
+      minkowskiDiagramScaleMetres: minkowskiScale,
+      // The lab's worldline through the middle of the exterior, whatever its radius (schwarzschild.ts).
+      schwarzschildDiagramFrame: "lab-centred",
+    });
   } catch (error) {
     if (error instanceof BackgroundInputError) return { ok: false, issue: { path: error.path, message: error.message } };
     throw error;
@@ -72,9 +76,10 @@ export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
   const scale = background.horizon ? c / background.horizon.surfaceGravityPerSecond : minkowskiScale;
   const labTortoiseMetres = background.tortoiseMetres(background.labRadiusMetres);
   const reach = REACH * scale;
-  const lowest = background.kind === "minkowski" || background.kind === "de-sitter" ? 0 : Math.min(-reach, labTortoiseMetres - reach);
   // The arctan squeeze of Minkowski converges slowly (as 1/x), so its ranges reach further.
   const stretch = background.kind === "minkowski" ? 40 : 1;
+  // The de Sitter chart stops at the centre r = 0; the Minkowski one is the whole line through the lab (x of either sign).
+  const lowest = background.kind === "de-sitter" ? 0 : background.kind === "minkowski" ? -reach * stretch : Math.min(-reach, labTortoiseMetres - reach);
   const tortoiseRange: [number, number] = [
     representableEnd(background, labTortoiseMetres, lowest),
     representableEnd(background, labTortoiseMetres, Math.max(reach, labTortoiseMetres + reach) * stretch),

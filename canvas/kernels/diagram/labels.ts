@@ -6,7 +6,7 @@ export function compactQuantity(valueSI: number, dimension: QuantityDimension): 
   return formatQuantity(valueSI, dimension).replace(/^(-?\d+)\.0+(?=\D|$)/, "$1").replace(/^(-?\d+\.\d*?)0+(?=\D|$)/, "$1");
 }
 
-export type RadiusLabelStyle = "radius" | "distance-from-horizon" | "above-horizon" | "below-horizon";
+export type RadiusLabelStyle = "radius" | "position" | "distance-from-horizon" | "above-horizon" | "below-horizon";
 
 /**
  * The label of a curve of constant radius. Near a horizon every radius prints alike ("29.5 km"), so there the label
@@ -16,6 +16,8 @@ export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRad
   switch (style) {
     case "radius":
       return `r = ${compactQuantity(rMetres, "length")}`;
+    case "position":
+      return `x = ${compactQuantity(rMetres, "length")}`;
     case "distance-from-horizon":
       return `ξ = ${compactQuantity(rMetres, "length")}`;
     case "above-horizon":
@@ -25,8 +27,26 @@ export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRad
   }
 }
 
-export function timeLabel(tSeconds: number): string {
-  return `t = ${tSeconds === 0 ? "0" : compactQuantity(tSeconds, "time")}`;
+/**
+ * The label of the lab's worldline: its radius in the unit the background makes natural — km and r/rₛ near a black
+ * hole, the horizon radius c/H in de Sitter, c²/a (the lab's distance from its horizon) for the Rindler wedge.
+ */
+export function labRadiusLabel(kind: "minkowski" | "schwarzschild" | "rindler" | "de-sitter", rMetres: number, horizonRadiusMetres: number | null): string {
+  switch (kind) {
+    case "minkowski":
+      return "lab, x = 0";
+    case "schwarzschild":
+      return `lab, r = ${compactQuantity(rMetres, "length")} = ${compactNumber(rMetres / (horizonRadiusMetres ?? rMetres), 3)} rₛ`;
+    case "de-sitter":
+      return rMetres === 0 ? "lab, r = 0" : `lab, r = ${compactNumber(rMetres / (horizonRadiusMetres ?? rMetres), 3)} c/H`;
+    case "rindler":
+      return `lab, ξ = c²/a = ${compactQuantity(rMetres, "length")}`;
+  }
+}
+
+/** A protocol event's label: the lab's proper time from the start of the separation, as the Lab view counts it. */
+export function labTimeLabel(tauSeconds: number): string {
+  return `τ = ${tauSeconds === 0 ? "0" : compactQuantity(tauSeconds, "time")}`;
 }
 
 const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { lightConeAt } from "@/canvas/kernels/diagram/light-cone";
 import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
 import { clipToConvex } from "@/canvas/kernels/diagram/geometry";
-import { layoutLabels, type LabelCandidate } from "@/canvas/kernels/diagram/decorations";
+import { layoutLabels, type LabelCandidate } from "@/canvas/kernels/diagram/label-layout";
 import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { schwarzschildDocument } from "./harness";
 

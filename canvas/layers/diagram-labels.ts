@@ -124,14 +124,23 @@ export function branchPixels(protocol: ProtocolOnDiagram, viewport: DiagramViewp
   return { a: protocol.branches.map((s) => toPx(viewport, s.pointA)), b: protocol.branches.map((s) => toPx(viewport, s.pointB)) };
 }
 
-/** Labels of the protocol's time slices: along each slice, just above it or just below, starting near the lab. */
+/**
+ * Labels of the protocol's time slices: first just beside the branches where the slice crosses the lab's worldline
+ * (right, then left), then along the slice, just above it or just below.
+ */
 export function sliceLabelCandidates(protocol: ProtocolOnDiagram, viewport: DiagramViewport): LabelCandidate[] {
+  const beside = protocol.corridor * viewport.scale + LINE_CLEARANCE_PX + 3;
   return protocol.slices.map((slice, i) => {
     const points = slice.points.map((p) => toPx(viewport, p));
-    const spots = pick(points, [0.5, 0.35, 0.65, 0.2, 0.8, 0.1, 0.9]).flatMap((p): LabelSpot[] => [
+    const mark = toPx(viewport, slice.labPoint);
+    const nearLab: LabelSpot[] = [
+      { x: mark.x + beside, y: mark.y, align: "left", verticalAlign: "middle", rotation: 0 },
+      { x: mark.x - beside, y: mark.y, align: "right", verticalAlign: "middle", rotation: 0 },
+    ];
+    const spots = [...nearLab, ...pick(points, [0.5, 0.35, 0.65, 0.2, 0.8, 0.1, 0.9]).flatMap((p): LabelSpot[] => [
       { x: p.x + 3, y: p.y - 2, align: "left", verticalAlign: "bottom", rotation: 0 },
       { x: p.x + 3, y: p.y + 2, align: "left", verticalAlign: "top", rotation: 0 },
-    ]);
+    ])];
     return withSpots({ id: `slice-${i}`, text: slice.label, fontSize: 10, priority: LABEL_PRIORITY.timeSlice, tone: "soft" }, spots);
   });
 }

@@ -52,16 +52,24 @@ function representableEnd(background: Background, labTortoiseMetres: number, end
   return labTortoiseMetres;
 }
 
+/**
+ * The Minkowski diagram's length L over c: a quarter of the protocol's duration rounded up to a 1–2–5 value, so the
+ * protocol, centred on the middle, spans about half the lab's worldline (ct/L ≈ ±1 at its ends). Round, so that the
+ * diagram (and its grid) only rescales when the protocol's length changes a lot.
+ */
+export function minkowskiScaleSeconds(durationSeconds: number): number {
+  return durationSeconds > 0 ? ladderStepAtLeast(durationSeconds / 4) : 1;
+}
+
 export type ChartOutcome = { ok: true; chart: DiagramChart } | { ok: false; issue: SchemaIssue };
 
 /**
- * The chart of `document`. Minkowski has no scale of its own: its diagram length L is set to c times the
- * protocol's duration rounded up to a 1–2–5 value, so the protocol spans a readable part of the diagram.
+ * The chart of `document`. Minkowski has no scale of its own: its diagram length L is set from the protocol's
+ * duration (minkowskiScaleSeconds), so the protocol spans a readable part of the diagram.
  */
 export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
   const duration = protocolDurationSeconds(document);
-  // A round duration, so that the diagram (and its grid) only rescales when the protocol's length changes a lot.
-  const minkowskiScale = c * (duration > 0 ? ladderStepAtLeast(duration) : 1);
+  const minkowskiScale = c * minkowskiScaleSeconds(duration);
   let background: Background;
   try {
     background = makeBackground(document.background, document.lab, {

@@ -2,8 +2,8 @@
 import { formatQuantity, type QuantityDimension } from "@/physics/units";
 
 /** formatQuantity with three digits, trailing zeros of the mantissa dropped ("4.00 ms" → "4 ms", "2.50 µm" → "2.5 µm"). */
-export function compactQuantity(valueSI: number, dimension: QuantityDimension): string {
-  return formatQuantity(valueSI, dimension).replace(/^(-?\d+)\.0+(?=\D|$)/, "$1").replace(/^(-?\d+\.\d*?)0+(?=\D|$)/, "$1");
+export function compactQuantity(valueSI: number, dimension: QuantityDimension, digits?: number): string {
+  return formatQuantity(valueSI, dimension, digits === undefined ? {} : { digits }).replace(/^(-?\d+)\.0+(?=\D|$)/, "$1").replace(/^(-?\d+\.\d*?)0+(?=\D|$)/, "$1");
 }
 
 export type RadiusLabelStyle = "radius" | "position" | "distance-from-horizon" | "above-horizon" | "below-horizon";
@@ -44,9 +44,17 @@ export function labRadiusLabel(kind: "minkowski" | "schwarzschild" | "rindler" |
   }
 }
 
-/** A protocol event's label: the lab's proper time from the start of the separation, as the Lab view counts it. */
-export function labTimeLabel(tauSeconds: number): string {
-  return `τ = ${tauSeconds === 0 ? "0" : compactQuantity(tauSeconds, "time")}`;
+/**
+ * Labels of the protocol's events: the lab's proper time from the start of the separation, as the Lab view counts
+ * it, with as many digits as it takes to tell neighbours apart (10 s and 10.01 s, not "10 s" twice).
+ */
+export function labTimeLabels(tauSeconds: number[]): string[] {
+  let labels: string[] = [];
+  for (let digits = 3; digits <= 8; digits++) {
+    labels = tauSeconds.map((tau) => `τ = ${tau === 0 ? "0" : compactQuantity(tau, "time", digits)}`);
+    if (new Set(labels).size === labels.length) break;
+  }
+  return labels;
 }
 
 const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";

@@ -25,7 +25,7 @@ import { c } from "@/physics/constants";
 import type { DiagramChart } from "./chart";
 import { bisect, clipToConvex } from "./geometry";
 import { timeCurve } from "./grid-lines";
-import { labTimeLabel } from "./labels";
+import { labTimeLabels } from "./labels";
 import { boundsOf, type DiagramBounds } from "./viewport";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 
@@ -36,9 +36,49 @@ import type { ScenarioDocument } from "@/physics/scenario/schema";
 const TRUE_SCALE_RANGE: [number, number] = [0.2, 0.85];
 const DRAWN_REACH = 0.6;
 
-export type TimeScale =
+/** Share of the protocol's drawn length each stretch between two of its events gets at least. */
+const MIN_PIECE_SHARE = 0.2;
+
+/**
+ * A piecewise-linear schedule of lab time, as the Lab view's axis has: each stretch between two of the protocol's
+ * events (ramps, hold) is drawn at least MIN_PIECE_SHARE of the whole, so a 10 ms ramp beside a 1000 s hold is not
+ * a point on the worldline (and the branch has the room to move apart while staying timelike). The branches are then
+ * the worldlines of a protocol with those drawn durations; the slices' labels give the true times.
+ */
+export interface TimeWarp {
+  /** Lab times of the events, seconds from the start of the separation, increasing, from 0 to the total. */
+  events: number[];
+  /** Where each is drawn, on the same scale. */
+  drawnEvents: number[];
+}
+
+export type TimeScale = (
   | { kind: "true" }
-  | { kind: "rescaled"; protocolEfolds: number; drawnEfolds: number; efoldSeconds: number };
+  | { kind: "rescaled"; protocolEfolds: number; drawnEfolds: number; efoldSeconds: number }
+) & { warp?: TimeWarp };
+
+function timeWarp(events: number[], totalSeconds: number): TimeWarp | undefined {
+  const pieces = events.slice(1).map((e, i) => (e - events[i]) / totalSeconds);
+  if (pieces.every((share) => share >= MIN_PIECE_SHARE)) return undefined;
+  const widened = pieces.map((share) => Math.max(share, MIN_PIECE_SHARE));
+  const sum = widened.reduce((a, b) => a + b, 0);
+  const drawnEvents = [0];
+  for (const share of widened) drawnEvents.push(drawnEvents[drawnEvents.length - 1] + (share / sum) * totalSeconds);
+  drawnEvents[drawnEvents.length - 1] = totalSeconds;
+  return { events, drawnEvents };
+}
+
+/** Lab time as drawn: through the warp inside the protocol, unchanged before and after it. */
+function warpedTime(warp: TimeWarp | undefined, tauSeconds: number): number {
+  if (!warp) return tauSeconds;
+  const { events, drawnEvents } = warp;
+  const last = events.length - 1;
+  if (tauSeconds <= 0 || tauSeconds >= events[last]) return tauSeconds;
+  let i = 0;
+  while (i < last - 1 && tauSeconds > events[i + 1]) i++;
+  const s = (tauSeconds - events[i]) / (events[i + 1] - events[i]);
+  return drawnEvents[i] + s * (drawnEvents[i + 1] - drawnEvents[i]);
+}
 
 /** Drawn offset of the branches at full separation, as a fraction of the diagram's larger span (before the cap by c). */
 const DRAWN_OFFSET_SHARE = 0.016;
@@ -69,6 +109,8 @@ export interface BranchSample {
 export interface EventSlice {
   tauSeconds: number;
   label: string;
+  /** Where it crosses the lab's worldline. */
+  labPoint: DiagramPoint;
   points: DiagramPoint[];
 }
 
@@ -93,7 +135,7 @@ export interface ProtocolOnDiagram {
 
 /** Drawn Killing time of lab proper time τ (seconds from the start of the separation): the protocol's middle is drawn at 0. */
 export function drawnTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, tauSeconds: number): number {
-  const killing = (tauSeconds - totalSeconds / 2) / chart.background.labRedshiftFactor;
+  const killing = (warpedTime(scale.warp, tauSeconds) - totalSeconds / 2) / chart.background.labRedshiftFactor;
   return scale.kind === "true" ? killing : killing * (scale.drawnEfolds / scale.protocolEfolds);
 }
 
@@ -164,15 +206,19 @@ function exaggeratedOffset(chart: DiagramChart, times: number[], fractions: { a:
     if (step > 0) offset = Math.min(offset, (LIGHT_SPEED_MARGIN * c * (times[i] - times[i - 1])) / step);
   }
   const corridor = branchCorridor(bounds);
-  let farthest = 0;
-  times.forEach((t, i) => {
-    const lab = map.toDiagramAtTortoise(t, chart.labTortoiseMetres);
-    for (const f of [fractions[i].a, fractions[i].b]) {
-      const p = map.toDiagramAtTortoise(t, branchTortoise(chart, offset * f));
-      farthest = Math.max(farthest, Math.hypot(p.T - lab.T, p.X - lab.X));
-    }
-  });
-  if (farthest > corridor) offset *= corridor / farthest;
+  const farthestAt = (trial: number) => {
+    let farthest = 0;
+    times.forEach((t, i) => {
+      const lab = map.toDiagramAtTortoise(t, chart.labTortoiseMetres);
+      for (const f of [fractions[i].a, fractions[i].b]) {
+        const p = map.toDiagramAtTortoise(t, branchTortoise(chart, trial * f));
+        farthest = Math.max(farthest, Math.hypot(p.T - lab.T, p.X - lab.X));
+      }
+    });
+    return farthest;
+  };
+  // The map is not linear in the offset: scale down, with a little to spare, until the branches keep to the corridor.
+  for (let i = 0, farthest = farthestAt(offset); i < 8 && farthest > corridor; i++, farthest = farthestAt(offset)) offset *= (0.95 * corridor) / farthest;
   return { offset, corridor };
 }
 
@@ -180,7 +226,9 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
   const history = profileHistory(document);
   if (!history || history.windows.length === 0) return null;
   const total = history.totalDurationSeconds;
-  const timeScale = timeScaleOf(chart, total);
+  const windows = history.windows;
+  const events = [...new Set([0, ...windows.flatMap((w) => [w.startSeconds, w.startSeconds + w.durationSeconds]), total])].sort((x, y) => x - y);
+  const timeScale: TimeScale = { ...timeScaleOf(chart, total), warp: timeWarp(events, total) };
   const r = chart.background.labRadiusMetres;
   const map = chart.background.conformal;
   const drawn = (tau: number) => drawnTime(chart, timeScale, total, tau);
@@ -212,7 +260,6 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
     };
   });
 
-  const windows = history.windows;
   const strips: RadiationStrip[] = windows.map((w) => ({
     kind: "far-field" as const,
     polygon: strip(at, w.startSeconds, w.startSeconds + w.durationSeconds, "outgoing", outline),
@@ -231,13 +278,14 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
       }
     });
   }
-  const events = [...new Set(windows.flatMap((w) => [w.startSeconds, w.startSeconds + w.durationSeconds]))];
+  const marked = [...new Set(windows.flatMap((w) => [w.startSeconds, w.startSeconds + w.durationSeconds]))];
+  const labels = labTimeLabels(marked);
   return {
     timeScale,
     corridor,
-    slices: events.map((tau) => ({ tauSeconds: tau, label: labTimeLabel(tau), points: timeCurve(chart, drawn(tau), 48) })),
+    slices: marked.map((tau, i) => ({ tauSeconds: tau, label: labels[i], labPoint: at(tau), points: timeCurve(chart, drawn(tau), 48) })),
     branches,
-    marks: events.map(at),
+    marks: marked.map(at),
     strips: strips.filter((s) => s.polygon.length >= 3),
   };
 }

@@ -89,9 +89,9 @@ describe.each(Object.keys(backgrounds))("the branches on the diagram of %s", (na
         const drawn = [...scene.labWorldline, ...scene.protocol!.branches.flatMap((s) => [s.point, s.pointA, s.pointB])];
         for (const p of drawn) expect(insideBy(scene.labRegion, p)).toBeGreaterThanOrEqual(-ON_EDGE);
       }),
-      { numRuns: 60 },
+      { numRuns: 100 },
     );
-  });
+  }, 120_000);
 
   it("draws both branches timelike: between samples T rises by more than |X| moves (steeper than 45°)", () => {
     fc.assert(
@@ -107,9 +107,9 @@ describe.each(Object.keys(backgrounds))("the branches on the diagram of %s", (na
           }
         }
       }),
-      { numRuns: 60 },
+      { numRuns: 100 },
     );
-  });
+  }, 120_000);
 
   it("meets the lab's worldline wherever the separation is zero, and leaves it while apart", () => {
     fc.assert(
@@ -125,9 +125,9 @@ describe.each(Object.keys(backgrounds))("the branches on the diagram of %s", (na
         expect(farthest).toBeGreaterThan(0);
         expect(farthest).toBeLessThanOrEqual(scene.protocol!.corridor * (1 + 1e-9));
       }),
-      { numRuns: 40 },
+      { numRuns: 60 },
     );
-  });
+  }, 120_000);
 });
 
 describe("framing", () => {
@@ -140,9 +140,9 @@ describe("framing", () => {
         expect(middle.T).toBeCloseTo(0, 12);
         expect(middle.X).toBeCloseTo(0.5, 9);
       }),
-      { numRuns: 40 },
+      { numRuns: 60 },
     );
-  });
+  }, 120_000);
 
   it("draws the time slices through the protocol's own events, labelled in lab time from the start of the separation", () => {
     const document = withProtocol(base, { separation: 1e-3, hold: 5e-3, recombination: 2e-3, shape: "cosine", split: "symmetric", axis: "radial" });

@@ -1,5 +1,5 @@
 /**
- * The one label layout of the Diagram and the Lab view. Each label offers candidate spots (its preferred one first);
+ * The one label layout of the Diagram and the Lab view (its time axis: kernels/lab-view/axis-ticks.ts). Each label offers candidate spots (its preferred one first);
  * in priority order, each takes the first spot where its box stays on the stage, clear of every label already
  * placed and of every obstacle (worldlines, horizons: polylines in stage pixels, each with a clearance). A label
  * with no such spot is dropped, never drawn over another label or a worldline.
@@ -27,6 +27,8 @@ export interface LabelCandidate extends LabelSpot {
   /** Higher first: boundary labels, then the lab's radius, then grid labels, then the protocol's time slices. */
   priority: number;
   tone: "ink" | "soft" | "faint";
+  /** Average advance of one character of its face, in ems (default: the figure's serif and mono faces). */
+  characterEm?: number;
   /** Further spots to try, in order, when the preferred one (the candidate's own) is taken. */
   alternatives?: LabelSpot[];
 }
@@ -55,8 +57,8 @@ export const LABEL_PRIORITY = { labBoundary: 100, contextBoundary: 90, labRadius
 const EM_PER_CHARACTER = 0.56;
 
 /** The text's box on screen; widths estimated from the font size. */
-export function labelBox(label: LabelSpot & { text: string; fontSize: number }): Box {
-  const along = [...label.text].length * label.fontSize * EM_PER_CHARACTER;
+export function labelBox(label: LabelSpot & { text: string; fontSize: number; characterEm?: number }): Box {
+  const along = [...label.text].length * label.fontSize * (label.characterEm ?? EM_PER_CHARACTER);
   const across = label.fontSize * 1.2;
   const [w, h] = label.rotation === 0 ? [along, across] : [across, along];
   const alignShift = label.align === "left" ? 0 : label.align === "center" ? 0.5 : 1;
@@ -144,7 +146,7 @@ export function layoutLabels(candidates: LabelCandidate[], stage: { width: numbe
   for (const { c: label } of ordered) {
     if (label.text === "") continue;
     for (const spot of [label, ...(label.alternatives ?? [])]) {
-      const box = labelBox({ ...spot, text: label.text, fontSize: label.fontSize });
+      const box = labelBox({ ...spot, text: label.text, fontSize: label.fontSize, characterEm: label.characterEm });
       const onStage = box.left >= 0 && box.top >= 0 && box.left + box.width <= stage.width && box.top + box.height <= stage.height;
       if (!onStage || kept.some((p) => boxesOverlap(p.box, box, gap)) || obstacles.some((o) => blockedBy(o, box))) continue;
       const { alternatives: _unused, ...rest } = label;

@@ -1,5 +1,6 @@
 import "server-only";
 import { type Kysely, sql } from "kysely";
+import { differsOnlyInDisplay } from "../physics/scenario/compare";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, assertProjectAccess } from "./access";
 import { AppError, invalid, notFound } from "./errors";
@@ -237,7 +238,7 @@ export async function updateScenario(
       );
     }
     return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document) };
-  });
+  }, { amendDisplay: true });
 }
 
 /**
@@ -250,19 +251,28 @@ export async function saveNextVersion(
   projectId: string,
   scenarioId: string,
   next: (current: { version: number; title: string; document: unknown }) => { title: string; document: ScenarioDocument },
+  { amendDisplay = false }: { amendDisplay?: boolean } = {},
 ): Promise<ScenarioDto> {
   assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
   if (!isUuid(scenarioId)) throw notFound("scenario");
   await db.transaction().execute(async (trx) => {
     const current = await trx
       .selectFrom("scenarios")
-      .select(["version", "title", "document"])
+      .select(["version", "title", "document", "updatedBy"])
       .where("projectId", "=", projectId)
       .where("id", "=", scenarioId)
       .forUpdate()
       .executeTakeFirst();
     if (!current) throw notFound("scenario");
     const { title, document } = next(current);
+    // Changing only the figures' look amends the caller's own latest version: toggling the grid or the dark
+    // theme changes no number, so it starts no new version.
+    if (amendDisplay && current.updatedBy === actor.userId && title === current.title && differsOnlyInDisplay(current.document, document)) {
+      const stored = JSON.stringify(document);
+      await trx.updateTable("scenarios").set({ document: stored, updatedAt: new Date() }).where("id", "=", scenarioId).execute();
+      await trx.updateTable("scenarioRevisions").set({ document: stored }).where("scenarioId", "=", scenarioId).where("version", "=", current.version).execute();
+      return;
+    }
     const version = current.version + 1;
     await trx
       .updateTable("scenarios")

@@ -3,17 +3,16 @@
  * exports write, from one DiagramScene and one viewport, so that an exported figure is the figure on screen.
  * Pure: no Konva, no DOM.
  */
-import { hatchTicks, layoutLabels, offsetPolyline, type LabelCandidate, type PlacedLabel } from "../kernels/diagram/decorations";
+import { hatchTicks } from "../kernels/diagram/decorations";
+import { LABEL_PRIORITY, layoutLabels, type LabelCandidate, type PlacedLabel } from "../kernels/diagram/label-layout";
 import { memoizeLast } from "../kernels/memoize";
 import type { DiagramBackdrop, DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
 import { fitDiagramViewport, flatPx, toPx, type DiagramViewport, type Padding } from "../kernels/diagram/viewport";
 import { wavyLine } from "../kernels/diagram/decorations";
-import { diagramLabelCandidates } from "../layers/diagram-labels";
+import { diagramLabelCandidates, diagramLabelObstacles, sliceLabelCandidates, sliceLabelObstacles } from "../layers/diagram-labels";
 import { DASHES, type FigurePalette } from "../theme";
 import { cutAtCursor, type TimeCursor } from "./time-cursor";
 
-/** How far, in pixels, the branches are drawn from the lab's worldline at full separation. */
-export const BRANCH_OFFSET_PX = 7;
 /** Room round the diagram for its labels; de Sitter's square needs more at the sides (time labels, the far pole). */
 const PADDING: Padding = { left: 48, right: 48, top: 48, bottom: 48 };
 const DE_SITTER_PADDING: Padding = { left: 100, right: 64, top: 44, bottom: 44 };
@@ -44,6 +43,8 @@ export type FigureGroupId =
   | "branch-a"
   | "protocol-marks"
   | "time-cursor"
+  /** The protocol's time-slice labels, laid out on every frame (the backdrop's "labels" are laid out once). */
+  | "slice-labels"
   | "labels";
 
 export interface FigureGroup {
@@ -113,9 +114,6 @@ export function labelShape(label: PlacedLabel, fill: string): FigureShape {
   return { kind: "text", text: label.text, x: box.left + box.width / 2, y, anchor, rotation: -90, fontSize: label.fontSize, font: "serif", fill };
 }
 
-/** Label priority from which a label names a boundary (the grid's labels rank below; see diagram-labels.ts). */
-const BOUNDARY_LABEL_PRIORITY = 90;
-
 /**
  * Larger labels: the boundaries' by the whole scale; the grid's, which sit between close lines, by half as much
  * (at full scale they crowd each other out of the layout, and the boundaries are what a far audience must read).
@@ -123,7 +121,7 @@ const BOUNDARY_LABEL_PRIORITY = 90;
 function scaled(candidates: LabelCandidate[], labelScale: number): LabelCandidate[] {
   if (labelScale === 1) return candidates;
   const gridScale = 1 + (labelScale - 1) / 2;
-  return candidates.map((c) => ({ ...c, fontSize: c.fontSize * (c.priority >= BOUNDARY_LABEL_PRIORITY ? labelScale : gridScale) }));
+  return candidates.map((c) => ({ ...c, fontSize: c.fontSize * (c.priority >= LABEL_PRIORITY.contextBoundary ? labelScale : gridScale) }));
 }
 
 /** The groups that depend on the background and the lab only: under and over the protocol's. */
@@ -132,6 +130,9 @@ interface BackdropGroups {
   under: FigureGroup[];
   over: FigureGroup[];
   labels: FigureGroup;
+  /** The labels laid out with the backdrop: the protocol's slice labels keep clear of them. */
+  placed: PlacedLabel[];
+  tone: Record<PlacedLabel["tone"], string>;
 }
 
 function backdropGroups(scene: DiagramBackdrop, width: number, height: number, palette: FigurePalette, labelScale: number, paper: boolean): BackdropGroups {
@@ -139,7 +140,7 @@ function backdropGroups(scene: DiagramBackdrop, width: number, height: number, p
   const viewport = diagramViewport(scene, size, labelScale);
   const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
   const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
-  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size);
+  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size, { obstacles: diagramLabelObstacles(scene, viewport) });
   return {
     viewport,
     under: [
@@ -155,6 +156,8 @@ function backdropGroups(scene: DiagramBackdrop, width: number, height: number, p
       { id: "lab-worldline", shapes: [line(flatPx(viewport, scene.labWorldline), palette.inkSoft, 1.25)] },
     ],
     labels: { id: "labels", shapes: labels.map((l) => labelShape(l, tone[l.tone])) },
+    placed: labels,
+    tone,
   };
 }
 
@@ -199,30 +202,35 @@ export function diagramFigure(scene: DiagramScene, size: { width: number; height
   ];
 
   const samples = protocol?.branches ?? [];
-  if (samples.length >= 2) {
+  let sliceLabels: PlacedLabel[] = [];
+  if (protocol && samples.length >= 2) {
     const points = samples.map((s) => toPx(viewport, s.point));
-    // A lab on the centre line r = 0 has nothing to its left: draw its branches beside the line, not across it.
-    const shift = scene.chart.background.labRadiusMetres === 0 ? BRANCH_OFFSET_PX + 5 : 0;
-    const b = offsetPolyline(points, samples.map((s) => shift + s.b * BRANCH_OFFSET_PX));
-    const a = offsetPolyline(points, samples.map((s) => shift + s.a * BRANCH_OFFSET_PX));
+    const a = flatPx(viewport, samples.map((s) => s.pointA));
+    const b = flatPx(viewport, samples.map((s) => s.pointB));
     groups.push({ id: "branch-b", shapes: [line(b, palette.branchB, 2, DASHES.branchB, true)] });
     groups.push({ id: "branch-a", shapes: [line(a, palette.branchA, 2, DASHES.branchA, true)] });
     groups.push({
       id: "protocol-marks",
-      shapes: (protocol?.marks ?? []).map((m) => {
-        const p = toPx(viewport, m);
-        return line([p.x - 4, p.y, p.x + 4, p.y], palette.inkSoft, 1);
-      }),
+      shapes: [
+        ...protocol.slices.map((slice) => line(flatPx(viewport, slice.points), palette.inkFaint, 0.75, DASHES.context)),
+        ...protocol.marks.map((m) => {
+          const p = toPx(viewport, m);
+          return line([p.x - 4, p.y, p.x + 4, p.y], palette.inkSoft, 1);
+        }),
+      ],
+    });
+    sliceLabels = layoutLabels(scaled(sliceLabelCandidates(protocol, viewport), labelScale), size, {
+      obstacles: sliceLabelObstacles(scene, protocol, viewport),
+      placed: backdrop.placed,
     });
     if (options.cursor) {
       const end = points[points.length - 1];
-      const tip = (offsets: number[]) => offsets.slice(-2);
-      const [ax, ay] = tip(a);
-      const [bx, by] = tip(b);
+      const [ax, ay] = a.slice(-2);
+      const [bx, by] = b.slice(-2);
       groups.push({
         id: "time-cursor",
         shapes: [
-          line([end.x - 9, end.y, end.x + 9 + shift, end.y], palette.ink, 1),
+          line([end.x - 9, end.y, end.x + 9, end.y], palette.ink, 1),
           { kind: "dot", x: ax, y: ay, radius: 2.5, stroke: null, width: 0, fill: palette.branchA },
           { kind: "dot", x: bx, y: by, radius: 2.5, stroke: null, width: 0, fill: palette.branchB },
         ],
@@ -230,6 +238,7 @@ export function diagramFigure(scene: DiagramScene, size: { width: number; height
     }
   }
 
+  groups.push({ id: "slice-labels", shapes: sliceLabels.map((l) => labelShape(l, backdrop.tone[l.tone])) });
   groups.push(backdrop.labels);
   return { width, height, viewport, groups };
 }

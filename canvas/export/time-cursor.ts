@@ -60,7 +60,14 @@ export function cutAtCursor(scene: DiagramScene, cursor: TimeCursor): ProtocolOn
     if (last) {
       // The cursor falls between two samples: end the branches exactly there.
       const s = (c.T - last.point.T) / (sample.point.T - last.point.T);
-      before.push({ point: c, a: last.a + s * (sample.a - last.a), b: last.b + s * (sample.b - last.b) });
+      const lerp = (p: DiagramPoint, q: DiagramPoint) => ({ T: p.T + s * (q.T - p.T), X: p.X + s * (q.X - p.X) });
+      before.push({
+        point: c,
+        a: last.a + s * (sample.a - last.a),
+        b: last.b + s * (sample.b - last.b),
+        pointA: lerp(last.pointA, sample.pointA),
+        pointB: lerp(last.pointB, sample.pointB),
+      });
     }
     break;
   }
@@ -69,5 +76,11 @@ export function cutAtCursor(scene: DiagramScene, cursor: TimeCursor): ProtocolOn
   const strips = protocol.strips
     .map((s) => ({ kind: s.kind, polygon: clipToHalfPlane(s.polygon, s.kind === "far-field" || horizonGoesOutward(scene) ? outgoing : ingoing) }))
     .filter((s) => s.polygon.length >= 3);
-  return { ...protocol, branches: before, marks: protocol.marks.filter((m) => m.T <= c.T + 1e-12), strips };
+  return {
+    ...protocol,
+    branches: before,
+    marks: protocol.marks.filter((m) => m.T <= c.T + 1e-12),
+    slices: protocol.slices.filter((slice) => slice.tauSeconds <= cursor.tauSeconds),
+    strips,
+  };
 }

@@ -37,7 +37,7 @@ const LAYERS: FigureGroupId[][] = [
   ["background", "regions"],
   ["radiation"],
   ["grid", "boundaries", "lab-worldline"],
-  ["branch-b", "branch-a", "protocol-marks", "time-cursor"],
+  ["branch-b", "branch-a", "protocol-marks", "time-cursor", "slice-labels"],
   ["labels"],
 ];
 
@@ -80,7 +80,8 @@ const FigureLayer = memo(
 
 function pointerReadout(scene: DiagramScene, cone: ReturnType<typeof lightConeAt>): string {
   if (!cone.coordinates) return "outside the lab's static region";
-  const radius = scene.chart.background.kind === "rindler" ? "ξ" : "r";
+  const kind = scene.chart.background.kind;
+  const radius = kind === "rindler" ? "ξ" : kind === "minkowski" ? "x" : "r";
   return `t = ${compactQuantity(cone.coordinates.tSeconds, "time")}   ${radius} = ${compactQuantity(cone.coordinates.rMetres, "length")}`;
 }
 

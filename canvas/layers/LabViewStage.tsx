@@ -12,7 +12,7 @@ import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { compactQuantity } from "../kernels/diagram/labels";
-import { boundaryTicks, offsetTicks, staggerTimeLabels, timeAxisTitleSide, type Tick } from "../kernels/lab-view/axis-ticks";
+import { boundaryTicks, offsetTicks, timeAxisLabels, type Tick } from "../kernels/lab-view/axis-ticks";
 import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/lab-view/handles";
 import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport, type PlotRect } from "../kernels/lab-view/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
@@ -39,9 +39,10 @@ function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separati
 }
 
 const TIME_AXIS_TITLE = "lab proper time";
-/** Estimated advance per character at 11 px: the monospace figures, and the sans title (a little wide, to be safe). */
-const MONO_EM_PX = 6.7;
-const SANS_EM_PX = 5.6;
+/** Estimated advance per character, in ems: the monospace figures, and the sans title (a little wide, to be safe). */
+const MONO_EM = 0.61;
+const SANS_EM = 0.51;
+const AXIS_FONT_PX = 11;
 
 /** A formula or sampled profile, as the physics library samples it (shown, not edited: it has no handles). */
 function profileCurves(viewport: LabViewport, document: Parameters<typeof profilePaths>[0]) {
@@ -161,8 +162,15 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
     : [viewport.pieces[1].fromSeconds, viewport.pieces[viewport.pieces.length - 2].toSeconds].map((t) => ({ px: timeToPx(viewport, t), valueSI: t }));
   const axisWords = `offset along the ${document.separation.axis} axis`;
   const timeTexts = bounds.map((t) => formatQuantity(t.valueSI - origin, "time"));
-  const timeLabels = staggerTimeLabels(bounds.map((t, i) => ({ px: t.px, widthPx: timeTexts[i].length * MONO_EM_PX }))).map((l, i) => ({ ...l, text: timeTexts[i] }));
-  const titleSide = timeAxisTitleSide(timeLabels, { widthPx: TIME_AXIS_TITLE.length * SANS_EM_PX, leftEndPx: plot.left, rightEndPx: plot.left + plot.width });
+  const timeLabels = timeAxisLabels({
+    ticks: bounds.map((t, i) => ({ px: t.px, text: timeTexts[i] })),
+    title: TIME_AXIS_TITLE,
+    plot: { left: plot.left, width: plot.width, bottom },
+    stage: { width, height },
+    fontSize: AXIS_FONT_PX,
+    monoEm: MONO_EM,
+    sansEm: SANS_EM,
+  });
 
   return (
     <Layer>
@@ -184,30 +192,20 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
           <Line points={[x, bottom + 4, x + 4, bottom - 4]} stroke={palette.inkFaint} strokeWidth={1} />
         </Group>
       ))}
-      {timeLabels.map((t, i) => (
+      {timeLabels.map((label) => (
         <Text
-          key={i}
-          x={t.px - 50}
-          y={bottom + 10 + t.row * 13}
-          width={100}
-          align="center"
-          text={t.text}
-          fontSize={11}
-          fontFamily={fonts.mono}
-          fill={palette.inkSoft}
+          key={label.id}
+          x={label.box.left}
+          y={label.box.top + (label.box.height - AXIS_FONT_PX) / 2}
+          width={label.box.width}
+          align={label.align}
+          text={label.text}
+          fontSize={AXIS_FONT_PX}
+          fontFamily={label.id === "time-title" ? fonts.sans : fonts.mono}
+          fill={label.id === "time-title" ? palette.inkFaint : palette.inkSoft}
+          wrap="none"
         />
       ))}
-      <Text
-        x={titleSide === "right" ? plot.left + plot.width - 200 : plot.left}
-        y={bottom + 23}
-        width={200}
-        align={titleSide}
-        text={TIME_AXIS_TITLE}
-        fontSize={11}
-        fontFamily={fonts.sans}
-        fill={palette.inkFaint}
-        wrap="none"
-      />
       <Line points={b} stroke={palette.branchB} strokeWidth={2} dash={DASHES.branchB} lineJoin="round" />
       <Line points={a} stroke={palette.branchA} strokeWidth={2.25} lineJoin="round" />
       {handles.map((h) => (

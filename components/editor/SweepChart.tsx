@@ -1,15 +1,18 @@
 "use client";
 
 /**
- * The Sweep's log–log chart of decoherence against the swept parameter. Drawn again only when the sweep, the
+ * The Sweep's log–log chart of decoherence against the swept parameter, on paper-grade axes: decades labelled with
+ * minor ticks between, one unit per axis named in its title, labels at 13 px, and the hover readout above the
+ * plot rather than over it. One curve, so no legend (the marker and the dot are explained under the chart). Drawn again only when the sweep, the
  * parameter or the read-only state changes: the "now" marker reads the scenario's current value from the store
  * itself, so a drag in the Lab view moves one SVG line, not the whole chart.
  */
-import { memo } from "react";
-import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis, usePlotArea, useXAxisScale } from "recharts";
+import { memo, useMemo, useState } from "react";
+import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis, usePlotArea, useXAxisScale, useYAxisScale } from "recharts";
 import type { SweepParameter } from "@/canvas/compute-client";
 import { useEditor } from "@/canvas/EditorProvider";
-import { compactNumber, compactQuantity } from "@/canvas/kernels/diagram/labels";
+import { axisTickLabels, axisTitle, axisUnit, logTicks, tickLabel } from "@/canvas/kernels/diagram/axis-scale";
+import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { memoizeLast } from "@/canvas/kernels/memoize";
 import { currentSweepValue, labDistanceMetres } from "@/canvas/kernels/sweep-range";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
@@ -55,6 +58,47 @@ function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: n
   );
 }
 
+/** Short unlabelled ticks at the log axes' minor values (2…9 × 10ⁿ), drawn inward from each axis line. */
+function MinorTicks({ x, y }: { x: number[]; y: number[] }) {
+  const xScale = useXAxisScale();
+  const yScale = useYAxisScale();
+  const plot = usePlotArea();
+  if (!xScale || !yScale || !plot) return null;
+  const bottom = plot.y + plot.height;
+  const at = (scale: (v: number) => unknown, v: number) => {
+    const px = scale(v);
+    return typeof px === "number" && Number.isFinite(px) ? px : null;
+  };
+  return (
+    <g data-testid="sweep-minor-ticks" stroke={AXIS_COLOUR} strokeWidth={1}>
+      {x.map((v) => {
+        const px = at(xScale, v);
+        return px === null ? null : <line key={`x${v}`} x1={px} x2={px} y1={bottom} y2={bottom - MINOR_TICK_PX} />;
+      })}
+      {y.map((v) => {
+        const py = at(yScale, v);
+        return py === null ? null : <line key={`y${v}`} x1={plot.x} x2={plot.x + MINOR_TICK_PX} y1={py} y2={py} />;
+      })}
+    </g>
+  );
+}
+
+const AXIS_COLOUR = "#5b6168";
+const MINOR_TICK_PX = 4;
+/** Tick labels at a size that survives a slide or a printed column. */
+const TICK_FONT_PX = 13;
+
+/** One log axis over the positive values given: its ticks, unit and labels (kernels/diagram/axis-scale.ts). */
+function logAxis(values: number[], dimension: "length" | "time" | "number") {
+  const positive = values.filter((v) => v > 0 && Number.isFinite(v));
+  if (positive.length === 0) return null;
+  const [from, to] = [Math.min(...positive), Math.max(...positive)];
+  const ticks = from === to ? { major: [from], minor: [] } : logTicks(from, to);
+  const unit = axisUnit(to, dimension);
+  const labels = new Map(ticks.major.map((v, i) => [v, axisTickLabels(ticks.major, unit)[i]]));
+  return { from, to, ticks, unit, label: (v: number) => labels.get(v) ?? tickLabel(v, unit) };
+}
+
 export const SweepChart = memo(function SweepChart({
   data,
   best,
@@ -71,36 +115,70 @@ export const SweepChart = memo(function SweepChart({
   onPick(x: number): void;
 }) {
   const dimension = dimensionOf(parameter);
+  const [hovered, setHovered] = useState<SweepPoint | null>(null);
+  const xAxis = useMemo(() => logAxis(data.map((p) => p.x), dimension), [data, dimension]);
+  const yAxis = useMemo(() => logAxis(data.map((p) => p.decoherence), "number"), [data]);
+  if (!xAxis || !yAxis) return null;
+  const xTitle = axisTitle(PARAMETER_WORDS[parameter], xAxis.unit);
   return (
-    <ResponsiveContainer width="100%" height="100%">
-      <LineChart
-        data={data}
-        margin={{ top: 10, right: 20, bottom: 24, left: 10 }}
-        onClick={(state) => {
-          const index = Number(state?.activeIndex);
-          if (!readOnly && Number.isInteger(index) && data[index]) onPick(data[index].x);
-        }}
-        style={{ cursor: readOnly ? "default" : "pointer" }}
-      >
-        <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
-        <XAxis
-          dataKey="x"
-          type="number"
-          scale="log"
-          domain={["dataMin", "dataMax"]}
-          tickFormatter={(v: number) => compactQuantity(v, dimension)}
-          tick={{ fontSize: 11 }}
-          label={{ value: PARAMETER_WORDS[parameter], position: "insideBottom", offset: -14, fontSize: 11 }}
-        />
-        <YAxis dataKey="decoherence" type="number" scale="log" domain={["auto", "auto"]} tickFormatter={(v: number) => compactNumber(v)} tick={{ fontSize: 11 }} width={72} label={{ value: "𝒟", angle: -90, position: "insideLeft", fontSize: 12 }} />
-        <Tooltip
-          formatter={(v) => [compactNumber(Number(v), 3), "decoherence 𝒟"]}
-          labelFormatter={(x) => `${PARAMETER_WORDS[parameter]} ${formatQuantity(Number(x), dimension)}`}
-        />
-        <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
-        {data.length > 0 && <NowMarker parameter={parameter} from={data[0].x} to={data[data.length - 1].x} />}
-        {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
-      </LineChart>
-    </ResponsiveContainer>
+    <div className="flex h-full w-full flex-col">
+      {/* The hover readout sits above the plot, so it never covers the curve's axes or their labels. */}
+      <p className="h-5 shrink-0 text-right font-mono text-xs text-ink-soft" data-testid="sweep-readout" aria-live="polite">
+        {hovered ? `${PARAMETER_WORDS[parameter]} ${formatQuantity(hovered.x, dimension)}   𝒟 = ${compactNumber(hovered.decoherence, 3)}` : ""}
+      </p>
+      <div className="min-h-0 flex-1">
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart
+            data={data}
+            margin={{ top: 14, right: 24, bottom: 30, left: 14 }}
+            onMouseMove={(state) => {
+              const index = Number(state?.activeIndex);
+              setHovered(Number.isInteger(index) && data[index] ? data[index] : null);
+            }}
+            onMouseLeave={() => setHovered(null)}
+            onClick={(state) => {
+              const index = Number(state?.activeIndex);
+              if (!readOnly && Number.isInteger(index) && data[index]) onPick(data[index].x);
+            }}
+            style={{ cursor: readOnly ? "default" : "pointer" }}
+          >
+            <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
+            <XAxis
+              dataKey="x"
+              type="number"
+              scale="log"
+              domain={[xAxis.from, xAxis.to]}
+              ticks={xAxis.ticks.major}
+              interval={0}
+              allowDataOverflow
+              tickFormatter={xAxis.label}
+              tick={{ fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
+              stroke={AXIS_COLOUR}
+              label={{ value: xTitle, position: "insideBottom", offset: -20, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
+            />
+            <YAxis
+              dataKey="decoherence"
+              type="number"
+              scale="log"
+              domain={[yAxis.from, yAxis.to]}
+              ticks={yAxis.ticks.major}
+              interval={0}
+              allowDataOverflow
+              tickFormatter={yAxis.label}
+              tick={{ fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
+              stroke={AXIS_COLOUR}
+              width={64}
+              label={{ value: "decoherence 𝒟", angle: -90, position: "insideLeft", offset: 4, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR, style: { textAnchor: "middle" } }}
+            />
+            {/* The cursor line shows where the pointer is; the numbers go to the readout above. */}
+            <Tooltip content={() => null} cursor={{ stroke: AXIS_COLOUR, strokeDasharray: "3 3" }} isAnimationActive={false} />
+            <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
+            <MinorTicks x={xAxis.ticks.minor} y={yAxis.ticks.minor} />
+            {data.length > 0 && <NowMarker parameter={parameter} from={data[0].x} to={data[data.length - 1].x} />}
+            {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
+          </LineChart>
+        </ResponsiveContainer>
+      </div>
+    </div>
   );
 });

@@ -31,7 +31,8 @@ function wedgeHorizons(): DiagramBoundary[] {
 
 /**
  * Labelled boundary paths of the diagram of `background` (only its kind matters: the diagrams are normalised).
- * Minkowski (r ≥ 0): triangle i⁻ (−1, 0), i⁰ (0, 1), i⁺ (1, 0), with r = 0 on X = 0.
+ * Minkowski: the plane through the lab along the separation axis (x from −∞ to ∞), the diamond |T| + |X| ≤ 1 with
+ * i⁻ (−1, 0), i⁺ (1, 0), i⁰ at (0, ±1) and the lab's x = 0 on X = 0.
  * Rindler: the full (1+1) Minkowski diamond |T| + |X| = 1, the lab's wedge bounded by H± through the origin.
  * Schwarzschild: exterior diamond with i⁻ (−½, ½), i⁰ (0, 1), i⁺ (½, ½), H± through the bifurcation (0, 0), and the
  * black-hole interior up to the singularity T = ½. de Sitter: the square |T| ≤ 1, 0 ≤ X ≤ 2, ℐ± on T = ±1, the
@@ -44,10 +45,12 @@ export function diagramBoundaries(background: Pick<Background, "kind">, singular
       return [
         edge("ℐ⁺", "null-infinity", [pt(0, 1), pt(1, 0)]),
         edge("ℐ⁻", "null-infinity", [pt(-1, 0), pt(0, 1)]),
-        edge("r = 0", "centre", [pt(-1, 0), pt(1, 0)]),
+        edge("ℐ⁺", "null-infinity", [pt(1, 0), pt(0, -1)]),
+        edge("ℐ⁻", "null-infinity", [pt(0, -1), pt(-1, 0)]),
         edge("i⁺", "timelike-infinity", [pt(1, 0)]),
         edge("i⁻", "timelike-infinity", [pt(-1, 0)]),
         edge("i⁰", "spatial-infinity", [pt(0, 1)]),
+        edge("i⁰", "spatial-infinity", [pt(0, -1)]),
       ];
     case "rindler":
       return [

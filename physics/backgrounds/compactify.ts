@@ -49,16 +49,18 @@ function inverseArctanExp(y: number): number {
  * P = (2/π) arctan U ∈ (−1, 0), Q = (2/π) arctan V ∈ (0, 1). Used for the Schwarzschild exterior (κ = c³/4GM) and,
  * with κ = a/c, for the Rindler wedge, where U, V are the inertial null coordinates (ct ∓ x)·a/c² themselves.
  */
-export function kruskalSqueezes(surfaceGravityPerSecond: number): { p: NullSqueeze; q: NullSqueeze } {
+export function kruskalSqueezes(surfaceGravityPerSecond: number, tortoiseOriginMetres = 0): { p: NullSqueeze; q: NullSqueeze } {
   const k = surfaceGravityPerSecond / c;
+  // Measuring r* from tortoiseOriginMetres scales U and V alike by e^{−κ r*₀/c}: the free scale of the Kruskal chart.
+  const o = tortoiseOriginMetres;
   return {
     p: {
-      squeeze: (u) => -arctanExp(-k * u),
-      unsqueeze: (y) => (inOpenUnitInterval(-y, 0) ? -inverseArctanExp(-y) / k : null),
+      squeeze: (u) => -arctanExp(-k * (u + o)),
+      unsqueeze: (y) => (inOpenUnitInterval(-y, 0) ? -inverseArctanExp(-y) / k - o : null),
     },
     q: {
-      squeeze: (v) => arctanExp(k * v),
-      unsqueeze: (y) => (inOpenUnitInterval(y, 0) ? inverseArctanExp(y) / k : null),
+      squeeze: (v) => arctanExp(k * (v - o)),
+      unsqueeze: (y) => (inOpenUnitInterval(y, 0) ? inverseArctanExp(y) / k + o : null),
     },
   };
 }
@@ -97,11 +99,10 @@ export interface StaticChart {
  * the chart, including points that rounding has put on its boundary.
  */
 export function staticConformalMap(chart: StaticChart, p: NullSqueeze, q: NullSqueeze): ConformalMap {
+  const atTortoise = (tSeconds: number, rStar: number) => diagramPointFromNull(p.squeeze(c * tSeconds - rStar), q.squeeze(c * tSeconds + rStar));
   return {
-    toDiagram(tSeconds, rMetres) {
-      const rStar = chart.tortoiseMetres(rMetres);
-      return diagramPointFromNull(p.squeeze(c * tSeconds - rStar), q.squeeze(c * tSeconds + rStar));
-    },
+    toDiagram: (tSeconds, rMetres) => atTortoise(tSeconds, chart.tortoiseMetres(rMetres)),
+    toDiagramAtTortoise: atTortoise,
     fromDiagram(point) {
       const { P, Q } = nullFromDiagramPoint(point);
       const u = p.unsqueeze(P);

@@ -7,7 +7,7 @@ import { deSitterPositionAtProperDistance, deSitterPositionAtRadius, makeDeSitte
 import { BackgroundInputError } from "./errors";
 import { makeMinkowski } from "./minkowski";
 import { makeRindler } from "./rindler";
-import { makeSchwarzschild } from "./schwarzschild";
+import { makeSchwarzschild, type SchwarzschildDiagramFrame } from "./schwarzschild";
 import {
   schwarzschildPositionAtProperDistance,
   schwarzschildPositionAtRadius,
@@ -22,10 +22,13 @@ export { constantRadiusCurve, constantTimeCurve } from "./grid";
 export { blackHoleInteriorToDiagram, singularityCurve } from "./schwarzschild-interior";
 export { horizonTemperatureKelvin } from "./horizon-temperature";
 export { schwarzschildRadiusMetres } from "./schwarzschild-geometry";
+export type { SchwarzschildDiagramFrame } from "./schwarzschild";
 
 export interface MakeBackgroundOptions {
   /** Minkowski only: the length L of the diagram's arctan((ct ± r)/L); default one light-second. */
   minkowskiDiagramScaleMetres?: number;
+  /** Schwarzschild only: "lab-centred" puts the lab's worldline through the middle of the exterior (schwarzschild.ts). */
+  schwarzschildDiagramFrame?: SchwarzschildDiagramFrame;
 }
 
 const placementPath = "lab.placement";
@@ -62,7 +65,7 @@ export function makeBackground(background: BackgroundSpec, lab: LabPlacement, op
       return makeRindler(background.accelerationMetresPerSecondSquared);
     case "schwarzschild": {
       const horizonRadiusMetres = schwarzschildRadiusMetres(background.massKg);
-      return makeSchwarzschild(horizonRadiusMetres, schwarzschildPosition(background, lab, horizonRadiusMetres));
+      return makeSchwarzschild(horizonRadiusMetres, schwarzschildPosition(background, lab, horizonRadiusMetres), options.schwarzschildDiagramFrame);
     }
     case "de-sitter":
       return makeDeSitter(background.hubbleRatePerSecond, deSitterPosition(background.hubbleRatePerSecond, lab));

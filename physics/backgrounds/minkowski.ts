@@ -3,12 +3,14 @@ import { staticLabBackground } from "./static-lab";
 import type { Background } from "./types";
 
 /**
- * Flat spacetime with an inertial lab at the centre r = 0. No horizon, no acceleration, zero temperature; r* = r.
+ * Flat spacetime with an inertial lab at rest at the origin. No horizon, no acceleration, zero temperature.
  *
- * Diagram: P = (2/π) arctan((ct − r)/L), Q = (2/π) arctan((ct + r)/L), T = (P + Q)/2, X = (Q − P)/2 — the usual
- * arctan compactification (e.g. Hawking & Ellis, The Large Scale Structure of Space-Time (1973), §5.1, up to the
- * factor 2/π). The half plane r ≥ 0 becomes the triangle with i⁺ = (1, 0), i⁰ = (0, 1), i⁻ = (−1, 0); r = 0 is
- * the segment X = 0. L only sets where finite points sit; it is the caller's choice of drawing scale.
+ * The chart is the plane through the lab along the separation axis: its "radial" coordinate is the signed position
+ * x along that axis (the lab at x = 0, r* = x), so both branches, on either side of the lab, have a place on it.
+ * Diagram: P = (2/π) arctan((ct − x)/L), Q = (2/π) arctan((ct + x)/L), T = (P + Q)/2, X = (Q − P)/2 — the usual
+ * arctan compactification of (1+1) Minkowski space (e.g. Hawking & Ellis, The Large Scale Structure of Space-Time
+ * (1973), §5.1, up to the factor 2/π): the diamond |T| + |X| < 1 with i⁺ = (1, 0), i⁻ = (−1, 0), i⁰ = (0, ±1), the
+ * lab on its vertical diagonal X = 0. L only sets where finite points sit; it is the caller's choice of drawing scale.
  */
 export function makeMinkowski(diagramLengthScaleMetres: number): Background {
   const squeeze = arctanSqueeze(diagramLengthScaleMetres);
@@ -18,8 +20,8 @@ export function makeMinkowski(diagramLengthScaleMetres: number): Background {
     position: { rMetres: 0, lapse: 1, lapseDeficit: 0, properDistanceToHorizonMetres: Number.POSITIVE_INFINITY },
     accelerationMetresPerSecondSquared: 0,
     chart: {
-      tortoiseMetres: (rMetres) => (rMetres >= 0 ? rMetres : Number.NaN),
-      radiusFromTortoiseMetres: (tortoiseMetres) => (tortoiseMetres >= 0 ? tortoiseMetres : null),
+      tortoiseMetres: (xMetres) => xMetres,
+      radiusFromTortoiseMetres: (tortoiseMetres) => tortoiseMetres,
     },
     squeezes: { p: squeeze, q: squeeze },
     flags: [],

@@ -9,6 +9,9 @@ import {
 import { staticLabBackground } from "./static-lab";
 import type { Background, BackgroundFlag, StaticLabPosition } from "./types";
 
+/** How the exterior is scaled on the diagram: the unit Kruskal chart, or with the lab's worldline through its middle. */
+export type SchwarzschildDiagramFrame = "unit-kruskal" | "lab-centred";
+
 /**
  * A static lab outside a Schwarzschild black hole of horizon radius r_s = 2GM/c².
  *
@@ -19,9 +22,15 @@ import type { Background, BackgroundFlag, StaticLabPosition } from "./types";
  *   (1930)), the Unruh state's value near the horizon.
  * - Diagram: Kruskal–Szekeres U = −e^{−κu/c}, V = e^{κv/c}, then (2/π) arctan of each: the exterior is the diamond
  *   with bifurcation (0, 0), i⁻ = (−½, ½), i⁰ = (0, 1), i⁺ = (½, ½); H⁺ is T = X, H⁻ is T = −X.
+ *   With frame "lab-centred" r* is measured from the lab's, which scales U and V alike by e^{−κ r*_lab/c} (the
+ *   Kruskal chart's free scale): the lab's worldline then crosses t = 0 at (0, ½), the middle of the exterior,
+ *   instead of hugging i⁰ when the lab is many r_s out or the horizon when it is close. Region II keeps the unit
+ *   scale with Killing time shifted by r*_lab/c (U → U e^{κr*_lab/c}, V → V e^{−κr*_lab/c}, a boost), so the
+ *   singularity stays the straight T = ½ and the two regions meet on H⁺ (U = 0) point for point; only the slope
+ *   of P(U) changes there, which no drawn curve crosses.
  * Flags: inside the photon sphere r < 3GM/c², and 1 − r_s/r below NEAR_HORIZON_LAPSE_SQUARED_LIMIT (flags.ts).
  */
-export function makeSchwarzschild(horizonRadiusMetres: number, position: StaticLabPosition): Background {
+export function makeSchwarzschild(horizonRadiusMetres: number, position: StaticLabPosition, frame: SchwarzschildDiagramFrame = "unit-kruskal"): Background {
   const gravitationalParameter = (c * c * horizonRadiusMetres) / 2;
   const surfaceGravityPerSecond = c / (2 * horizonRadiusMetres);
   return staticLabBackground({
@@ -33,7 +42,10 @@ export function makeSchwarzschild(horizonRadiusMetres: number, position: StaticL
       tortoiseMetres: (rMetres) => schwarzschildTortoiseMetres(rMetres, horizonRadiusMetres),
       radiusFromTortoiseMetres: (rStar) => schwarzschildRadiusFromTortoiseMetres(rStar, horizonRadiusMetres),
     },
-    squeezes: kruskalSqueezes(surfaceGravityPerSecond),
+    squeezes: kruskalSqueezes(
+      surfaceGravityPerSecond,
+      frame === "lab-centred" ? schwarzschildTortoiseMetres(position.rMetres, horizonRadiusMetres) : 0,
+    ),
     flags: schwarzschildFlags(horizonRadiusMetres, position),
   });
 }

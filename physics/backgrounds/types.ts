@@ -54,6 +54,11 @@ export interface DiagramPoint {
 export interface ConformalMap {
   /** Static coordinates (seconds, metres) → diagram point, for the region the lab lives in. */
   toDiagram(tSeconds: number, rMetres: number): DiagramPoint;
+  /**
+   * The same map from the tortoise coordinate r* instead of r (metres): defined for every finite r*, so a curve given
+   * as r*(t) is mapped without inverting r*(r) (which rounds to the horizon a few tens of null scales in).
+   */
+  toDiagramAtTortoise(tSeconds: number, tortoiseMetres: number): DiagramPoint;
   /** Diagram point → static coordinates; null outside the region covered by the static chart. */
   fromDiagram(point: DiagramPoint): { tSeconds: number; rMetres: number } | null;
 }

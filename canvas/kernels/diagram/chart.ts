@@ -52,19 +52,31 @@ function representableEnd(background: Background, labTortoiseMetres: number, end
   return labTortoiseMetres;
 }
 
+/**
+ * The Minkowski diagram's length L over c: a quarter of the protocol's duration rounded up to a 1–2–5 value, so the
+ * protocol, centred on the middle, spans about half the lab's worldline (ct/L ≈ ±1 at its ends). Round, so that the
+ * diagram (and its grid) only rescales when the protocol's length changes a lot.
+ */
+export function minkowskiScaleSeconds(durationSeconds: number): number {
+  return durationSeconds > 0 ? ladderStepAtLeast(durationSeconds / 4) : 1;
+}
+
 export type ChartOutcome = { ok: true; chart: DiagramChart } | { ok: false; issue: SchemaIssue };
 
 /**
- * The chart of `document`. Minkowski has no scale of its own: its diagram length L is set to c times the
- * protocol's duration rounded up to a 1–2–5 value, so the protocol spans a readable part of the diagram.
+ * The chart of `document`. Minkowski has no scale of its own: its diagram length L is set from the protocol's
+ * duration (minkowskiScaleSeconds), so the protocol spans a readable part of the diagram.
  */
 export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
   const duration = protocolDurationSeconds(document);
-  // A round duration, so that the diagram (and its grid) only rescales when the protocol's length changes a lot.
-  const minkowskiScale = c * (duration > 0 ? ladderStepAtLeast(duration) : 1);
+  const minkowskiScale = c * minkowskiScaleSeconds(duration);
   let background: Background;
   try {
-    background = makeBackground(document.background, document.lab, { minkowskiDiagramScaleMetres: minkowskiScale });
+    background = makeBackground(document.background, document.lab, {
+      minkowskiDiagramScaleMetres: minkowskiScale,
+      // The lab's worldline through the middle of the exterior, whatever its radius (schwarzschild.ts).
+      schwarzschildDiagramFrame: "lab-centred",
+    });
   } catch (error) {
     if (error instanceof BackgroundInputError) return { ok: false, issue: { path: error.path, message: error.message } };
     throw error;
@@ -72,9 +84,10 @@ export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
   const scale = background.horizon ? c / background.horizon.surfaceGravityPerSecond : minkowskiScale;
   const labTortoiseMetres = background.tortoiseMetres(background.labRadiusMetres);
   const reach = REACH * scale;
-  const lowest = background.kind === "minkowski" || background.kind === "de-sitter" ? 0 : Math.min(-reach, labTortoiseMetres - reach);
   // The arctan squeeze of Minkowski converges slowly (as 1/x), so its ranges reach further.
   const stretch = background.kind === "minkowski" ? 40 : 1;
+  // The de Sitter chart stops at the centre r = 0; the Minkowski one is the whole line through the lab (x of either sign).
+  const lowest = background.kind === "de-sitter" ? 0 : background.kind === "minkowski" ? -reach * stretch : Math.min(-reach, labTortoiseMetres - reach);
   const tortoiseRange: [number, number] = [
     representableEnd(background, labTortoiseMetres, lowest),
     representableEnd(background, labTortoiseMetres, Math.max(reach, labTortoiseMetres + reach) * stretch),

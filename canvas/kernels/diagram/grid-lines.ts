@@ -1,5 +1,5 @@
 /**
- * The faint grid of the diagram: curves of constant static time and of constant radius, chosen so that they spread
+ * The faint grid of the diagram: curves of constant radius, chosen so that they spread
  * evenly over the diagram (not evenly in t or r, which would bunch them into the corners), then rounded to one
  * significant digit so each carries a round SI label. Inside a Schwarzschild black hole (region II, drawn for
  * context) a few curves of constant r, spacelike there, spread evenly between the horizon and the singularity and
@@ -10,9 +10,10 @@ import { c } from "@/physics/constants";
 import { nearestLadderValue, significantDigits } from "../round-numbers";
 import type { DiagramChart } from "./chart";
 import { bisect, sampleCurve } from "./geometry";
-import { radiusLabel, timeLabel, type RadiusLabelStyle } from "./labels";
+import { radiusLabel, type RadiusLabelStyle } from "./labels";
 
 export interface GridLine {
+  /** Only radius lines now: the slices of constant time are the protocol's own events (protocol-path.ts). */
   family: "time" | "radius";
   valueSI: number;
   /** Empty for a line drawn for context only (inside the black hole). */
@@ -22,13 +23,13 @@ export interface GridLine {
   labelAt: DiagramPoint;
 }
 
-const TIME_LINES = 9;
 const RADIUS_LINES = 7;
 const INTERIOR_RADIUS_LINES = 3;
 /** Killing time reached along an interior curve, in units of r_s/c: there U or V is e^{−30} of the other, at a corner. */
 const INTERIOR_TIME_REACH = 60;
 
-function timeCurve(chart: DiagramChart, tSeconds: number): DiagramPoint[] {
+/** The slice t = tSeconds across the lab's static region. */
+export function timeCurve(chart: DiagramChart, tSeconds: number, seeds = 96): DiagramPoint[] {
   const { background } = chart;
   return sampleCurve(
     (rStar) => {
@@ -37,7 +38,7 @@ function timeCurve(chart: DiagramChart, tSeconds: number): DiagramPoint[] {
     },
     chart.tortoiseRange[0],
     chart.tortoiseRange[1],
-    { seeds: 96 },
+    { seeds },
   );
 }
 
@@ -74,6 +75,7 @@ function radiusStyle(chart: DiagramChart, rMetres: number): RadiusLabelStyle {
   const { kind } = chart.background;
   const h = chart.horizonRadiusMetres;
   if (kind === "rindler") return "distance-from-horizon";
+  if (kind === "minkowski") return "position";
   if (kind === "schwarzschild" && h !== null && rMetres - h < 0.1 * h) return "above-horizon";
   if (kind === "de-sitter" && h !== null && h - rMetres < 0.1 * h) return "below-horizon";
   return "radius";
@@ -125,21 +127,18 @@ export function gridLines(chart: DiagramChart): GridLine[] {
   const { background } = chart;
   const { conformal } = background;
   const labR = background.labRadiusMetres;
-  const centreAtInnerEnd = background.kind === "minkowski" || background.kind === "de-sitter";
-  const innerR = centreAtInnerEnd ? 0 : null;
-
-  const times = evenlySpread(TIME_LINES, (t) => conformal.toDiagram(t, labR).T, chart.timeRange, nearestLadderValue);
-  const timeLines = times.map((t): GridLine => {
-    const points = timeCurve(chart, t);
-    return { family: "time", valueSI: t, label: timeLabel(t), points, labelAt: conformal.toDiagram(t, innerR ?? labR) };
-  });
+  const centreAtInnerEnd = background.kind === "de-sitter";
 
   const radii = evenlySpread(
     RADIUS_LINES,
     (rStar) => conformal.toDiagram(0, background.radiusFromTortoiseMetres(rStar) ?? labR).X,
     chart.tortoiseRange,
     (rStar) => roundRadius(chart, background.radiusFromTortoiseMetres(rStar) ?? labR),
-  ).filter((r) => r > (centreAtInnerEnd ? 0 : (chart.horizonRadiusMetres ?? 0)) && (background.kind !== "de-sitter" || r < chart.horizonRadiusMetres!));
+  ).filter((r) =>
+    background.kind === "minkowski"
+      ? r !== 0
+      : r > (centreAtInnerEnd ? 0 : (chart.horizonRadiusMetres ?? 0)) && (background.kind !== "de-sitter" || r < chart.horizonRadiusMetres!),
+  );
   const radiusLines = radii.map((r): GridLine => ({
     family: "radius",
     valueSI: r,
@@ -147,5 +146,5 @@ export function gridLines(chart: DiagramChart): GridLine[] {
     points: radiusCurve(chart, r),
     labelAt: conformal.toDiagram(0, r),
   }));
-  return [...timeLines, ...radiusLines, ...interiorRadiusLines(chart)];
+  return [...radiusLines, ...interiorRadiusLines(chart)];
 }

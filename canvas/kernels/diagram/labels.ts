@@ -2,11 +2,11 @@
 import { formatQuantity, type QuantityDimension } from "@/physics/units";
 
 /** formatQuantity with three digits, trailing zeros of the mantissa dropped ("4.00 ms" → "4 ms", "2.50 µm" → "2.5 µm"). */
-export function compactQuantity(valueSI: number, dimension: QuantityDimension): string {
-  return formatQuantity(valueSI, dimension).replace(/^(-?\d+)\.0+(?=\D|$)/, "$1").replace(/^(-?\d+\.\d*?)0+(?=\D|$)/, "$1");
+export function compactQuantity(valueSI: number, dimension: QuantityDimension, digits?: number): string {
+  return formatQuantity(valueSI, dimension, digits === undefined ? {} : { digits }).replace(/^(-?\d+)\.0+(?=\D|$)/, "$1").replace(/^(-?\d+\.\d*?)0+(?=\D|$)/, "$1");
 }
 
-export type RadiusLabelStyle = "radius" | "distance-from-horizon" | "above-horizon" | "below-horizon";
+export type RadiusLabelStyle = "radius" | "position" | "distance-from-horizon" | "above-horizon" | "below-horizon";
 
 /**
  * The label of a curve of constant radius. Near a horizon every radius prints alike ("29.5 km"), so there the label
@@ -16,6 +16,8 @@ export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRad
   switch (style) {
     case "radius":
       return `r = ${compactQuantity(rMetres, "length")}`;
+    case "position":
+      return `x = ${compactQuantity(rMetres, "length")}`;
     case "distance-from-horizon":
       return `ξ = ${compactQuantity(rMetres, "length")}`;
     case "above-horizon":
@@ -25,8 +27,34 @@ export function radiusLabel(rMetres: number, style: RadiusLabelStyle, horizonRad
   }
 }
 
-export function timeLabel(tSeconds: number): string {
-  return `t = ${tSeconds === 0 ? "0" : compactQuantity(tSeconds, "time")}`;
+/**
+ * The label of the lab's worldline: its radius in the unit the background makes natural — km and r/rₛ near a black
+ * hole, the horizon radius c/H in de Sitter, c²/a (the lab's distance from its horizon) for the Rindler wedge.
+ */
+export function labRadiusLabel(kind: "minkowski" | "schwarzschild" | "rindler" | "de-sitter", rMetres: number, horizonRadiusMetres: number | null): string {
+  switch (kind) {
+    case "minkowski":
+      return "lab, x = 0";
+    case "schwarzschild":
+      return `lab, r = ${compactQuantity(rMetres, "length")} = ${compactNumber(rMetres / (horizonRadiusMetres ?? rMetres), 3)} rₛ`;
+    case "de-sitter":
+      return rMetres === 0 ? "lab, r = 0" : `lab, r = ${compactNumber(rMetres / (horizonRadiusMetres ?? rMetres), 3)} c/H`;
+    case "rindler":
+      return `lab, ξ = c²/a = ${compactQuantity(rMetres, "length")}`;
+  }
+}
+
+/**
+ * Labels of the protocol's events: the lab's proper time from the start of the separation, as the Lab view counts
+ * it, with as many digits as it takes to tell neighbours apart (10 s and 10.01 s, not "10 s" twice).
+ */
+export function labTimeLabels(tauSeconds: number[]): string[] {
+  let labels: string[] = [];
+  for (let digits = 3; digits <= 8; digits++) {
+    labels = tauSeconds.map((tau) => `τ = ${tau === 0 ? "0" : compactQuantity(tau, "time", digits)}`);
+    if (new Set(labels).size === labels.length) break;
+  }
+  return labels;
 }
 
 const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";

@@ -7,8 +7,7 @@ import { diagramBoundaries, type DiagramBoundary, type DiagramPoint } from "@/ph
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import { c } from "@/physics/constants";
 import { formatQuantity } from "@/physics/units";
-import { ladderStepAtLeast } from "../round-numbers";
-import { makeDiagramChart, protocolDurationSeconds, type DiagramChart } from "./chart";
+import { makeDiagramChart, minkowskiScaleSeconds, protocolDurationSeconds, type DiagramChart } from "./chart";
 import { centroid, convexHull } from "./geometry";
 import { compactNumber } from "./labels";
 import { gridLines, labWorldline, type GridLine } from "./grid-lines";
@@ -83,6 +82,9 @@ function notesFor(chart: DiagramChart, document: ScenarioDocument, protocol: Pro
   if (chart.background.kind === "minkowski") {
     notes.push(`Compactified with L = ${formatQuantity(chart.nullScaleMetres, "length")} (c × ${formatQuantity(chart.nullScaleMetres / c, "time")}).`);
   }
+  if (protocol?.timeScale.warp) {
+    notes.push("Ramps and hold drawn at readable lengths, not to scale: the τ labels give the lab's times.");
+  }
   if (protocol?.timeScale.kind === "rescaled") {
     const { protocolEfolds, drawnEfolds, efoldSeconds } = protocol.timeScale;
     const how = protocolEfolds > drawnEfolds ? "compressed" : "stretched";
@@ -136,7 +138,7 @@ export function createSceneBuilder(): (document: ScenarioDocument) => SceneOutco
   let last: { keys: unknown[]; made: BackdropOutcome } | null = null;
   return (document) => {
     const duration = protocolDurationSeconds(document);
-    const scaleKey = document.background.kind === "minkowski" && duration > 0 ? ladderStepAtLeast(duration) : 0;
+    const scaleKey = document.background.kind === "minkowski" ? minkowskiScaleSeconds(duration) : 0;
     const keys = [document.background, document.lab, document.display.showGrid, scaleKey];
     if (!last || !keys.every((k, i) => Object.is(k, last!.keys[i]))) last = { keys, made: buildDiagramBackdrop(document) };
     const { made } = last;

@@ -1,6 +1,7 @@
-/** Ticks of the Lab view: the segment boundaries on the time axis, and round offsets on the vertical axis. */
+/** Ticks of the Lab view: the segment boundaries on the time axis (and their labels), round offsets on the vertical axis. */
 import { roundTicks } from "../round-numbers";
 import type { SegmentTimes } from "../timeline";
+import { layoutLabels, type LabelCandidate, type PlacedLabel } from "../diagram/label-layout";
 import { metresToPx, timeToPx, type LabViewport } from "./viewport";
 
 export interface Tick {
@@ -17,37 +18,60 @@ export function offsetTicks(viewport: LabViewport, count = 5): Tick[] {
   return roundTicks(viewport.metresAtBottom, viewport.metresAtTop, count).map((m) => ({ px: metresToPx(viewport, m), valueSI: m }));
 }
 
-/** A label under the time axis: centred on its tick, on the first row or (to clear a neighbour) the second. */
-export interface TimeLabelPlacement {
-  px: number;
-  widthPx: number;
-  row: 0 | 1;
-}
+/** Rows under the time axis: the first for the instants, the second for a crowded one and the axis title. */
+export const TIME_LABEL_ROWS_PX = [8, 26] as const;
+/** Room kept between two labels, pixels. */
+const LABEL_GAP_PX = 4;
 
-/** Room kept between two labels on the same row, pixels. */
-const LABEL_GAP_PX = 6;
-
-/**
- * Rows for the labels under the time axis, given each one's centre and (estimated) width in order along the axis:
- * a label drops to the second row only when it would touch its neighbour on the first.
- */
-export function staggerTimeLabels(labels: { px: number; widthPx: number }[]): TimeLabelPlacement[] {
-  const placed: TimeLabelPlacement[] = [];
-  for (const label of labels) {
-    const previous = placed[placed.length - 1];
-    const touches = previous !== undefined && previous.row === 0 && label.px - label.widthPx / 2 < previous.px + previous.widthPx / 2 + LABEL_GAP_PX;
-    placed.push({ ...label, row: touches ? 1 : 0 });
-  }
-  return placed;
+export interface TimeAxisLabelsInput {
+  /** The instants' ticks and their texts, in order along the axis. */
+  ticks: { px: number; text: string }[];
+  title: string;
+  plot: { left: number; width: number; bottom: number };
+  stage: { width: number; height: number };
+  fontSize: number;
+  /** Average advance of a character of the instants' (mono) and the title's (sans) faces, in ems. */
+  monoEm: number;
+  sansEm: number;
 }
 
 /**
- * Which end of the second row the axis title goes to: the right end, unless a second-row label reaches into it
- * there and the left end is clear. `title` spans from `rightEndPx − widthPx` at the right, from `leftEndPx` at the left.
+ * The labels under the Lab view's time axis, laid out by the one label layout the Diagram uses: each instant
+ * centred under its tick on the first row, or the second when a neighbour takes the first; the axis title at the
+ * right end of the second row, else at its left end, else dropped. The instants rank first, the earlier first.
  */
-export function timeAxisTitleSide(labels: TimeLabelPlacement[], title: { widthPx: number; leftEndPx: number; rightEndPx: number }): "left" | "right" {
-  const blocks = (from: number, to: number) =>
-    labels.some((l) => l.row === 1 && l.px - l.widthPx / 2 < to + LABEL_GAP_PX && l.px + l.widthPx / 2 > from - LABEL_GAP_PX);
-  if (!blocks(title.rightEndPx - title.widthPx, title.rightEndPx)) return "right";
-  return blocks(title.leftEndPx, title.leftEndPx + title.widthPx) ? "right" : "left";
+export function timeAxisLabels(input: TimeAxisLabelsInput): PlacedLabel[] {
+  const { plot, fontSize } = input;
+  const rowY = (row: 0 | 1) => plot.bottom + TIME_LABEL_ROWS_PX[row] + (fontSize * 1.2) / 2;
+  const instants = input.ticks.map(
+    (tick, i): LabelCandidate => ({
+      id: `time-${i}`,
+      text: tick.text,
+      fontSize,
+      characterEm: input.monoEm,
+      priority: 20,
+      tone: "soft",
+      x: tick.px,
+      y: rowY(0),
+      align: "center",
+      verticalAlign: "middle",
+      rotation: 0,
+      alternatives: [{ x: tick.px, y: rowY(1), align: "center", verticalAlign: "middle", rotation: 0 }],
+    }),
+  );
+  const title: LabelCandidate = {
+    id: "time-title",
+    text: input.title,
+    fontSize,
+    characterEm: input.sansEm,
+    priority: 10,
+    tone: "faint",
+    x: plot.left + plot.width,
+    y: rowY(1),
+    align: "right",
+    verticalAlign: "middle",
+    rotation: 0,
+    alternatives: [{ x: plot.left, y: rowY(1), align: "left", verticalAlign: "middle", rotation: 0 }],
+  };
+  return layoutLabels([...instants, title], input.stage, { gapPx: LABEL_GAP_PX });
 }

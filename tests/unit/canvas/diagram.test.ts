@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { lightConeAt } from "@/canvas/kernels/diagram/light-cone";
 import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
 import { clipToConvex } from "@/canvas/kernels/diagram/geometry";
-import { layoutLabels, type LabelCandidate } from "@/canvas/kernels/diagram/decorations";
+import { layoutLabels, type LabelCandidate } from "@/canvas/kernels/diagram/label-layout";
 import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { schwarzschildDocument } from "./harness";
 
@@ -59,12 +59,15 @@ describe.each(Object.entries(documents))("the diagram of %s", (_name, document) 
     for (const p of drawn) expect(insideConvex(scene.outline, p)).toBe(true);
   });
 
-  it("labels the grid with distinct values and spreads the time lines along the lab's worldline", () => {
-    const times = scene.grid.filter((g) => g.family === "time");
-    expect(new Set(times.map((g) => g.label)).size).toBe(times.length);
-    const heights = times.map((g) => g.labelAt.T).sort((a, b) => a - b);
-    const gaps = heights.slice(1).map((h, i) => h - heights[i]);
-    expect(Math.min(...gaps)).toBeGreaterThan(0.02);
+  it("labels the radius lines with distinct values, and draws the time slices at the protocol's events up the lab's worldline", () => {
+    const radii = scene.grid.filter((g) => g.family === "radius" && g.label !== "");
+    expect(radii.length).toBeGreaterThan(2);
+    expect(new Set(radii.map((g) => g.label)).size).toBe(radii.length);
+    expect(scene.grid.some((g) => g.family === "time")).toBe(false);
+    const slices = scene.protocol!.slices;
+    expect(slices.length).toBe(4);
+    const heights = slices.map((s) => s.labPoint.T);
+    heights.slice(1).forEach((h, i) => expect(h - heights[i]).toBeGreaterThan(0.02));
   });
 
   it("shades radiation toward null infinity from both ramps", () => {

@@ -182,9 +182,14 @@ describe("boundaries: horizons and null infinity", () => {
     for (const t of [-2, 0, 3]) expect(distanceToPolyline(bg.conformal.toDiagram(t / H, 0), labBoundary(bg, "r = 0"))).toBeLessThan(1e-15);
   });
 
-  it("Minkowski: the centre r = 0 is the edge X = 0", () => {
+  it("Minkowski: the lab's x = 0 is the diamond's vertical diagonal X = 0, and x < 0 its left half, mirrored", () => {
     const bg = minkowski.background;
-    for (const t of [-2, 0, 3]) expect(distanceToPolyline(bg.conformal.toDiagram(t, 0), labBoundary(bg, "r = 0"))).toBeLessThan(1e-15);
+    for (const t of [-2, 0, 3]) {
+      expect(bg.conformal.toDiagram(t, 0).X).toBe(0);
+      const [right, left] = [bg.conformal.toDiagram(t, 2), bg.conformal.toDiagram(t, -2)];
+      expect(left.X).toBeCloseTo(-right.X, 15);
+      expect(left.T).toBeCloseTo(right.T, 15);
+    }
   });
 });
 

@@ -43,31 +43,29 @@ const NOTE_FONT = 10.5;
 const LINE_GAP = 1.35;
 const ITEM_GAP = 18;
 
+/** The width of a line of text in pixels: measured with the figure fonts where they are loaded, else estimated. */
+export type MeasureText = (text: string, fontSize: number) => number;
+
 /** Greedy line filling: parts joined by `separator`, a new line where the next part would pass `width`. */
-export function wrapParts(parts: string[], separator: string, fontSize: number, width: number): string[] {
+export function wrapParts(parts: string[], separator: string, fontSize: number, width: number, measure: MeasureText = estimatedTextWidth): string[] {
   const lines: string[] = [];
   for (const part of parts) {
     const last = lines[lines.length - 1];
     const joined = last === undefined ? part : `${last}${separator}${part}`;
-    if (last !== undefined && estimatedTextWidth(joined, fontSize) <= width) lines[lines.length - 1] = joined;
+    if (last !== undefined && measure(joined, fontSize) <= width) lines[lines.length - 1] = joined;
     else lines.push(part);
   }
   return lines;
 }
 
-/** Words wrapped at spaces to `width` (a note is one sentence, and may be longer than a line). */
-function wrapWords(text: string, fontSize: number, width: number): string[] {
-  return wrapParts(text.split(" "), " ", fontSize, width);
-}
-
 const text = (t: string, x: number, y: number, fontSize: number, fill: string): FigureShape => ({ kind: "text", text: t, x, y, anchor: "start", rotation: 0, fontSize, font: "serif", fill });
 
-function legendShapes(entries: LegendEntry[], top: number, width: number, palette: FigurePalette): { shapes: FigureShape[]; bottom: number } {
+function legendShapes(entries: LegendEntry[], top: number, width: number, palette: FigurePalette, measure: MeasureText): { shapes: FigureShape[]; bottom: number } {
   const shapes: FigureShape[] = [];
   let x = MARGIN;
   let y = top + LEGEND_ROW / 2;
   for (const entry of entries) {
-    const itemWidth = SWATCH + 6 + estimatedTextWidth(entry.words, LEGEND_FONT);
+    const itemWidth = SWATCH + 6 + measure(entry.words, LEGEND_FONT);
     if (x > MARGIN && x + itemWidth > width - MARGIN) {
       x = MARGIN;
       y += LEGEND_ROW;
@@ -85,7 +83,7 @@ function legendShapes(entries: LegendEntry[], top: number, width: number, palett
 }
 
 /** The drawing with its band under it. With neither legend nor caption, the drawing as it is. */
-export function withBand(drawing: ExportDrawing, content: BandContent): ExportDrawing {
+export function withBand(drawing: ExportDrawing, content: BandContent, measure: MeasureText = estimatedTextWidth): ExportDrawing {
   const { width } = drawing;
   const { palette } = content;
   const room = width - 2 * MARGIN;
@@ -94,18 +92,18 @@ export function withBand(drawing: ExportDrawing, content: BandContent): ExportDr
   let y = drawing.height + MARGIN / 2;
 
   if (content.legend && content.legend.length > 0) {
-    const laid = legendShapes(content.legend, y, width, palette);
+    const laid = legendShapes(content.legend, y, width, palette, measure);
     legend.push(...laid.shapes);
     y = laid.bottom + 4;
   }
   if (content.caption) {
     const step = CAPTION_FONT * LINE_GAP;
-    for (const line of wrapParts(content.caption.split(CAPTION_SEPARATOR), CAPTION_SEPARATOR, CAPTION_FONT, room)) {
+    for (const line of wrapParts(content.caption.split(CAPTION_SEPARATOR), CAPTION_SEPARATOR, CAPTION_FONT, room, measure)) {
       caption.push(text(line, MARGIN, y + step / 2, CAPTION_FONT, palette.ink));
       y += step;
     }
     const noteStep = NOTE_FONT * LINE_GAP;
-    for (const line of (content.notes ?? []).flatMap((note) => wrapWords(note, NOTE_FONT, room))) {
+    for (const line of (content.notes ?? []).flatMap((note) => wrapParts(note.split(" "), " ", NOTE_FONT, room, measure))) {
       caption.push(text(line, MARGIN, y + noteStep / 2, NOTE_FONT, palette.inkFaint));
       y += noteStep;
     }

@@ -5,12 +5,14 @@
  * reasons on standard error, one "path: message" a line, and exits with code 2.
  */
 import { computeScenarioFromJson } from "../physics/compute";
-import { fail, failWithIssues, readInputJson } from "./scenario-input";
+import { readInputJson, refuse, refuseIssues, runCommand } from "./scenario-input";
 
 const USAGE = "usage: npm run --silent compute -- FILE.json   (or - for standard input)";
 
-const argument = process.argv[2];
-if (argument === undefined || process.argv.length > 3) fail([USAGE]);
-const outcome = computeScenarioFromJson(readInputJson(argument));
-if (!outcome.ok) failWithIssues("the scenario cannot be computed:", outcome.issues);
-process.stdout.write(JSON.stringify(outcome.result, null, 2) + "\n");
+void runCommand(() => {
+  const argument = process.argv[2];
+  if (argument === undefined || process.argv.length > 3) refuse([USAGE]);
+  const outcome = computeScenarioFromJson(readInputJson(argument));
+  if (!outcome.ok) refuseIssues("the scenario cannot be computed:", outcome.issues);
+  return JSON.stringify(outcome.result, null, 2) + "\n";
+});

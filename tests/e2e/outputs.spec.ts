@@ -142,7 +142,11 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
   expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");
   const lines = (await readFile((await csv.path())!, "utf8")).split("\r\n");
-  expect(lines[0]).toBe("quantity,value,unit,source,flags");
+  // The scenario's inputs come first, then the numbers, then the flags once each.
+  expect(lines[0]).toBe("# schemaVersion: 1");
+  expect(lines).toContain("# background.kind: schwarzschild");
+  expect(lines).toContain("quantity,value,unit,source");
+  expect(lines).toContain("flag,status,message");
   const horizon = lines.find((l) => l.startsWith("Quanta into the horizon (electromagnetic),"))!;
   const shown = Number(await owner.getByTestId("budget-electromagnetic-horizon").getAttribute("data-value"));
   expect(Number(horizon.split(",")[1])).toBe(shown);

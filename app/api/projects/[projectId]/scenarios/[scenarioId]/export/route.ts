@@ -19,5 +19,5 @@ export const GET = route<Params>(async (req, { projectId, scenarioId }) => {
   if (what === "scenario") return fileResponse(scenarioExport({ title: scenario.title, document: scenario.document }));
   const { result, resultIssues } = computeShared(scenario.document);
   if (!result) throw new AppError("unprocessable", `this scenario cannot be computed: ${(resultIssues ?? []).map((i) => i.message).join("; ")}`);
-  return fileResponse(budgetExport(scenario.title, result));
+  return fileResponse(budgetExport(scenario.title, result, scenario.document));
 });

@@ -98,7 +98,11 @@ export function withBand(drawing: ExportDrawing, content: BandContent, measure: 
   }
   if (content.caption) {
     const step = CAPTION_FONT * LINE_GAP;
-    for (const line of wrapParts(content.caption.split(CAPTION_SEPARATOR), CAPTION_SEPARATOR, CAPTION_FONT, room, measure)) {
+    // Broken between parts; a part wider than the figure on its own (a narrow figure) between its words.
+    const lines = wrapParts(content.caption.split(CAPTION_SEPARATOR), CAPTION_SEPARATOR, CAPTION_FONT, room, measure).flatMap((line) =>
+      measure(line, CAPTION_FONT) > room ? wrapParts(line.split(" "), " ", CAPTION_FONT, room, measure) : [line],
+    );
+    for (const line of lines) {
       caption.push(text(line, MARGIN, y + step / 2, CAPTION_FONT, palette.ink));
       y += step;
     }

@@ -33,7 +33,7 @@ function labPart(document: ScenarioDocument): string {
   const { background: b, lab } = document;
   switch (lab.placement) {
     case "inertial":
-      return b.kind === "rindler" ? "lab at proper acceleration a" : b.kind === "de-sitter" ? "lab at the centre r = 0" : "lab inertial";
+      return b.kind === "rindler" ? "lab accelerated, at c²/a from the horizon" : b.kind === "de-sitter" ? "lab at the centre r = 0" : "lab inertial";
     case "areal-radius": {
       const r = lab.arealRadiusMetres;
       if (b.kind === "schwarzschild") return `lab at r = ${q(r, "length")} (r/rₛ = ${ratio(r / schwarzschildRadiusMetres(b.massKg))})`;

@@ -75,6 +75,16 @@ export function tickLabel(value: number): string {
   return mantissa === 1 ? `10${superscript(exponent)}` : `${mantissa} × 10${superscript(exponent)}`;
 }
 
+/** At most this many labelled ticks on an axis: beyond it, every second (third, …) decade is labelled. */
+const MOST_LABELS = 7;
+
+/** The major ticks that carry a label: all of them, or the decades whose exponent is a multiple of a step. */
+export function labelled(major: number[]): number[] {
+  if (major.length <= MOST_LABELS) return major;
+  const every = Math.ceil(major.length / MOST_LABELS);
+  return major.filter((v) => Math.round(Math.log10(v)) % every === 0);
+}
+
 const PLOT = { left: 92, right: 24, top: 20, bottom: 52 };
 const TICK_FONT = 12;
 const TITLE_FONT = 13;
@@ -147,8 +157,8 @@ export function sweepChartDrawing(data: SweepChartData, size: { width: number; h
   groups.push({
     id: "labels",
     shapes: [
-      ...xTicks.major.map((x) => text(tickLabel(x / unit.perUnit), px(x), plot.bottom + 17, "middle", palette.inkSoft)),
-      ...yTicks.major.map((y) => text(tickLabel(y), plot.left - 9, py(y), "end", palette.inkSoft)),
+      ...labelled(xTicks.major).map((x) => text(tickLabel(x / unit.perUnit), px(x), plot.bottom + 17, "middle", palette.inkSoft)),
+      ...labelled(yTicks.major).map((y) => text(tickLabel(y), plot.left - 9, py(y), "end", palette.inkSoft)),
       text(`${data.parameterWords} (${unit.symbol})`, (plot.left + plot.right) / 2, height - 14, "middle", palette.ink, TITLE_FONT),
       text("decoherence", 16, (plot.top + plot.bottom) / 2, "middle", palette.ink, TITLE_FONT, -90),
     ],

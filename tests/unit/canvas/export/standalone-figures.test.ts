@@ -12,7 +12,7 @@ import { figureCaption, figureCaptionParts } from "@/canvas/export/figure-captio
 import { FIGURE_FONT_FACES } from "@/canvas/export/figure-fonts";
 import { diagramLegend } from "@/canvas/export/figure-legend";
 import { withBand, type ExportDrawing } from "@/canvas/export/standalone-figure";
-import { axisUnit, logTicks, tickLabel } from "@/canvas/export/sweep-figure";
+import { axisUnit, labelled, logTicks, tickLabel } from "@/canvas/export/sweep-figure";
 import { openOutlineFonts, textOutline, textWidth } from "@/canvas/export/text-paths";
 import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
 import { DASHES, FIGURE_PALETTES } from "@/canvas/theme";
@@ -193,6 +193,9 @@ describe("the sweep chart's axes", () => {
     expect(tickLabel(0.1)).toBe("0.1");
     expect(tickLabel(1e-6)).toBe("10⁻⁶");
     expect(tickLabel(2e5)).toBe("2 × 10⁵");
+    // Twelve decades are too many labels: every second one is labelled, the even exponents.
+    const decades = Array.from({ length: 12 }, (_, i) => 10 ** (i - 20));
+    expect(labelled(decades).map((v) => Math.round(Math.log10(v)))).toEqual([-20, -18, -16, -14, -12, -10]);
   });
 
   it("draws the sweep's points inside the plot, in the figure palette, with the current value marked", () => {

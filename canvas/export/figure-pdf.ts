@@ -12,7 +12,9 @@ export const POINTS_PER_PIXEL = 0.75;
 export function figurePdf(svgWithOutlines: string, size: { width: number; height: number }, title: string): Promise<Uint8Array> {
   const width = size.width * POINTS_PER_PIXEL;
   const height = size.height * POINTS_PER_PIXEL;
-  const doc = new PDFDocument({ size: [width, height], margin: 0, autoFirstPage: true, compress: true, info: { Title: title, Creator: "Branchline" } });
+  // font: null — no standard font is loaded: the labels are outlines, and PDFKit's browser build ships no font data.
+  const options = { size: [width, height], margin: 0, autoFirstPage: true, compress: true, font: null, info: { Title: title, Creator: "Branchline" } };
+  const doc = new PDFDocument(options as unknown as PDFKit.PDFDocumentOptions);
   const chunks: Uint8Array[] = [];
   const done = new Promise<Uint8Array>((resolve, reject) => {
     doc.on("data", (chunk: Uint8Array) => chunks.push(chunk));

@@ -174,7 +174,7 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   // The Budget as a picture for a slide: a PNG at 2× (the table's width twice over, and more than a blank image
   // weighs) and an SVG, light or dark, with the caption line.
   await owner.keyboard.press("Escape");
-  const table = (await owner.getByTestId("budget").locator("table").boundingBox())!;
+  const table = (await owner.getByTestId("budget").locator("table").first().boundingBox())!;
   await owner.getByRole("button", { name: "Picture ▾" }).click();
   const picture = owner.getByRole("group", { name: "Budget picture" });
   await picture.getByLabel("dark").check();

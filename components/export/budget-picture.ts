@@ -69,7 +69,8 @@ export async function budgetPictureDataUrl(table: HTMLTableElement, options: Bud
   document.body.appendChild(frame);
   try {
     if (options.theme === "dark") darken(frame);
-    const drawn = { backgroundColor: ground, pixelRatio: options.pixelRatio, cacheBust: false };
+    // The copy html-to-image draws is put back where a picture starts (the frame itself stays off screen).
+    const drawn = { backgroundColor: ground, pixelRatio: options.pixelRatio, cacheBust: false, style: { position: "static", left: "0", top: "0" } };
     return options.kind === "png" ? await toPng(frame, drawn) : await toSvg(frame, drawn);
   } finally {
     frame.remove();

@@ -183,7 +183,20 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const budgetPngBytes = await readFile((await budgetPng.path())!);
   expect(budgetPngBytes.subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
   expect(budgetPngBytes.readUInt32BE(16)).toBeGreaterThanOrEqual(2 * Math.floor(table.width));
-  expect(budgetPngBytes.length).toBeGreaterThan(20_000);
+  // Drawn, not blank: thousands of pixels differ from the ground.
+  const inked = await owner.evaluate(async (base64) => {
+    const image = new Image();
+    image.src = `data:image/png;base64,${base64}`;
+    await image.decode();
+    const canvas = document.createElement("canvas");
+    [canvas.width, canvas.height] = [image.width, image.height];
+    canvas.getContext("2d")!.drawImage(image, 0, 0);
+    const { data } = canvas.getContext("2d")!.getImageData(0, 0, canvas.width, canvas.height);
+    let count = 0;
+    for (let i = 0; i < data.length; i += 4) if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) count++;
+    return count;
+  }, budgetPngBytes.toString("base64"));
+  expect(inked).toBeGreaterThan(5_000);
   const [budgetSvg] = await Promise.all([owner.waitForEvent("download"), picture.getByRole("button", { name: "Budget SVG" }).click()]);
   expect(budgetSvg.suggestedFilename()).toBe("hovering-lab-budget.svg");
   const svgFile = await readFile((await budgetSvg.path())!, "utf8");

@@ -8,7 +8,7 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#fbfaf7", deep: "#f3f1ec" },
-        ink: { DEFAULT: "#1c2024", soft: "#4a5058", faint: "#7b818a" },
+        ink: { DEFAULT: "#1c2024", soft: "#4a5058", faint: "#666b73" },
         rule: { DEFAULT: "#d9d6cf", strong: "#b9b5ac" },
         branchA: { DEFAULT: "#E69F00", tint: "#fbecc9" },
         branchB: { DEFAULT: "#0072B2", tint: "#d3e6f2" },

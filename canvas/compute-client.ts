@@ -89,7 +89,13 @@ export interface JobListener {
  * Runs one sweep job at a time. A new job replaces a running one: the old worker is terminated (a sweep's loop
  * cannot be interrupted from outside) and a fresh one spawned.
  */
-export function createJobRunner(spawn: () => WorkerPort) {
+export interface JobRunner {
+  run(job: SweepJob, listener: JobListener): void;
+  cancel(): void;
+  dispose(): void;
+}
+
+export function createJobRunner(spawn: () => WorkerPort): JobRunner {
   let port: WorkerPort | null = null;
   let nextId = 1;
   const stop = () => {

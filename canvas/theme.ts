@@ -26,7 +26,7 @@ export const FIGURE_PALETTES: Record<ScenarioDocument["display"]["theme"], Figur
     contextPaper: "#f3f1ec",
     ink: "#1c2024",
     inkSoft: "#4a5058",
-    inkFaint: "#7b818a",
+    inkFaint: "#666b73",
     rule: "#d9d6cf",
     branchA: "#E69F00",
     branchB: "#0072B2",

@@ -9,8 +9,10 @@
  * by the account with the address it was sent to) and a share link (its holder, signed in or not, may read the
  * one scenario it names while it is live, and do nothing else). A dead token of either kind is not found.
  */
-import type { ProjectRole, SiteRole } from "./schema";
+import type { Kysely } from "kysely";
+import type { Database, ProjectRole, SiteRole } from "./schema";
 import { AppError, forbidden, notFound } from "./errors";
+import { isUuid } from "./ids";
 
 export interface Actor {
   userId: string;
@@ -68,6 +70,29 @@ export function allowedProjectActions(role: ProjectRole): ProjectAction[] {
 export function assertProjectAccess(role: ProjectRole | null, action: ProjectAction): asserts role is ProjectRole {
   if (role === null) throw notFound("project");
   if (!roleAllows(role, action)) throw forbidden(`your role in this project (${role}) does not allow ${describe(action)}`);
+}
+
+/** The caller's role in a project, or null when the project does not exist or the caller is not a member. */
+export async function roleInProject(db: Kysely<Database>, projectId: string, userId: string): Promise<ProjectRole | null> {
+  if (!isUuid(projectId)) return null;
+  const row = await db
+    .selectFrom("projectMembers")
+    .select("role")
+    .where("projectId", "=", projectId)
+    .where("userId", "=", userId)
+    .executeTakeFirst();
+  return row?.role ?? null;
+}
+
+/**
+ * Throws unless the caller may do `action` in the project (404 when not a member, 403 when the role does not allow
+ * it), and answers the caller's role. Reads through `db`: pass the caller's transaction, so the check and the
+ * write it guards see the same state.
+ */
+export async function requireProjectAction(db: Kysely<Database>, actor: Actor, projectId: string, action: ProjectAction): Promise<ProjectRole> {
+  const role = await roleInProject(db, projectId, actor.userId);
+  assertProjectAccess(role, action);
+  return role;
 }
 
 export function assertSiteAccess(actor: Actor | null, action: SiteAction): asserts actor is Actor {

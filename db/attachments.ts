@@ -8,11 +8,10 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import type { Kysely } from "kysely";
 import type { ObjectStore } from "../lib/storage";
-import { type Actor, assertProjectAccess } from "./access";
+import { type Actor, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { notFound } from "./errors";
 import { isUuid } from "./ids";
-import { roleInProject } from "./members";
 import { person, type PersonDto } from "./people";
 import { assertScenarioInProject } from "./scenarios";
 import type { Database } from "./schema";
@@ -29,7 +28,7 @@ export interface AttachmentDto {
 
 /** Throws unless the caller may read the scenario's files (404 for a project or scenario they cannot see). */
 export async function assertMayReadScenario(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<void> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
+  await requireProjectAction(db, actor, projectId, "scenario:read");
   await assertScenarioInProject(db, projectId, scenarioId);
 }
 
@@ -38,7 +37,7 @@ export async function assertMayReadScenario(db: Kysely<Database>, actor: Actor, 
  * that take a file call it before reading the body, so a stranger learns nothing from how a file is refused.
  */
 export async function assertMayWriteScenarios(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId?: string): Promise<void> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
+  await requireProjectAction(db, actor, projectId, "scenario:write");
   if (scenarioId !== undefined) await assertScenarioInProject(db, projectId, scenarioId);
 }
 

@@ -1,7 +1,6 @@
 import "server-only";
 import type { Kysely } from "kysely";
-import { type Actor, assertProjectAccess } from "./access";
-import { roleInProject } from "./members";
+import { type Actor, requireProjectAction } from "./access";
 import type { AuditAction, Database, NewProjectAuditEntry, ProjectRole } from "./schema";
 import { person, type PersonDto } from "./people";
 
@@ -31,7 +30,7 @@ export async function recordAudit(db: Kysely<Database>, entry: Omit<NewProjectAu
 }
 
 export async function listAudit(db: Kysely<Database>, actor: Actor, projectId: string): Promise<AuditEntryDto[]> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "members:audit");
+  await requireProjectAction(db, actor, projectId, "members:audit");
   const rows = await db
     .selectFrom("projectAudit as a")
     .leftJoin("users as actor", "actor.id", "a.actorId")

@@ -1,10 +1,10 @@
 import "server-only";
 import type { Kysely } from "kysely";
-import { type Actor, assertInvitationAcceptable, assertProjectAccess, invitationIsOpen } from "./access";
+import { type Actor, assertInvitationAcceptable, invitationIsOpen, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
-import { insertMember, roleInProject } from "./members";
+import { insertMember } from "./members";
 import { hashToken, newToken } from "./tokens";
 import type { Database, InvitedRole, ProjectInvitationUpdate } from "./schema";
 import { person, type PersonDto } from "./people";
@@ -87,7 +87,7 @@ async function letterContext(db: Kysely<Database>, projectId: string, actor: Act
 
 /** Open invitations (not accepted, not revoked), newest first; expired ones are listed as such. */
 export async function listInvitations(db: Kysely<Database>, actor: Actor, projectId: string): Promise<InvitationDto[]> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "members:invite");
+  await requireProjectAction(db, actor, projectId, "members:invite");
   const rows = await invitationQuery(db, projectId).orderBy("i.createdAt", "desc").execute();
   return rows.map((r) => toDto(r));
 }
@@ -102,7 +102,7 @@ export async function createInvitation(
 ): Promise<InvitationDto> {
   const email = input.email.trim().toLowerCase();
   return db.transaction().execute(async (trx) => {
-    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:invite");
+    await requireProjectAction(trx, actor, projectId, "members:invite");
     // Invitations of one project queue here, so two owners inviting the same address cannot both succeed.
     await trx.selectFrom("projects").select("id").where("id", "=", projectId).forUpdate().execute();
     const member = await trx
@@ -156,7 +156,7 @@ export async function resendInvitation(
   deliver: DeliverInvitation,
 ): Promise<InvitationDto> {
   return db.transaction().execute(async (trx) => {
-    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:invite");
+    await requireProjectAction(trx, actor, projectId, "members:invite");
     const token = newToken();
     const expiresAt = expiryFromNow();
     const updated = await updateOpenInvitation(trx, projectId, invitationId, { tokenHash: hashToken(token), sentAt: new Date(), expiresAt });
@@ -170,7 +170,7 @@ export async function resendInvitation(
 /** Revokes an open invitation: its link stops working at once. */
 export async function revokeInvitation(db: Kysely<Database>, actor: Actor, projectId: string, invitationId: string): Promise<void> {
   await db.transaction().execute(async (trx) => {
-    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:invite");
+    await requireProjectAction(trx, actor, projectId, "members:invite");
     const revoked = await updateOpenInvitation(trx, projectId, invitationId, { revokedAt: new Date() });
     await recordAudit(trx, { projectId, actorId: actor.userId, action: "invitation_revoked", targetEmail: revoked.email, role: revoked.role });
   });

@@ -1,6 +1,6 @@
 import "server-only";
 import type { Kysely } from "kysely";
-import { type Actor, assertProjectAccess } from "./access";
+import { type Actor, assertProjectAccess, requireProjectAction, roleInProject } from "./access";
 import { recordAudit } from "./audit";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
@@ -14,20 +14,8 @@ export interface MemberDto {
   joinedAt: string;
 }
 
-/** The caller's role in a project, or null when the project does not exist or the caller is not a member. */
-export async function roleInProject(db: Kysely<Database>, projectId: string, userId: string): Promise<ProjectRole | null> {
-  if (!isUuid(projectId)) return null;
-  const row = await db
-    .selectFrom("projectMembers")
-    .select("role")
-    .where("projectId", "=", projectId)
-    .where("userId", "=", userId)
-    .executeTakeFirst();
-  return row?.role ?? null;
-}
-
 export async function listMembers(db: Kysely<Database>, actor: Actor, projectId: string): Promise<MemberDto[]> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "members:read");
+  await requireProjectAction(db, actor, projectId, "members:read");
   const rows = await db
     .selectFrom("projectMembers as m")
     .innerJoin("users as u", "u.id", "m.userId")
@@ -56,14 +44,14 @@ export async function addMemberByEmail(
   email: string,
   role: ProjectRole,
 ): Promise<MemberDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "members:manage");
-  const user = await db.selectFrom("users").select(["id", "email", "name"]).where("email", "=", email.toLowerCase()).executeTakeFirst();
-  if (!user) {
-    throw new AppError("unprocessable", "no Branchline account has this e-mail address; ask them to sign up first", [
-      { path: "email", message: "no account with this address" },
-    ]);
-  }
   return db.transaction().execute(async (trx) => {
+    await requireProjectAction(trx, actor, projectId, "members:manage");
+    const user = await trx.selectFrom("users").select(["id", "email", "name"]).where("email", "=", email.toLowerCase()).executeTakeFirst();
+    if (!user) {
+      throw new AppError("unprocessable", "no Branchline account has this e-mail address; ask them to sign up first", [
+        { path: "email", message: "no account with this address" },
+      ]);
+    }
     const joinedAt = await insertMember(trx, projectId, user.id, role);
     if (!joinedAt) throw conflict("this person is already a member of the project", [{ path: "email", message: "already a member" }]);
     await recordAudit(trx, { projectId, actorId: actor.userId, action: "member_added", targetUserId: user.id, targetEmail: user.email, role });
@@ -116,7 +104,7 @@ export async function changeMemberRole(
   role: ProjectRole,
 ): Promise<MemberDto> {
   return db.transaction().execute(async (trx) => {
-    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:manage");
+    await requireProjectAction(trx, actor, projectId, "members:manage");
     await lockMembers(trx, projectId);
     const current = await existingMember(trx, projectId, userId);
     if (current.role === "owner" && role !== "owner" && (await countOwners(trx, projectId)) === 1) {
@@ -145,7 +133,7 @@ export async function changeMemberRole(
  */
 export async function transferOwnership(db: Kysely<Database>, actor: Actor, projectId: string, userId: string): Promise<MemberDto[]> {
   return db.transaction().execute(async (trx) => {
-    assertProjectAccess(await roleInProject(trx, projectId, actor.userId), "members:manage");
+    await requireProjectAction(trx, actor, projectId, "members:manage");
     if (userId === actor.userId) {
       throw new AppError("unprocessable", "choose another member: ownership passes from you to someone else", [{ path: "userId", message: "that is you" }]);
     }

@@ -1,7 +1,6 @@
 import "server-only";
 import { type Kysely, sql } from "kysely";
-import { type Actor, type ProjectAction, allowedProjectActions, assertProjectAccess } from "./access";
-import { roleInProject } from "./members";
+import { type Actor, type ProjectAction, allowedProjectActions, requireProjectAction } from "./access";
 import type { Database, ProjectRole } from "./schema";
 
 export interface ProjectDto {
@@ -54,7 +53,7 @@ export async function listProjects(db: Kysely<Database>, actor: Actor): Promise<
 }
 
 export async function getProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<ProjectDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:read");
+  await requireProjectAction(db, actor, projectId, "project:read");
   return toDto(await projectQuery(db, actor.userId).where("p.id", "=", projectId).executeTakeFirstOrThrow());
 }
 
@@ -81,7 +80,7 @@ export async function updateProject(
   projectId: string,
   input: { name?: string; description?: string },
 ): Promise<ProjectDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:rename");
+  await requireProjectAction(db, actor, projectId, "project:rename");
   await db
     .updateTable("projects")
     .set({ ...input, updatedAt: new Date() })
@@ -91,6 +90,6 @@ export async function updateProject(
 }
 
 export async function deleteProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<void> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "project:delete");
+  await requireProjectAction(db, actor, projectId, "project:delete");
   await db.deleteFrom("projects").where("id", "=", projectId).execute();
 }

@@ -1,10 +1,9 @@
 import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { type Actor, assertProjectAccess } from "./access";
+import { type Actor, requireProjectAction } from "./access";
 import { diffDocuments, type DocumentDiff } from "../lib/document-diff";
 import { AppError, notFound } from "./errors";
-import { roleInProject } from "./members";
 import type { Database } from "./schema";
 import { person, type PersonDto } from "./people";
 import { assertScenarioInProject, saveNextVersion, type ScenarioDto } from "./scenarios";
@@ -55,7 +54,7 @@ function toSummary(r: RevisionRow): RevisionSummaryDto {
 }
 
 async function assertScenarioReadable(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string) {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
+  await requireProjectAction(db, actor, projectId, "scenario:read");
   await assertScenarioInProject(db, projectId, scenarioId);
 }
 
@@ -127,7 +126,7 @@ export async function restoreRevision(
   scenarioId: string,
   version: number,
 ): Promise<ScenarioDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
+  await requireProjectAction(db, actor, projectId, "scenario:write");
   await assertScenarioInProject(db, projectId, scenarioId);
   const revision = await storedRevision(db, projectId, scenarioId, version);
   const parsed = parseScenarioDocument(revision.document);

@@ -1,11 +1,11 @@
 import "server-only";
 import { type Kysely, sql } from "kysely";
+import { differsOnlyInDisplay } from "../physics/scenario/compare";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { type Actor, assertProjectAccess } from "./access";
+import { type Actor, requireProjectAction } from "./access";
 import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
-import { roleInProject } from "./members";
 import { person, type PersonDto } from "./people";
 import type { Database } from "./schema";
 
@@ -123,7 +123,7 @@ export async function listScenarios(
   projectId: string,
   query: ScenarioListQuery,
 ): Promise<ScenarioPage> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
+  await requireProjectAction(db, actor, projectId, "scenario:read");
   let filtered = baseQuery(db).where("s.projectId", "=", projectId);
   if (query.search) {
     const pattern = `%${query.search.replace(/[\\%_]/g, (ch) => `\\${ch}`)}%`;
@@ -162,7 +162,7 @@ export async function assertScenarioInProject(db: Kysely<Database>, projectId: s
 }
 
 export async function getScenario(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<ScenarioDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:read");
+  await requireProjectAction(db, actor, projectId, "scenario:read");
   return toDto(await fetchScenario(db, projectId, scenarioId));
 }
 
@@ -191,8 +191,8 @@ export async function createScenario(
   /** `importedFrom`: the scenario file's name, recorded in the project's history with the new scenario. */
   input: { title: string; document: ScenarioDocument; importedFrom?: string },
 ): Promise<ScenarioDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
   const id = await db.transaction().execute(async (trx) => {
+    await requireProjectAction(trx, actor, projectId, "scenario:write");
     const row = await trx
       .insertInto("scenarios")
       .values({
@@ -237,11 +237,12 @@ export async function updateScenario(
       );
     }
     return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document) };
-  });
+  }, { amendDisplay: true });
 }
 
 /**
- * Stores the next version of a scenario and its revision, in one transaction holding the scenario's row lock.
+ * Stores the next version of a scenario and its revision, in one transaction that checks the caller's role and
+ * holds the scenario's row lock.
  * `next` sees what is stored now and answers the title and document to store, or throws to store nothing.
  */
 export async function saveNextVersion(
@@ -250,19 +251,28 @@ export async function saveNextVersion(
   projectId: string,
   scenarioId: string,
   next: (current: { version: number; title: string; document: unknown }) => { title: string; document: ScenarioDocument },
+  { amendDisplay = false }: { amendDisplay?: boolean } = {},
 ): Promise<ScenarioDto> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
-  if (!isUuid(scenarioId)) throw notFound("scenario");
   await db.transaction().execute(async (trx) => {
+    await requireProjectAction(trx, actor, projectId, "scenario:write");
+    if (!isUuid(scenarioId)) throw notFound("scenario");
     const current = await trx
       .selectFrom("scenarios")
-      .select(["version", "title", "document"])
+      .select(["version", "title", "document", "updatedBy"])
       .where("projectId", "=", projectId)
       .where("id", "=", scenarioId)
       .forUpdate()
       .executeTakeFirst();
     if (!current) throw notFound("scenario");
     const { title, document } = next(current);
+    // Changing only the figures' look amends the caller's own latest version: toggling the grid or the dark
+    // theme changes no number, so it starts no new version.
+    if (amendDisplay && current.updatedBy === actor.userId && title === current.title && differsOnlyInDisplay(current.document, document)) {
+      const stored = JSON.stringify(document);
+      await trx.updateTable("scenarios").set({ document: stored, updatedAt: new Date() }).where("id", "=", scenarioId).execute();
+      await trx.updateTable("scenarioRevisions").set({ document: stored }).where("scenarioId", "=", scenarioId).where("version", "=", current.version).execute();
+      return;
+    }
     const version = current.version + 1;
     await trx
       .updateTable("scenarios")
@@ -297,7 +307,7 @@ export async function duplicateScenario(
 }
 
 export async function deleteScenario(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<void> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "scenario:write");
+  await requireProjectAction(db, actor, projectId, "scenario:write");
   if (!isUuid(scenarioId)) throw notFound("scenario");
   const deleted = await db.deleteFrom("scenarios").where("projectId", "=", projectId).where("id", "=", scenarioId).executeTakeFirst();
   if (deleted.numDeletedRows === 0n) throw notFound("scenario");

@@ -2,10 +2,9 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { recordAudit } from "./audit";
-import { type Actor, assertProjectAccess, assertShareLinkAccess, shareLinkIsOpen } from "./access";
+import { type Actor, assertShareLinkAccess, shareLinkIsOpen, requireProjectAction } from "./access";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
-import { roleInProject } from "./members";
 import { person, type PersonDto } from "./people";
 import { assertScenarioInProject } from "./scenarios";
 import { hashToken, newToken } from "./tokens";
@@ -62,7 +61,7 @@ function toDto(r: LinkRow, now = new Date()): ShareLinkDto {
 }
 
 async function assertManages(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<void> {
-  assertProjectAccess(await roleInProject(db, projectId, actor.userId), "share:manage");
+  await requireProjectAction(db, actor, projectId, "share:manage");
   await assertScenarioInProject(db, projectId, scenarioId);
 }
 
@@ -81,10 +80,10 @@ export async function createShareLink(
   scenarioId: string,
   input: { label: string; expiresInDays?: number | null },
 ): Promise<{ link: ShareLinkDto; token: string }> {
-  await assertManages(db, actor, projectId, scenarioId);
   const token = newToken();
   const expiresAt = input.expiresInDays ? new Date(Date.now() + input.expiresInDays * 24 * 3600_000) : null;
   const id = await db.transaction().execute(async (trx) => {
+    await assertManages(trx, actor, projectId, scenarioId);
     const row = await trx
       .insertInto("shareLinks")
       .values({ projectId, scenarioId, label: input.label, tokenHash: hashToken(token), createdBy: actor.userId, expiresAt })
@@ -97,9 +96,9 @@ export async function createShareLink(
 }
 
 export async function revokeShareLink(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string, linkId: string): Promise<void> {
-  await assertManages(db, actor, projectId, scenarioId);
-  if (!isUuid(linkId)) throw notFound("share link");
   const revoked = await db.transaction().execute(async (trx) => {
+    await assertManages(trx, actor, projectId, scenarioId);
+    if (!isUuid(linkId)) throw notFound("share link");
     const row = await trx
       .updateTable("shareLinks")
       .set({ revokedAt: new Date() })

@@ -107,3 +107,8 @@ export const sequencerProfileOptionsSchema = z.object({
 export const sequencerProfileJsonSchema = sequencerProfileOptionsSchema.extend({
   csv: z.string({ error: "csv must be the file's text" }).min(1, "the file is empty"),
 });
+
+/** ?what= of the export routes: the scenario file or the Budget as CSV. */
+export const exportQuerySchema = z.object({
+  what: z.enum(["scenario", "budget"], { error: 'what must be "scenario" (the scenario file) or "budget" (the Budget as CSV)' }),
+});

@@ -22,7 +22,6 @@ export {
   CURRENT_SCHEMA_VERSION,
   scenarioDocumentSchema,
   defaultScenarioDocument,
-  backgroundKindOf,
   type ScenarioDocument,
   type ScenarioDocumentInput,
   type SchemaIssue,

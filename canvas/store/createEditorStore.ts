@@ -74,9 +74,10 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
         set({ transaction: { label, mark: state.document } });
       },
 
-      preview(recipe) {
+      dragTo(recipe, labTool) {
         const { transaction } = get();
-        if (transaction) changeDocument(recipe(transaction.mark));
+        if (!transaction) return set({ labTool });
+        changeDocument(recipe(transaction.mark), { labTool });
       },
 
       commit() {

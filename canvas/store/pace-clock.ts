@@ -9,6 +9,8 @@ export interface PaceClock {
   subscribe(listener: () => void): () => void;
   /** Counts the moments at which the paced panels take the editor's values. */
   tick(): number;
+  /** Stops observing the store. */
+  dispose(): void;
 }
 
 export function createPaceClock(store: EditorStore, everyMs: number): PaceClock {
@@ -22,7 +24,7 @@ export function createPaceClock(store: EditorStore, everyMs: number): PaceClock 
     tick++;
     listeners.forEach((listener) => listener());
   };
-  store.subscribe((s, prev) => {
+  const stopObserving = store.subscribe((s, prev) => {
     if (s.labTool.name !== "dragging") {
       if (timer !== null) clearTimeout(timer);
       timer = null;
@@ -37,5 +39,10 @@ export function createPaceClock(store: EditorStore, everyMs: number): PaceClock 
       return () => listeners.delete(listener);
     },
     tick: () => tick,
+    dispose() {
+      stopObserving();
+      if (timer !== null) clearTimeout(timer);
+      listeners.clear();
+    },
   };
 }

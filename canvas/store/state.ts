@@ -71,8 +71,9 @@ export interface EditorActions {
   edit(label: string, recipe: (document: ScenarioDocument) => ScenarioDocument): EditResult;
   /** Start an edit that will take many steps (a drag): marks the document for commit or cancel. */
   begin(label: string): void;
-  /** Show one step of the edit under way, computed from the document at the mark. */
-  preview(recipe: (mark: ScenarioDocument) => ScenarioDocument): void;
+  /** One frame of a drag: the step of the edit under way (computed from the document at the mark) and the Lab
+   *  tool's new state, set together. */
+  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, labTool: LabToolState): void;
   /** Finish the edit under way as one undo step. */
   commit(): void;
   /** Abandon the edit under way: the document returns to the mark. */

@@ -129,8 +129,3 @@ export function useDeleteAttachment(projectId: string, scenarioId: string) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.all(projectId, scenarioId) }),
   });
 }
-
-/** A fresh five-minute link to the file. */
-export function attachmentLink(projectId: string, scenarioId: string, attachmentId: string) {
-  return apiFetch<{ url: string; expiresAt: string }>(`${scenarioPath(projectId, scenarioId)}/attachments/${encodeURIComponent(attachmentId)}`);
-}

@@ -9,9 +9,10 @@ import { buttonStyles } from "@/components/ui/styles";
 import { signUpSchema } from "@/lib/contracts";
 import { NewPasswordField } from "./NewPasswordField";
 
-export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
+/** A new account; `email` fills in the address an invitation was sent to. */
+export function SignUpForm({ callbackUrl, email = "" }: { callbackUrl: string; email?: string }) {
   const signUp = useSignUp();
-  const { form, problem, setProblem, submit } = useApiForm(signUpSchema);
+  const { form, problem, setProblem, submit } = useApiForm(signUpSchema, { defaultValues: { email } });
   const { errors, isSubmitting } = form.formState;
 
   const onSubmit = submit(async (input) => {

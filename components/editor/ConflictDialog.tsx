@@ -1,23 +1,18 @@
 "use client";
 
 /**
- * Someone else saved the scenario while it was being edited here. Two ways on, both explicit: take their version
- * (my changes are dropped), or keep mine as a new scenario (theirs stays as it is). Never a silent overwrite.
+ * A save met a newer version saved by someone else. Two ways on, both explicit (see useConflictActions): load
+ * the newer version, or save my edits as a copy. Never a silent overwrite.
  */
-import { useRouter } from "next/navigation";
-import { useEffect, useId, useRef, useState } from "react";
-import { messageOf } from "@/components/api/client";
+import { useEffect, useId, useRef } from "react";
 import { buttonStyles } from "@/components/ui/styles";
-import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
-import { getScenario, keepMineAsNewScenario } from "./save-scenario";
+import { useEditor } from "@/canvas/EditorProvider";
+import { useConflictActions } from "./useConflictActions";
 
-export function ConflictDialog({ projectId, scenarioId, title, editPath }: { projectId: string; scenarioId: string; title: string; editPath(scenarioId: string): string }) {
-  const store = useEditorStore();
-  const router = useRouter();
+export function ConflictDialog(props: { projectId: string; scenarioId: string; title: string; editPath(scenarioId: string): string }) {
   const conflict = useEditor((s) => (s.save.status === "conflict" ? s.save.conflictVersion : null));
+  const { pending, error, loadNewer, saveMineAsCopy } = useConflictActions(props);
   const dialog = useRef<HTMLDialogElement>(null);
-  const [pending, setPending] = useState<"theirs" | "mine" | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const titleId = useId();
 
   useEffect(() => {
@@ -27,51 +22,25 @@ export function ConflictDialog({ projectId, scenarioId, title, editPath }: { pro
     if (conflict === null && el.open) el.close();
   }, [conflict]);
 
-  const reloadTheirs = async () => {
-    setPending("theirs");
-    setError(null);
-    try {
-      const theirs = await getScenario(projectId, scenarioId);
-      if (!theirs.document) throw new Error("their version of the scenario cannot be read");
-      store.getState().loadDocument(theirs.document, theirs.version);
-    } catch (e) {
-      setError(e instanceof Error && !("status" in e) ? e.message : messageOf(e));
-    } finally {
-      setPending(null);
-    }
-  };
-
-  const keepMine = async () => {
-    setPending("mine");
-    setError(null);
-    try {
-      const copy = await keepMineAsNewScenario(projectId, scenarioId, `${title} (my version)`.slice(0, 200), store.getState().document);
-      router.push(editPath(copy.id));
-    } catch (e) {
-      setError(messageOf(e));
-      setPending(null);
-    }
-  };
-
   return (
     <dialog
       ref={dialog}
       aria-labelledby={titleId}
-      className="w-full max-w-lg rounded border border-rule-strong bg-paper p-6 text-ink shadow-sheet backdrop:bg-ink/30"
+      className="m-auto w-[calc(100%-2rem)] max-w-lg rounded border border-rule-strong bg-paper p-6 text-ink shadow-sheet backdrop:bg-ink/30"
       onCancel={(e) => e.preventDefault()}
     >
       <h2 id={titleId} className="font-serif text-xl font-semibold">
         Someone else saved this scenario
       </h2>
       <p className="mt-3 text-sm leading-relaxed text-ink-soft">
-        While you were editing, version {conflict ?? "?"} was saved by someone else. Your changes have not been saved. Choose how to go on:
+        While you were editing, version {conflict ?? "?"} was saved by someone else. Your edits have not been saved. Choose how to go on:
       </p>
       <ul className="mt-3 list-disc space-y-1 pl-5 text-sm text-ink-soft">
         <li>
-          <strong className="text-ink">Reload theirs</strong>: open their version here; your unsaved changes are dropped.
+          <strong className="text-ink">Load the newer version</strong>: open it here; your unsaved edits are dropped.
         </li>
         <li>
-          <strong className="text-ink">Keep mine as a new scenario</strong>: a copy with your changes is created in this project; theirs stays as it is.
+          <strong className="text-ink">Save my edits as a copy</strong>: a new scenario with your edits is made in this project and opened; the newer version stays as it is.
         </li>
       </ul>
       {error && (
@@ -81,11 +50,11 @@ export function ConflictDialog({ projectId, scenarioId, title, editPath }: { pro
         </p>
       )}
       <div className="mt-5 flex flex-wrap justify-end gap-3">
-        <button type="button" className={buttonStyles.secondary} disabled={pending !== null} onClick={reloadTheirs}>
-          {pending === "theirs" ? "Reloading…" : "Reload theirs"}
+        <button type="button" className={buttonStyles.secondary} disabled={pending !== null} onClick={loadNewer}>
+          {pending === "theirs" ? "Loading…" : "Load the newer version"}
         </button>
-        <button type="button" className={buttonStyles.primary} disabled={pending !== null} onClick={keepMine}>
-          {pending === "mine" ? "Saving a copy…" : "Keep mine as a new scenario"}
+        <button type="button" className={buttonStyles.primary} disabled={pending !== null} onClick={saveMineAsCopy}>
+          {pending === "mine" ? "Saving a copy…" : "Save my edits as a copy"}
         </button>
       </div>
     </dialog>

@@ -17,7 +17,7 @@ function SaveState({ onRetry }: { onRetry(): void }) {
   if (save.status === "saving") text = "Saving…";
   else if (save.status === "conflict") text = "⚠ Not saved: someone else saved a newer version";
   else if (save.status === "failed") text = `⚠ Not saved: ${save.message}`;
-  else text = unsaved ? "Unsaved changes" : "All changes saved";
+  else text = unsaved ? "Not saved yet" : `Saved · v${save.baseVersion}`;
   return (
     <span role="status" aria-live="polite" data-testid="save-state" data-saved={!unsaved && save.status === "idle"} className="flex items-center gap-2 text-sm text-ink-soft">
       {text}

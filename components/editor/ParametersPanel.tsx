@@ -7,8 +7,8 @@ import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
 import { elementaryCharge } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
-import { formatQuantity } from "@/physics/units";
-import { QuantityField } from "./QuantityField";
+import { formatQuantity, parseQuantity } from "@/physics/units";
+import { DraftField, QuantityField, type ParseResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
 
 const BACKGROUND_WORDS: Record<BackgroundKind, string> = {
@@ -183,6 +183,14 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
   );
 }
 
+/** A mass, or nothing at all (empty text): the lab's mass is optional. */
+function parseOptionalMass(text: string): ParseResult<number | null> {
+  if (text.trim() === "") return { ok: true, value: null };
+  const parsed = parseQuantity(text, "mass");
+  if (!parsed.ok) return parsed;
+  return parsed.valueSI > 0 ? { ok: true, value: parsed.valueSI } : { ok: false, message: "the lab's mass must be positive; leave the field empty for none" };
+}
+
 function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const { source, separation } = document;
@@ -203,6 +211,15 @@ function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnl
           shown={formatQuantity(source.massKg, "mass", { digits: 4 })}
           disabled={readOnly}
           onCommit={(m) => edit("Set source mass", (d) => ({ ...d, source: { ...d.source, massKg: m } }))}
+        />
+        <DraftField<number | null>
+          label="Lab mass"
+          hint="For the lab's recoil, which keeps the centre of mass fixed; leave empty for a lab too heavy to recoil."
+          shown={source.labMassKg === null ? "" : formatQuantity(source.labMassKg, "mass", { digits: 4 })}
+          parse={parseOptionalMass}
+          disabled={readOnly}
+          testId="lab-mass"
+          onCommit={(labMassKg) => edit(labMassKg === null ? "Clear lab mass" : "Set lab mass", (d) => ({ ...d, source: { ...d.source, labMassKg } }))}
         />
       </Group>
       <Group title="Separation">

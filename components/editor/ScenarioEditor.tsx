@@ -20,19 +20,19 @@ import { ConflictDialog } from "./ConflictDialog";
 import { DiagramPanel } from "./DiagramPanel";
 import { EditorToolbar } from "./EditorToolbar";
 import { LabViewPanel } from "./LabViewPanel";
+import { NewerVersionBanner } from "./NewerVersionBanner";
 import { ParametersPanel } from "./ParametersPanel";
 import { ProtocolStrip } from "./ProtocolStrip";
 import { filesPath, historyPath, sharingPath } from "@/components/sharing/ScenarioSharingIndex";
 import { EditorSequencerImport } from "@/components/uploads/EditorSequencerImport";
 import { SweepPanel } from "./SweepPanel";
 import { useAutosave } from "./useAutosave";
-import { useBudgetWorker } from "./useBudgetWorker";
 import { useUndoShortcuts } from "./useUndoShortcuts";
 
 export interface ScenarioEditorProps {
   projectId: string;
   scenarioId: string;
-  /** The page a scenario's editor lives at (where "keep mine as a new scenario" goes). */
+  /** The page a scenario's editor lives at (where "save my edits as a copy" goes). */
   editPath(projectId: string, scenarioId: string): string;
   /** Shown under the editor (the revision list), given the version the editor last loaded or saved. */
   footer?(version: number): ReactNode;
@@ -76,7 +76,6 @@ function EditorBody({
 }) {
   const store = useEditorStore();
   const { saveNow } = useAutosave(store, project.id, scenario.id);
-  useBudgetWorker(store);
   useUndoShortcuts(store);
   const version = useEditor((s) => s.save.baseVersion);
   return (
@@ -101,6 +100,7 @@ function EditorBody({
         </span>
       </nav>
       <EditorToolbar title={scenario.title} onRetrySave={saveNow} />
+      <NewerVersionBanner projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <DiagramPanel />
         <LabViewPanel />

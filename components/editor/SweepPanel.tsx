@@ -6,12 +6,11 @@
  * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
  */
 import { memo, useCallback, useEffect, useMemo, useState } from "react";
-import { createJobRunner, type SweepParameter } from "@/canvas/compute-client";
-import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
+import type { SweepParameter } from "@/canvas/compute-client";
+import { useEditor, useEditorObject, useEditorStore } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withRecombinationAndHold } from "@/canvas/kernels/document-edits";
 import { defaultSweepRange } from "@/canvas/kernels/sweep-range";
-import { spawnComputeWorker } from "@/canvas/worker/spawn";
 import { buttonStyles } from "@/components/ui/styles";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { withParameter } from "@/physics/sweeps";
@@ -25,12 +24,6 @@ import { usePanelValue } from "./usePacedDuringDrag";
 const POINTS = 41;
 /** A sweep quicker than this shows no progress bar. */
 const PROGRESS_AFTER_MS = 400;
-
-function useJobRunner() {
-  const runner = useMemo(() => createJobRunner(spawnComputeWorker), []);
-  useEffect(() => () => runner.dispose(), [runner]);
-  return runner;
-}
 
 function useShowAfter(active: boolean, ms: number): boolean {
   const [shown, setShown] = useState(false);
@@ -51,7 +44,7 @@ export function SweepPanel() {
 
 const SweepView = memo(function SweepView({ document, revision }: { document: ScenarioDocument; revision: number }) {
   const store = useEditorStore();
-  const runner = useJobRunner();
+  const runner = useEditorObject().jobs;
   const edit = useEdit();
   const readOnly = useEditor((s) => s.readOnly);
   const sweep = useEditor((s) => s.sweep);

@@ -3,30 +3,18 @@
 /**
  * The panels around the canvases (Budget, Protocol strip, handle fields, Sweep) follow a drag in the Lab view at a
  * reading pace rather than on every frame: while a handle is dragged they show what the editor holds at most every
- * DRAG_PACE_MS, all of them at the same instant (one render, one layout, one paint), and at once otherwise (a typed
+ * DRAG_PACE_MS (canvas/editor.ts), all of them at the same instant (one render, one layout, one paint), and at once otherwise (a typed
  * value, a key press, the end of the drag). Redrawing those tables and fields costs the page about as much per frame
  * as the two canvases; ten times a second is as fast as anyone reads a changing number (common practice for live
  * readouts), and it leaves each frame to the Diagram and the Lab view.
  */
 import { useDeferredValue, useState, useSyncExternalStore } from "react";
-import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
-import type { EditorStore } from "@/canvas/store/createEditorStore";
+import { useEditor, useEditorObject } from "@/canvas/EditorProvider";
 import type { EditorState } from "@/canvas/store/state";
-import { createPaceClock, type PaceClock } from "@/canvas/store/pace-clock";
-
-export const DRAG_PACE_MS = 100;
-
-const clocks = new WeakMap<EditorStore, PaceClock>();
-
-function paceClock(store: EditorStore): PaceClock {
-  let clock = clocks.get(store);
-  if (!clock) clocks.set(store, (clock = createPaceClock(store, DRAG_PACE_MS)));
-  return clock;
-}
 
 /** `value` itself, except during a drag: then the value it had at the editor's last pace tick. */
 export function usePacedDuringDrag<T>(value: T): T {
-  const clock = paceClock(useEditorStore());
+  const clock = useEditorObject().paceClock;
   const tick = useSyncExternalStore(clock.subscribe, clock.tick, clock.tick);
   const dragging = useEditor((s) => s.labTool.name === "dragging");
   const [held, setHeld] = useState({ tick, value });

@@ -19,7 +19,7 @@ export interface BudgetPictureOptions {
 const DARK_SWAPS: [string, string][] = [
   ["#1c2024", FIGURE_PALETTES.dark.ink],
   ["#4a5058", FIGURE_PALETTES.dark.inkSoft],
-  ["#7b818a", FIGURE_PALETTES.dark.inkFaint],
+  ["#666b73", FIGURE_PALETTES.dark.inkFaint],
   ["#d9d6cf", FIGURE_PALETTES.dark.rule],
   ["#b9b5ac", "#5b6168"],
   ["#fbfaf7", FIGURE_PALETTES.dark.paper],

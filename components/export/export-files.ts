@@ -3,16 +3,15 @@
  * scenario file (physics/scenario/exchange.ts) and the Budget as CSV (budget-csv.ts). Pure, no React: shared by
  * the route handlers; the Export menu writes the same files in the browser.
  */
-import { z } from "zod";
+import type { z } from "zod";
+import { exportQuerySchema } from "@/lib/contracts";
 import type { ScenarioResult } from "@/physics/result";
 import { SCENARIO_FILE_MEDIA_TYPE, scenarioFileText, toScenarioFile } from "@/physics/scenario/exchange";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { budgetCsv } from "./budget-csv";
 import { budgetFileName, scenarioFileNameFor } from "./file-names";
 
-export const exportQuerySchema = z.object({
-  what: z.enum(["scenario", "budget"], { error: 'what must be "scenario" (the scenario file) or "budget" (the Budget as CSV)' }),
-});
+export { exportQuerySchema };
 
 export type ExportKind = z.infer<typeof exportQuerySchema>["what"];
 

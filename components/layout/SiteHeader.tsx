@@ -25,6 +25,9 @@ export function SiteHeader({ user }: { user: HeaderUser | null }) {
         <Link href="/methods" className="text-ink-soft hover:text-ink">
           Methods
         </Link>
+        <Link href="/api-reference" className="text-ink-soft hover:text-ink">
+          API
+        </Link>
         {user?.siteRole === "admin" && (
           <Link href="/admin/users" className="text-ink-soft hover:text-ink">
             Users

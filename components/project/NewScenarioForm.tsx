@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useRouter } from "next/navigation";
 import { z } from "zod";
 import { useCreateScenario } from "@/components/api/scenarios";
 import { backgroundKinds, backgroundNames } from "@/components/format/words";
@@ -9,7 +9,6 @@ import { useApiForm } from "@/components/forms/useApiForm";
 import { newScenarioDocument } from "@/components/scenario/newScenarioDocument";
 import { backgroundSummary, labSummary } from "@/components/scenario/summary";
 import { SelectField, TextField } from "@/components/ui/Field";
-import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
 import { scenarioTitleSchema } from "@/lib/contracts";
 import { parseScenarioDocument, type BackgroundKind } from "@/physics/scenario/schema";
@@ -25,14 +24,14 @@ function startingHint(kind: BackgroundKind): string {
   return `Starts with: ${backgroundSummary(document.background)}; ${labSummary(document.lab)}.`;
 }
 
+/** Creates a scenario from the chosen background's starting values and opens it in the editor. */
 export function NewScenarioForm({ projectId }: { projectId: string }) {
   const create = useCreateScenario(projectId);
-  const [created, setCreated] = useState<string | null>(null);
+  const router = useRouter();
   const { form, problem, setProblem, submit } = useApiForm(newScenarioSchema, { defaultValues: { title: "", background: "minkowski" } });
   const { errors, isSubmitting } = form.formState;
 
   const onSubmit = submit(async ({ title, background }) => {
-    setCreated(null);
     // Read the starting document through the schema, so defaults of fields added later are filled in here too.
     const parsed = parseScenarioDocument(newScenarioDocument(background));
     if (!parsed.ok) {
@@ -40,8 +39,7 @@ export function NewScenarioForm({ projectId }: { projectId: string }) {
       return;
     }
     const scenario = await create.mutateAsync({ title, document: parsed.document });
-    form.reset({ title: "", background });
-    setCreated(scenario.title);
+    router.push(`/projects/${projectId}/scenarios/${scenario.id}`);
   });
 
   const background = form.watch("background");
@@ -50,7 +48,6 @@ export function NewScenarioForm({ projectId }: { projectId: string }) {
     <form onSubmit={onSubmit} noValidate className="mb-10 space-y-4 border-b border-rule pb-8">
       <h2 className="font-serif text-xl font-semibold">Add a scenario</h2>
       <FormProblem problem={problem} />
-      {created && <Notice tone="success">Created “{created}”.</Notice>}
       <div className="flex flex-wrap items-start gap-4">
         <TextField label="Title" autoComplete="off" className="min-w-64 flex-1" error={errors.title?.message} {...form.register("title")} />
         <SelectField

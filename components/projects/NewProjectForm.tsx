@@ -1,33 +1,29 @@
 "use client";
 
-import { useState } from "react";
+import { useRouter } from "next/navigation";
 import { useCreateProject } from "@/components/api/projects";
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextAreaField, TextField } from "@/components/ui/Field";
-import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
 import { projectCreateSchema } from "@/lib/contracts";
 
-/** Creates a project; it then heads the table beside the form. */
+/** Creates a project and opens it. */
 export function NewProjectForm() {
   const create = useCreateProject();
-  const [created, setCreated] = useState<string | null>(null);
+  const router = useRouter();
   const { form, problem, submit } = useApiForm(projectCreateSchema, { defaultValues: { name: "", description: "" } });
   const { errors, isSubmitting } = form.formState;
 
   const onSubmit = submit(async ({ name, description }) => {
-    setCreated(null);
     const project = await create.mutateAsync({ name, description: description || undefined });
-    form.reset({ name: "", description: "" });
-    setCreated(project.name);
+    router.push(`/projects/${project.id}`);
   });
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <h2 className="font-serif text-xl font-semibold">New project</h2>
       <FormProblem problem={problem} />
-      {created && <Notice tone="success">Created “{created}”. Open it from the list.</Notice>}
       <TextField label="Project name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
       <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register("description")} />
       <button type="submit" disabled={isSubmitting} className={buttonStyles.primary}>

@@ -33,8 +33,3 @@ export interface SeparationHistory {
   /** Interpolation of a sampled profile, else null. */
   interpolation: string | null;
 }
-
-/** σ on a plateau: the fraction a window ends at (windows are continuous at their ends unless a jump is reported). */
-export function plateauFractionAfter(window: MotionWindow): number {
-  return window.fraction(1);
-}

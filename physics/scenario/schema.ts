@@ -135,10 +135,6 @@ export function parseScenarioDocument(input: unknown): ParseResult {
   return { ok: false, issues: parsed.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })) };
 }
 
-export function backgroundKindOf(document: ScenarioDocument): BackgroundKind {
-  return document.background.kind;
-}
-
 /** A sensible new scenario: a charged microparticle split by 1 µm in flat spacetime. */
 export function defaultScenarioDocument(): ScenarioDocument {
   return {

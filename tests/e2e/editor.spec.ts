@@ -89,13 +89,36 @@ test("a save that meets someone else's newer version asks what to do, and keepin
   const dialog = owner.getByRole("dialog", { name: "Someone else saved this scenario" });
   await expect(dialog).toBeVisible();
   await expect(owner.getByTestId("save-state")).toContainText("Not saved");
+  const box = (await dialog.boundingBox())!;
+  const viewport = owner.viewportSize()!;
+  expect(Math.abs(box.x + box.width / 2 - viewport.width / 2)).toBeLessThan(2);
+  expect(Math.abs(box.y + box.height / 2 - viewport.height / 2)).toBeLessThan(2);
 
-  await dialog.getByRole("button", { name: "Keep mine as a new scenario" }).click();
+  await dialog.getByRole("button", { name: "Save my edits as a copy" }).click();
   await expect(owner).not.toHaveURL(new RegExp(scenario.id));
   await expect(owner.getByTestId("duration-hold")).toHaveValue("2.500 s");
   const theirs = (await (await owner.request.get(`/api/projects/${project.id}/scenarios/${scenario.id}`)).json()).scenario;
   expect(theirs.title).toBe("Shared lab, renamed");
   expect(theirs.document.protocol.hold.durationSeconds).toBe(1);
+});
+
+test("a newer version saved elsewhere is announced before any save meets it, and loading it shows its values", async ({ browser }) => {
+  const { owner, project, scenario } = await ownerWithScenario(browser, "Newer", "Newer versions", "Watched lab");
+  await owner.goto(editorPath(project.id, scenario.id));
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version}`);
+  await expect(owner.getByTestId("newer-version")).toHaveCount(0);
+
+  const base = blackHoleScenario();
+  const document = { ...base, protocol: { ...base.protocol, hold: { durationSeconds: 3 } } };
+  const elsewhere = await owner.request.put(`/api/projects/${project.id}/scenarios/${scenario.id}`, { data: { version: scenario.version, document } });
+  expect(elsewhere.status()).toBe(200);
+
+  const banner = owner.getByTestId("newer-version");
+  await expect(banner).toContainText(`Version ${scenario.version + 1} was saved`, { timeout: 25_000 });
+  await banner.getByRole("button", { name: "Load the newer version" }).click();
+  await expect(owner.getByTestId("duration-hold")).toHaveValue("3.000 s");
+  await expect(banner).toHaveCount(0);
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 1}`);
 });
 
 test("the keyboard walks the Lab view's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
@@ -170,4 +193,20 @@ test("a sweep of the recombination time marks the scenario's value, follows a dr
   await expect(owner.getByRole("button", { name: "Undo Set recombination time from the sweep" })).toBeVisible();
   await owner.getByRole("button", { name: /^Undo/ }).click();
   await expect(recombination).toHaveValue(before);
+});
+
+test("the lab's mass is typed with its unit, saved, and cleared by emptying the field", async ({ browser }) => {
+  const { owner, project, scenario } = await ownerWithScenario(browser, "Recoil", "Recoil", "Light lab");
+  await owner.goto(editorPath(project.id, scenario.id));
+  const labMass = owner.getByTestId("lab-mass");
+  await expect(labMass).toHaveValue("");
+  await labMass.fill("2.5 g");
+  await labMass.press("Enter");
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 1}`);
+  const stored = async () => (await (await owner.request.get(`/api/projects/${project.id}/scenarios/${scenario.id}`)).json()).scenario.document.source.labMassKg;
+  expect(await stored()).toBeCloseTo(2.5e-3, 12);
+  await labMass.fill("");
+  await labMass.press("Enter");
+  await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 2}`);
+  expect(await stored()).toBeNull();
 });

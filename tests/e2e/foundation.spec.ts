@@ -17,12 +17,14 @@ test("a new researcher signs up, creates a project and a scenario, renames it, a
 
   await page.getByLabel("Project name").fill("Interferometer budget");
   await page.getByRole("button", { name: "Create project" }).click();
-  await page.getByRole("link", { name: "Interferometer budget" }).click();
   await expect(page).toHaveURL(/\/projects\/[0-9a-f-]{36}$/);
+  await expect(page.getByRole("heading", { name: "Interferometer budget" })).toBeVisible();
   const projectUrl = page.url();
 
   await page.getByLabel("Title").fill("Slow recombination");
   await page.getByRole("button", { name: "New scenario" }).click();
+  await expect(page).toHaveURL(/\/scenarios\/[0-9a-f-]{36}$/);
+  await page.goto(projectUrl);
   const table = page.getByRole("table");
   await expect(table.getByRole("link", { name: "Slow recombination" })).toBeVisible();
 
@@ -31,8 +33,12 @@ test("a new researcher signs up, creates a project and a scenario, renames it, a
   await page.getByLabel("New title").press("Enter");
   await expect(table.getByRole("link", { name: "Slower recombination" })).toBeVisible();
 
+  expect((await page.request.get(`${projectUrl}/scenarios/00000000-0000-4000-8000-000000000000`)).status()).toBe(404);
   await page.getByRole("button", { name: "Sign out" }).click();
   await expect(page.getByRole("link", { name: "Sign in" })).toBeVisible();
+  const signedOut = await page.request.get(`${projectUrl}/members`, { maxRedirects: 0 });
+  expect(signedOut.status()).toBe(307);
+  expect(signedOut.headers()["location"]).toContain(`/sign-in?callbackUrl=${encodeURIComponent(new URL(`${projectUrl}/members`).pathname)}`);
   await page.goto(projectUrl);
   await expect(page).toHaveURL(/\/sign-in\?callbackUrl=/);
 
@@ -40,7 +46,7 @@ test("a new researcher signs up, creates a project and a scenario, renames it, a
   const other = await browser.newContext();
   const otherPage = await other.newPage();
   await signUp(otherPage, "Second Researcher", `second-${stamp}@example.test`);
-  await otherPage.goto(projectUrl);
+  expect((await otherPage.goto(projectUrl))?.status()).toBe(404);
   await expect(otherPage.getByText(/not found/i).first()).toBeVisible();
   await expect(otherPage.getByText("Interferometer budget")).toHaveCount(0);
   const api = await otherPage.request.get(projectUrl.replace("/projects/", "/api/projects/"));

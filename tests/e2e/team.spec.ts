@@ -43,13 +43,13 @@ test("an owner invites a viewer by e-mail, who signs up from the link and may lo
   await hydrated(page);
   await page.getByLabel("Project name").fill("Referee copy");
   await page.getByRole("button", { name: "Create project" }).click();
-  await page.getByRole("link", { name: "Referee copy" }).click();
   await expect(page).toHaveURL(/\/projects\/[0-9a-f-]{36}$/, slow);
   const projectUrl = page.url();
   await hydrated(page);
   await page.getByLabel("Title").fill("Slow recombination");
   await page.getByRole("button", { name: "New scenario" }).click();
-  await expect(page.getByRole("table").getByRole("link", { name: "Slow recombination" })).toBeVisible(slow);
+  await expect(page).toHaveURL(/\/scenarios\/[0-9a-f-]{36}$/, slow);
+  await expect(page.getByRole("heading", { name: "Slow recombination" })).toBeVisible(slow);
 
   // The invitation goes out through the fake SMTP server.
   await page.goto(`${projectUrl}/members`);
@@ -68,6 +68,7 @@ test("an owner invites a viewer by e-mail, who signs up from the link and may lo
   await expect(viewer.getByRole("heading", { name: "Join “Referee copy”" })).toBeVisible(slow);
   await viewer.getByRole("link", { name: "Create an account" }).click();
   await expect(viewer).toHaveURL(/\/sign-up\?callbackUrl=/, slow);
+  await expect(viewer.getByLabel("E-mail")).toHaveValue(viewerEmail);
   await fillSignUp(viewer, "Invited Referee", viewerEmail);
   await expect(viewer).toHaveURL(/\/invitations\//, slow);
   await hydrated(viewer);

@@ -188,3 +188,34 @@ describe("scenarios", () => {
     expect(gone.status).toBe(404);
   });
 });
+
+describe("a change of the figures' look only", () => {
+  let f: ProjectFixture;
+  const S = () => ({ projectId: f.projectId, scenarioId: f.scenarioId });
+  const put = (as: typeof f.users.owner, version: number, document: unknown) => call(scenarioRoute.PUT, "PUT", "/x", { as, params: S(), body: { version, document } });
+  beforeAll(async () => {
+    f = await projectFixture();
+  });
+
+  it("amends the saver's own latest version instead of starting a new one, however often it is toggled", async () => {
+    const physics = { ...defaultScenarioDocument(), separation: { ...defaultScenarioDocument().separation, distanceMetres: 2e-6 } };
+    expect((await put(f.users.owner, 1, physics)).body.scenario.version).toBe(2);
+    for (const theme of ["dark", "light", "dark"] as const) {
+      const toggled = await put(f.users.owner, 2, { ...physics, display: { theme, showGrid: false } });
+      expect(toggled.status).toBe(200);
+      expect(toggled.body.scenario.version).toBe(2);
+    }
+    const list = await call(revisionsRoute.GET, "GET", "/x", { as: f.users.viewer, params: S() });
+    expect(list.body.revisions.map((r: { version: number }) => r.version)).toEqual([2, 1]);
+    const stored = await call(revisionRoute.GET, "GET", "/x", { as: f.users.viewer, params: { ...S(), version: "2" } });
+    expect(stored.body.revision.document.display).toEqual({ theme: "dark", showGrid: false });
+  });
+
+  it("starts a new version when someone else toggles it, or when anything else changes with it", async () => {
+    const current = (await call(scenarioRoute.GET, "GET", "/x", { as: f.users.owner, params: S() })).body.scenario;
+    const byEditor = await put(f.users.editor, current.version, { ...current.document, display: { theme: "light", showGrid: true } });
+    expect(byEditor.body.scenario.version).toBe(current.version + 1);
+    const both = { ...current.document, display: { theme: "dark", showGrid: true }, separation: { ...current.document.separation, distanceMetres: 3e-6 } };
+    expect((await put(f.users.editor, current.version + 1, both)).body.scenario.version).toBe(current.version + 2);
+  });
+});

@@ -42,7 +42,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       {!user && (
         <div className="space-y-3">
           <p className="text-sm text-ink-soft">Create an account with {invitation.email}, or sign in with it, to accept.</p>
-          <Link href={`/sign-up?callbackUrl=${encodeURIComponent(here)}`} className={`${buttonStyles.primary} w-full`}>
+          <Link href={`/sign-up?callbackUrl=${encodeURIComponent(here)}&email=${encodeURIComponent(invitation.email)}`} className={`${buttonStyles.primary} w-full`}>
             Create an account
           </Link>
           <Link href={signInPath(here)} className={`${buttonStyles.secondary} w-full`}>

@@ -1,6 +1,6 @@
 /**
  * Drag-handle tool, dragging: every move asks the drag kernel for a plan from the document at pointer-down and
- * previews it; release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
+ * shows it with the tool's new state in one store update (subscribers never see one without the other); release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
  * Tab is held back while dragging, so focus stays in the Lab view.
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
@@ -12,8 +12,7 @@ type Dragging = Extract<LabToolState, { name: "dragging" }>;
 
 function follow(ctx: ToolContext, state: Dragging, event: LabPointerEvent): void {
   const plan = planHandleDrag(state.start, event, { snap: event.shiftKey });
-  ctx.get().preview((mark) => withProtocolPlan(mark, plan));
-  ctx.transition({ ...state, plan });
+  ctx.get().dragTo((mark) => withProtocolPlan(mark, plan), { ...state, plan });
 }
 
 function stop(ctx: ToolContext, outcome: "commit" | "cancel"): void {

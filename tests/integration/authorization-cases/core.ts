@@ -4,6 +4,7 @@ import { type Case, everyone, holderToo, I, nextUnique, owners, P, R1, readers, 
 
 export const coreCases: Case[] = [
   { file: "compute/route.ts", method: "POST", path: () => "/api/compute", body: () => defaultScenarioDocument(), expected: everyone(200) },
+  { file: "openapi.json/route.ts", method: "GET", path: () => "/api/openapi.json", expected: everyone(200) },
   { file: "users/route.ts", method: "POST", path: () => "/api/users", body: () => ({ email: `new-${nextUnique()}@example.test`, name: "New Person", password: "a long enough password" }), expected: everyone(201) },
   { file: "password-reset/route.ts", method: "POST", path: () => "/api/password-reset", body: () => ({ email: "nobody@example.test" }), expected: everyone(202) },
   { file: "password-reset/confirm/route.ts", method: "POST", path: () => "/api/password-reset/confirm", body: () => ({ token: "not-a-real-token-at-all", password: "a long enough password" }), expected: everyone(422) },

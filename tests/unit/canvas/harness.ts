@@ -16,8 +16,9 @@ export interface Harness {
   key(key: string, shiftKey?: boolean): boolean;
 }
 
-export function createHarness(options: { document?: ScenarioDocument; readOnly?: boolean } = {}): Harness {
-  const store = createEditorStore({ document: options.document ?? defaultScenarioDocument(), version: 1, readOnly: options.readOnly ?? false });
+/** A harness around a new store, or around the store of an editor object (`store`). */
+export function createHarness(options: { document?: ScenarioDocument; readOnly?: boolean; store?: EditorStore } = {}): Harness {
+  const store = options.store ?? createEditorStore({ document: options.document ?? defaultScenarioDocument(), version: 1, readOnly: options.readOnly ?? false });
   store.getState().setLabViewSize({ width: 800, height: 320 });
   const state = () => store.getState();
   const placement = (handle: HandleId) => {

@@ -50,3 +50,47 @@ describe("physical constants against mathjs 15.2.0 (CODATA 2018 values)", () => 
     for (const measured of [k.gravitationalConstant, k.vacuumPermittivity, k.electronMass]) expect(measured.uncertainty).toBeGreaterThan(0);
   });
 });
+
+/*
+ * Every constant record, the way an astronomy library checks its constants module: a name, a unit mathjs can read
+ * with the dimension of the same constant in mathjs's own table, a reference, exact values exact, and the list of
+ * all constants complete.
+ */
+const records = Object.values(k).filter(
+  (value): value is k.PhysicalConstant => typeof value === "object" && value !== null && "symbol" in value && "reference" in value,
+);
+
+const mathjsTwin: Partial<Record<string, keyof typeof math>> = {
+  c: "speedOfLight", h: "planckConstant", "ħ": "reducedPlanckConstant", e: "elementaryCharge", k_B: "boltzmann",
+  "ε0": "electricConstant", "μ0": "magneticConstant", G: "gravitationConstant", m_u: "atomicMass", m_e: "electronMass",
+};
+
+describe("every constant record", () => {
+  it("is listed in allConstants, and allConstants lists nothing else", () => {
+    expect(new Set(records)).toEqual(new Set(k.allConstants));
+  });
+
+  it.each(records.map((r) => [r.symbol, r] as const))("%s has a name, a reference and a unit mathjs reads", (_symbol, record) => {
+    expect(record.name.length).toBeGreaterThan(3);
+    expect(record.reference).toMatch(/CODATA 2018|IAU 2015/);
+    expect(() => math.evaluate(`1 ${record.unit}`)).not.toThrow();
+    expect(Number.isFinite(record.value) && record.value > 0).toBe(true);
+    expect(record.uncertainty).toBeGreaterThanOrEqual(0);
+    expect(record.uncertainty).toBeLessThan(record.value * 1e-3);
+  });
+
+  it.each(records.filter((r) => mathjsTwin[r.symbol]).map((r) => [r.symbol, r] as const))(
+    "%s has the dimension of mathjs's constant of the same name",
+    (symbol, record) => {
+      const twin = math[mathjsTwin[symbol]!] as unknown as { equalBase(other: unknown): boolean };
+      expect(twin.equalBase(math.evaluate(`1 ${record.unit}`))).toBe(true);
+    },
+  );
+
+  it("a value marked exact has zero uncertainty, and a value with zero uncertainty is exact or derived from exact ones", () => {
+    for (const record of records) {
+      if (/\(exact/.test(record.reference)) expect(record.uncertainty).toBe(0);
+      if (record.uncertainty === 0) expect(record.reference).toMatch(/exact|derived: h \/ 2π/);
+    }
+  });
+});

@@ -1,5 +1,0 @@
-import { RouteLoading } from "@/components/ui/RouteLoading";
-
-export default function Loading() {
-  return <RouteLoading />;
-}

@@ -10,6 +10,7 @@ import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { bothChannels } from "@/canvas/kernels/budget/both-channels";
 import { budgetIsStale } from "@/canvas/store/selectors";
+import { BudgetPictureMenu } from "@/components/export/BudgetPictureMenu";
 import type { BudgetState } from "@/canvas/store/state";
 import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
 import { EstimateComparison } from "./EstimateComparison";
@@ -78,14 +79,15 @@ function Flags({ flags }: { flags: ValidityFlag[] }) {
   );
 }
 
-export function BudgetPanel() {
+/** `title`: the scenario's, for the name of the Budget's picture (the "Picture" menu shows only with it). */
+export function BudgetPanel({ title }: { title?: string }) {
   // Both on the same pace tick: a settled Budget always shows the latest result and its true state.
   const budget = usePanelValue((s) => s.budget);
   const stale = usePanelValue((s) => budgetIsStale(s) || s.budget.status === "computing");
-  return <BudgetView budget={budget} stale={stale} />;
+  return <BudgetView budget={budget} stale={stale} title={title} />;
 }
 
-const BudgetView = memo(function BudgetView({ budget, stale }: { budget: BudgetState; stale: boolean }) {
+const BudgetView = memo(function BudgetView({ budget, stale, title }: { budget: BudgetState; stale: boolean; title?: string }) {
   const result = budget.result;
   const failedNow = budget.status === "failed";
   const channels = result ? [result.electromagnetic, result.gravitational] : [];
@@ -96,8 +98,11 @@ const BudgetView = memo(function BudgetView({ budget, stale }: { budget: BudgetS
         <h2 id="budget-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
           Budget
         </h2>
-        <span role="status" aria-live="polite" className="text-xs text-ink-faint">
-          {stale ? "Updating… (numbers below are for the previous state)" : failedNow ? "" : result ? "Up to date" : ""}
+        <span className="flex items-baseline gap-3">
+          <span role="status" aria-live="polite" className="text-xs text-ink-faint">
+            {stale ? "Updating… (numbers below are for the previous state)" : failedNow ? "" : result ? "Up to date" : ""}
+          </span>
+          {title !== undefined && result && <BudgetPictureMenu title={title} />}
         </span>
       </div>
       {failedNow && (

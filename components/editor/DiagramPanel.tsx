@@ -3,6 +3,7 @@
 import dynamic from "next/dynamic";
 import { useEditor } from "@/canvas/EditorProvider";
 import { useReportDiagramSize } from "@/components/export/diagram-size";
+import { DIAGRAM_MIN_HEIGHT, diagramHeightFor } from "@/components/export/figure-size";
 import { BranchLegend } from "./BranchLegend";
 import { useElementSize } from "./useElementSize";
 
@@ -10,10 +11,6 @@ const DiagramStage = dynamic(() => import("@/canvas/layers/DiagramStage"), {
   ssr: false,
   loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the diagram…</p>,
 });
-
-/** The Diagram's height follows its shape (tall for Minkowski, wide for Schwarzschild), within these bounds. */
-const MIN_HEIGHT = 320;
-const MAX_HEIGHT = 540;
 
 /** Notes under the figure: what is exaggerated or rescaled (from the same scene the stage draws). */
 function DiagramNotes() {
@@ -37,13 +34,11 @@ function useDiagramHeight(width: number): number {
     const outcome = s.diagramScene(s.document);
     return outcome.ok ? outcome.scene.bounds : null;
   });
-  if (!bounds) return MIN_HEIGHT;
-  const aspect = (bounds.maxT - bounds.minT) / (bounds.maxX - bounds.minX);
-  return Math.round(Math.min(MAX_HEIGHT, Math.max(MIN_HEIGHT, (width - 80) * aspect + 80)));
+  return diagramHeightFor(bounds, width);
 }
 
 export function DiagramPanel() {
-  const [ref, size] = useElementSize<HTMLDivElement>({ width: 480, height: MIN_HEIGHT });
+  const [ref, size] = useElementSize<HTMLDivElement>({ width: 480, height: DIAGRAM_MIN_HEIGHT });
   const height = useDiagramHeight(size.width);
   useReportDiagramSize({ width: size.width, height });
   return (

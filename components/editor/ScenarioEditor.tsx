@@ -112,7 +112,7 @@ function EditorBody({
       <div className="grid gap-6 lg:grid-cols-[minmax(0,4fr)_minmax(0,8fr)]">
         <ParametersPanel />
         <div className="space-y-8">
-          <BudgetPanel />
+          <BudgetPanel title={scenario.title} />
           <SweepPanel />
         </div>
       </div>

@@ -1,13 +1,17 @@
 /**
  * The Budget as a CSV file (RFC 4180: comma-separated, CRLF line ends, fields quoted where they hold a comma, a
- * quote or a line break, quotes doubled): one row per number the Budget shows, with its unit as the result spells
- * it ("1" for a count), the formula it comes from, and the validity flags the computation raised.
+ * quote or a line break, quotes doubled), in three parts: the scenario's inputs, one "# key: value unit" comment
+ * line each (so the numbers can be reproduced from the file alone); one row per number the Budget shows, with its
+ * unit as the result spells it ("1" for a count) and the formula it comes from; then, after an empty line, every
+ * validity flag once, with its status and words.
  */
 import Papa from "papaparse";
 import { sources, type SourceKey } from "@/physics/estimators/sources";
 import type { ChannelResult, Quantity, ScenarioResult } from "@/physics/result";
+import type { ScenarioDocument } from "@/physics/scenario/schema";
 
-export const BUDGET_CSV_HEADER = ["quantity", "value", "unit", "source", "flags"] as const;
+export const BUDGET_CSV_HEADER = ["quantity", "value", "unit", "source"] as const;
+export const FLAGS_CSV_HEADER = ["flag", "status", "message"] as const;
 
 const CSV_OPTIONS = { newline: "\r\n", quotes: false } as const;
 
@@ -49,17 +53,51 @@ function sourceText(key: SourceKey): string {
   return entry ? `${entry.title} [${key}]` : key;
 }
 
-/** The validity flags that were raised (not "ok", not "not applicable"), as "status code: message". */
-function raisedFlags(result: ScenarioResult): string {
-  return result.flags
-    .filter((f) => f.status === "note" || f.status === "caution" || f.status === "invalid")
-    .map((f) => `${f.status} ${f.code}: ${f.message}`)
-    .join("; ");
+/** Units of the document's fields, read from the SI suffix of their names (schema: physics/scenario/schema.ts). */
+const UNIT_SUFFIXES: [RegExp, string][] = [
+  [/MetresPerSecondSquared$/, "m s^-2"],
+  [/PerSecond$/, "s^-1"],
+  [/Metres$/, "m"],
+  [/Seconds$/, "s"],
+  [/Kg$/, "kg"],
+  [/Coulombs$/, "C"],
+];
+
+function unitOf(key: string): string | null {
+  return UNIT_SUFFIXES.find(([suffix]) => suffix.test(key))?.[1] ?? null;
+}
+
+const oneLine = (text: string) => text.replace(/[\r\n]+/g, " ");
+
+/**
+ * The document as "# path: value unit" lines, depth first in the document's own order. A sampled profile is named
+ * by its size, not listed (it may hold a million samples; the scenario file carries them).
+ */
+export function budgetInputLines(document: ScenarioDocument): string[] {
+  const lines: string[] = [];
+  const walk = (value: unknown, path: string) => {
+    if (path === "protocol.samples" && Array.isArray(value)) {
+      lines.push(`# ${path}: ${value.length} samples (timeSeconds s, separationMetres m; listed in the scenario file)`);
+      return;
+    }
+    if (value !== null && typeof value === "object") {
+      for (const [key, inner] of Object.entries(value)) walk(inner, path ? `${path}.${key}` : key);
+      return;
+    }
+    const unit = typeof value === "number" ? unitOf(path) : null;
+    lines.push(`# ${path}: ${value === null ? "null" : oneLine(String(value))}${unit ? ` ${unit}` : ""}`);
+  };
+  walk(document, "");
+  return lines;
+}
+
+/** Every validity flag once: code, status (ok, note, caution, invalid, not-applicable) and words. */
+export function budgetFlagRows(result: ScenarioResult): string[][] {
+  return result.flags.map((f) => [f.code, f.status, oneLine(f.message)]);
 }
 
 export function budgetCsvRows(result: ScenarioResult): string[][] {
-  const flags = raisedFlags(result);
-  const row = (words: string, q: Quantity | null): string[] | null => (q ? [words, csvValue(q), q.unit, sourceText(q.sourceKey), flags] : null);
+  const row = (words: string, q: Quantity | null): string[] | null => (q ? [words, csvValue(q), q.unit, sourceText(q.sourceKey)] : null);
   const rows: (string[] | null)[] = [];
   for (const channel of [result.electromagnetic, result.gravitational]) {
     const name = CHANNEL_WORDS[channel.channel];
@@ -76,6 +114,7 @@ export function budgetCsvRows(result: ScenarioResult): string[][] {
   return rows.filter((r): r is string[] => r !== null);
 }
 
-export function budgetCsv(result: ScenarioResult): string {
-  return csvText([[...BUDGET_CSV_HEADER], ...budgetCsvRows(result)]);
+export function budgetCsv(result: ScenarioResult, document: ScenarioDocument): string {
+  const inputs = budgetInputLines(document).map((line) => `${line}\r\n`).join("");
+  return `${inputs}${csvText([[...BUDGET_CSV_HEADER], ...budgetCsvRows(result)])}\r\n${csvText([[...FLAGS_CSV_HEADER], ...budgetFlagRows(result)])}`;
 }

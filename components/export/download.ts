@@ -20,3 +20,9 @@ export function downloadText(fileName: string, text: string, mediaType: string):
 export function downloadDataUrl(fileName: string, dataUrl: string): void {
   clickLink(dataUrl, fileName);
 }
+
+export function downloadBytes(fileName: string, bytes: Uint8Array, mediaType: string): void {
+  const url = URL.createObjectURL(new Blob([bytes as BlobPart], { type: mediaType }));
+  clickLink(url, fileName);
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}

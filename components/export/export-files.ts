@@ -25,8 +25,8 @@ export function scenarioExport(scenario: { title: string; document: ScenarioDocu
   return { fileName: scenarioFileNameFor(scenario.title), mediaType: SCENARIO_FILE_MEDIA_TYPE, text: scenarioFileText(toScenarioFile(scenario, now)) };
 }
 
-export function budgetExport(title: string, result: ScenarioResult): ExportFile {
-  return { fileName: budgetFileName(title), mediaType: "text/csv", text: budgetCsv(result) };
+export function budgetExport(title: string, result: ScenarioResult, document: ScenarioDocument): ExportFile {
+  return { fileName: budgetFileName(title), mediaType: "text/csv", text: budgetCsv(result, document) };
 }
 
 /** The file as a download (the name is ASCII letters, digits and dashes: safe in the header as it is). */

@@ -51,7 +51,7 @@ export function SharedFigures({
           </div>
           <ProtocolStrip />
           <div className="max-w-3xl">
-            <BudgetPanel />
+            <BudgetPanel title={title} />
           </div>
         </div>
       </DiagramSizeProvider>

@@ -55,7 +55,7 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
 
   // Export the SVG through the menu; the downloaded file parses as XML and names both branches.
   await outsider.getByRole("button", { name: "Export ▾" }).click();
-  const [svgDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download SVG" }).click()]);
+  const [svgDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download Diagram SVG" }).click()]);
   expect(svgDownload.suggestedFilename()).toBe("hovering-lab-diagram.svg");
   const svgText = await readFile((await svgDownload.path())!, "utf8");
   const parsed = await outsider.evaluate((text) => {
@@ -67,6 +67,9 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
       branchA: path("branch-a"),
       branchB: path("branch-b"),
       labels: [...doc.querySelectorAll("g#labels text")].map((t) => t.textContent),
+      legend: [...doc.querySelectorAll("g#legend text")].map((t) => t.textContent),
+      caption: [...doc.querySelectorAll("g#caption text")].map((t) => t.textContent).join(" "),
+      fontFaces: (doc.querySelector("style")?.textContent ?? "").match(/@font-face/g)?.length ?? 0,
     };
   }, svgText);
   expect(parsed.error).toBeNull();
@@ -74,16 +77,33 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   expect(parsed.branchA).toMatch(/^M[\d.]+ [\d.]+ L/);
   expect(parsed.branchB).toMatch(/^M[\d.]+ [\d.]+ L/);
   expect(parsed.labels).toEqual(expect.arrayContaining(["H⁺", "ℐ⁺"]));
+  // It stands alone: a legend, a caption line in SI with units, and the fonts it uses carried inside.
+  expect(parsed.legend).toEqual(expect.arrayContaining(["branch A (solid)", "branch B (dashed)"]));
+  expect(parsed.caption).toMatch(/^Schwarzschild, M = .* kg .*lab at r = .* km.*separation d = .*protocol: separation/);
+  expect(parsed.fontFaces).toBe(3);
 
-  // A PNG at 2× is twice the stage in each direction (read from the file's IHDR chunk, PNG spec §11.2.2).
+  // The vector PDF of the same figure.
+  const [pdfDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download Diagram PDF" }).click()]);
+  expect(pdfDownload.suggestedFilename()).toBe("hovering-lab-diagram.pdf");
+  const pdf = await readFile((await pdfDownload.path())!);
+  expect(pdf.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+
+  // Without legend and caption, a PNG at 2× is twice the stage in each direction (read from the file's IHDR chunk,
+  // PNG spec §11.2.2); with them it is as wide and taller.
   await outsider.getByLabel("2×").check();
-  const [pngDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download PNG" }).click()]);
+  const [withBand] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download Diagram PNG" }).click()]);
+  const banded = await readFile((await withBand.path())!);
+  await outsider.getByLabel("Legend").uncheck();
+  await outsider.getByLabel("Caption").uncheck();
+  const [pngDownload] = await Promise.all([outsider.waitForEvent("download"), outsider.getByRole("button", { name: "Download Diagram PNG" }).click()]);
   expect(pngDownload.suggestedFilename()).toBe("hovering-lab-diagram-2x.png");
   const png = await readFile((await pngDownload.path())!);
   expect(png.subarray(1, 4).toString("ascii")).toBe("PNG");
   const stage = (await diagram.boundingBox())!;
   expect(png.readUInt32BE(16)).toBe(2 * Math.round(stage.width));
   expect(png.readUInt32BE(20)).toBe(2 * Math.round(stage.height));
+  expect(banded.readUInt32BE(16)).toBe(2 * Math.round(stage.width));
+  expect(banded.readUInt32BE(20)).toBeGreaterThan(2 * Math.round(stage.height) + 100);
 
   // The embed answers any origin's frame, and draws inside a page of another site.
   const embedAnswer = await outsider.request.get(`/embed/${token}`);
@@ -150,9 +170,47 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
   expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");
   const lines = (await readFile((await csv.path())!, "utf8")).split("\r\n");
-  expect(lines[0]).toBe("quantity,value,unit,source,flags");
+  // The scenario's inputs come first, then the numbers, then the flags once each.
+  expect(lines[0]).toBe("# schemaVersion: 1");
+  expect(lines).toContain("# background.kind: schwarzschild");
+  expect(lines).toContain("quantity,value,unit,source");
+  expect(lines).toContain("flag,status,message");
   const horizon = lines.find((l) => l.startsWith("Quanta into the horizon (electromagnetic),"))!;
   const shown = Number(await owner.getByTestId("budget-electromagnetic-horizon").getAttribute("data-value"));
   expect(Number(horizon.split(",")[1])).toBe(shown);
+
+  // The Budget as a picture for a slide: a PNG at 2× (the table's width twice over, and more than a blank image
+  // weighs) and an SVG, light or dark, with the caption line.
+  await owner.keyboard.press("Escape");
+  const table = (await owner.getByTestId("budget").locator("table").first().boundingBox())!;
+  await owner.getByRole("button", { name: "Picture ▾" }).click();
+  const picture = owner.getByRole("group", { name: "Budget picture" });
+  await picture.getByLabel("dark").check();
+  const [budgetPng] = await Promise.all([owner.waitForEvent("download"), picture.getByRole("button", { name: "Budget PNG" }).click()]);
+  expect(budgetPng.suggestedFilename()).toBe("hovering-lab-budget.png");
+  const budgetPngBytes = await readFile((await budgetPng.path())!);
+  expect(budgetPngBytes.subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
+  expect(budgetPngBytes.readUInt32BE(16)).toBeGreaterThanOrEqual(2 * Math.floor(table.width));
+  // Drawn, not blank: thousands of pixels differ from the ground.
+  const inked = await owner.evaluate(async (base64) => {
+    const image = new Image();
+    image.src = `data:image/png;base64,${base64}`;
+    await image.decode();
+    const canvas = document.createElement("canvas");
+    [canvas.width, canvas.height] = [image.width, image.height];
+    canvas.getContext("2d")!.drawImage(image, 0, 0);
+    const { data } = canvas.getContext("2d")!.getImageData(0, 0, canvas.width, canvas.height);
+    let count = 0;
+    for (let i = 0; i < data.length; i += 4) if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) count++;
+    return count;
+  }, budgetPngBytes.toString("base64"));
+  expect(inked).toBeGreaterThan(5_000);
+  const [budgetSvg] = await Promise.all([owner.waitForEvent("download"), picture.getByRole("button", { name: "Budget SVG" }).click()]);
+  expect(budgetSvg.suggestedFilename()).toBe("hovering-lab-budget.svg");
+  const svgFile = await readFile((await budgetSvg.path())!, "utf8");
+  expect(svgFile).toMatch(/^<svg /);
+  expect(svgFile).toContain("Quanta into the horizon");
+  expect(svgFile).toContain("Schwarzschild, M = ");
+  expect(svgFile.length).toBeGreaterThan(5_000);
   await owner.context().close();
 });

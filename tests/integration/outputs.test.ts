@@ -43,7 +43,11 @@ describe("exporting a scenario from its project", () => {
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
     expect(res.headers.get("content-disposition")).toBe('attachment; filename="fixture-scenario-budget.csv"');
     const lines = res.body.split("\r\n");
-    expect(lines[0]).toBe("quantity,value,unit,source,flags");
+    // The inputs first, as "# key: value unit" lines, then the numbers.
+    expect(lines[0]).toBe("# schemaVersion: 1");
+    expect(lines).toContain(`# separation.distanceMetres: ${defaultScenarioDocument().separation.distanceMetres} m`);
+    expect(lines).toContain("quantity,value,unit,source");
+    expect(lines).toContain("flag,status,message");
     const total = lines.find((l) => l.startsWith("Total quanta <N> (electromagnetic),"))!;
     expect(Number(total.split(",")[1])).toBe(computeScenario(defaultScenarioDocument()).electromagnetic.totalQuanta.value);
   });
@@ -81,7 +85,8 @@ describe("exporting through a share link", () => {
     expect(JSON.stringify(file.body)).not.toContain(f.projectId);
     const csv = await call<string>(sharedExportRoute.GET, "GET", "/x", { params: { token: link.token }, query: { what: "budget" } });
     expect(csv.status).toBe(200);
-    expect(csv.body.startsWith("quantity,value,unit,source,flags\r\n")).toBe(true);
+    expect(csv.body.startsWith("# schemaVersion: 1\r\n")).toBe(true);
+    expect(csv.body).toContain("\r\nquantity,value,unit,source\r\n");
 
     expect((await call(shareLinkRoute.DELETE, "DELETE", "/x", { as: f.users.owner, params: { ...S(f), linkId: link.id } })).status).toBe(204);
     const dead = await call(sharedExportRoute.GET, "GET", "/x", { params: { token: link.token }, query: { what: "scenario" } });

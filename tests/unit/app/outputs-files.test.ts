@@ -1,9 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { budgetCsv, budgetCsvRows, csvField, csvText, csvValue } from "@/components/export/budget-csv";
+import Papa from "papaparse";
+import { budgetCsv, budgetCsvRows, budgetFlagRows, budgetInputLines, csvField, csvText, csvValue } from "@/components/export/budget-csv";
 import { embedOptions, embedPath, embedSnippet } from "@/components/export/embed-options";
-import { budgetFileName, diagramFileName, scenarioFileNameFor } from "@/components/export/file-names";
+import { budgetFileName, budgetPictureFileName, diagramFileName, scenarioFileNameFor, sweepFileName } from "@/components/export/file-names";
 import { computeScenario } from "@/physics/compute";
-import { defaultScenarioDocument } from "@/physics/scenario/schema";
+import { defaultScenarioDocument, parseScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { schwarzschildDocument } from "../canvas/harness";
 
 describe("CSV fields (RFC 4180 §2)", () => {
@@ -26,11 +27,53 @@ describe("CSV fields (RFC 4180 §2)", () => {
 });
 
 describe("the Budget as CSV", () => {
-  const result = computeScenario(schwarzschildDocument());
+  const document = schwarzschildDocument();
+  const result = computeScenario(document);
   const rows = budgetCsvRows(result);
+  const lines = budgetCsv(result, document).split("\r\n");
 
-  it("has the header quantity, value, unit, source, flags", () => {
-    expect(budgetCsv(result).split("\r\n")[0]).toBe("quantity,value,unit,source,flags");
+  it("starts with the scenario's inputs, one '# key: value unit' line each, then the header quantity, value, unit, source", () => {
+    const header = lines.indexOf("quantity,value,unit,source");
+    expect(header).toBeGreaterThan(5);
+    expect(lines.slice(0, header).every((l) => /^# [\w.]+: .+$/.test(l))).toBe(true);
+    const background = document.background as { kind: "schwarzschild"; massKg: number };
+    expect(lines).toContain(`# background.massKg: ${background.massKg} kg`);
+    expect(lines).toContain(`# separation.distanceMetres: ${document.separation.distanceMetres} m`);
+    expect(lines).toContain(`# source.chargeCoulombs: ${document.source.chargeCoulombs} C`);
+    expect(lines.some((l) => /^# protocol\.hold\.durationSeconds: [\d.e+-]+ s$/.test(l))).toBe(true);
+  });
+
+  it("gives back the document it was computed for: the input lines read back into the same scenario", () => {
+    const readBack: Record<string, unknown> = {};
+    for (const line of budgetInputLines(document)) {
+      const [, path, raw] = /^# ([\w.]+): (.*)$/.exec(line)!;
+      const value = raw.replace(/ (m s\^-2|s\^-1|m|s|kg|C)$/, "");
+      const parsed = value === "null" ? null : value === "true" ? true : value === "false" ? false : Number.isNaN(Number(value)) ? value : Number(value);
+      const keys = path.split(".");
+      let at = readBack;
+      for (const key of keys.slice(0, -1)) at = (at[key] ??= {}) as Record<string, unknown>;
+      at[keys[keys.length - 1]] = parsed;
+    }
+    const parsed = parseScenarioDocument(readBack);
+    expect(parsed.ok && parsed.document).toEqual(document);
+  });
+
+  it("names a sampled profile by its size instead of listing a million samples", () => {
+    const sampled: ScenarioDocument = { ...document, protocol: { kind: "sampled", interpolation: "linear", samples: Array.from({ length: 1000 }, (_, i) => ({ timeSeconds: i * 1e-3, separationMetres: i === 0 || i === 999 ? 0 : 1e-6 })) } };
+    const inputs = budgetInputLines(sampled);
+    expect(inputs).toContain("# protocol.samples: 1000 samples (timeSeconds s, separationMetres m; listed in the scenario file)");
+    expect(inputs.length).toBeLessThan(30);
+  });
+
+  it("lists every validity flag once, in its own section after the numbers, and no row repeats them", () => {
+    const csv = budgetCsv(result, document);
+    const [numbers, flags] = csv.slice(csv.indexOf("quantity,value")).split("\r\n\r\n");
+    expect(flags.split("\r\n")[0]).toBe("flag,status,message");
+    const flagRows = Papa.parse<string[]>(flags.trim()).data.slice(1);
+    expect(flagRows.map((r) => r[0])).toEqual(result.flags.map((f) => f.code));
+    expect(new Set(flagRows.map((r) => r[0])).size).toBe(flagRows.length);
+    expect(budgetFlagRows(result).map((r) => r[1])).toEqual(result.flags.map((f) => f.status));
+    for (const flag of result.flags) expect(numbers).not.toContain(flag.message);
   });
 
   it("has one row per number of the Budget, each with the value and unit the result carries", () => {
@@ -42,7 +85,7 @@ describe("the Budget as CSV", () => {
     expect(rows.find((r) => r[0] === "Quanta into the horizon (gravitational)")).toBeDefined();
     // Schwarzschild has an exact electromagnetic hold rate beside the published estimate.
     expect(rows.find((r) => r[0] === "Hold rate, published estimate (electromagnetic)")?.[2]).toBe("s^-1");
-    for (const r of rows) expect(r).toHaveLength(5);
+    for (const r of rows) expect(r).toHaveLength(4);
   });
 
   it("leaves out what the background does not have (Minkowski has no horizon)", () => {
@@ -61,6 +104,9 @@ describe("file names", () => {
   it("say the scenario, what the file holds and its type", () => {
     expect(diagramFileName("Slow recombination", { kind: "svg" })).toBe("slow-recombination-diagram.svg");
     expect(diagramFileName("Slow recombination", { kind: "png", pixelRatio: 4 })).toBe("slow-recombination-diagram-4x.png");
+    expect(diagramFileName("Slow recombination", { kind: "pdf" })).toBe("slow-recombination-diagram.pdf");
+    expect(sweepFileName("Slow recombination", { kind: "png", pixelRatio: 2 })).toBe("slow-recombination-sweep-2x.png");
+    expect(budgetPictureFileName("Slow recombination", "svg")).toBe("slow-recombination-budget.svg");
     expect(budgetFileName("Rindler wedge, hold 2 s")).toBe("rindler-wedge-hold-2-s-budget.csv");
     expect(scenarioFileNameFor("Équilibre")).toBe("equilibre.json");
   });

@@ -19,5 +19,5 @@ export const GET = route<Params>(async (req, { projectId, scenarioId }) => {
   if (!scenario.document) throw new AppError("unprocessable", "this scenario's stored document cannot be read by this version of Branchline");
   if (what === "scenario") return fileResponse(scenarioExport({ title: scenario.title, document: scenario.document }));
   const result = requireResult(await computeSaved(db, { scenarioId: scenario.id, version: scenario.version, document: scenario.document }));
-  return fileResponse(budgetExport(scenario.title, result));
+  return fileResponse(budgetExport(scenario.title, result, scenario.document));
 });

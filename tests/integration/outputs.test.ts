@@ -12,7 +12,7 @@ import * as shareLinksRoute from "@/app/api/projects/[projectId]/scenarios/[scen
 import * as sharedExportRoute from "@/app/api/share/[token]/export/route";
 import { computeScenario } from "@/physics/compute";
 import { parseScenarioFileText } from "@/physics/scenario/exchange";
-import { defaultScenarioDocument } from "@/physics/scenario/schema";
+import { CURRENT_SCHEMA_VERSION, defaultScenarioDocument } from "@/physics/scenario/schema";
 import { proxy } from "@/proxy";
 import { projectFixture, type ProjectFixture } from "./fixtures";
 import { call } from "./harness";
@@ -44,7 +44,7 @@ describe("exporting a scenario from its project", () => {
     expect(res.headers.get("content-disposition")).toBe('attachment; filename="fixture-scenario-budget.csv"');
     const lines = res.body.split("\r\n");
     // The inputs first, as "# key: value unit" lines, then the numbers.
-    expect(lines[0]).toBe("# schemaVersion: 1");
+    expect(lines[0]).toBe(`# schemaVersion: ${CURRENT_SCHEMA_VERSION}`);
     expect(lines).toContain(`# separation.distanceMetres: ${defaultScenarioDocument().separation.distanceMetres} m`);
     expect(lines).toContain("quantity,value,unit,source");
     expect(lines).toContain("flag,status,message");
@@ -85,7 +85,7 @@ describe("exporting through a share link", () => {
     expect(JSON.stringify(file.body)).not.toContain(f.projectId);
     const csv = await call<string>(sharedExportRoute.GET, "GET", "/x", { params: { token: link.token }, query: { what: "budget" } });
     expect(csv.status).toBe(200);
-    expect(csv.body.startsWith("# schemaVersion: 1\r\n")).toBe(true);
+    expect(csv.body.startsWith(`# schemaVersion: ${CURRENT_SCHEMA_VERSION}\r\n`)).toBe(true);
     expect(csv.body).toContain("\r\nquantity,value,unit,source\r\n");
 
     expect((await call(shareLinkRoute.DELETE, "DELETE", "/x", { as: f.users.owner, params: { ...S(f), linkId: link.id } })).status).toBe(204);

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
-import { blackHoleScenario, hydrated, signedInAs } from "./helpers";
+import { blackHoleScenario, signedInAs } from "./helpers";
 
 /*
  * axe-core (Deque's accessibility engine, from npm) over every main page, for the WCAG 2.0 and 2.1 A and AA rules:
@@ -51,7 +51,7 @@ test("every main page passes axe-core's WCAG 2 A and AA rules with no serious or
   for (const [name, path, ready] of pages) {
     await owner.goto(path);
     await expect(owner.locator(ready).first()).toBeVisible({ timeout: 60_000 });
-    await hydrated(owner);
+    await owner.waitForLoadState("networkidle");
     for (const violation of await seriousViolations(owner)) found.push(`${name}: ${violation}`);
   }
   const signedOut = await (await browser.newContext()).newPage();

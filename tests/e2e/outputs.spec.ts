@@ -129,15 +129,15 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   await expect.poll(() => frameCanvas.evaluate(inkedPixels), slow).toBeGreaterThan(2000);
   await expect(frame.getByRole("banner")).toHaveCount(0);
 
-  // Scrubbing back to the middle of the hold: quanta have gone to ℐ⁺ and into H⁺, fewer than at the end.
+  // Scrubbing back to the middle of the hold: the ramps' quanta and the hold's into H⁺, fewer than at the end.
   const slider = frame.getByLabel("Lab time");
   const atEnd = Number(await frame.getByTestId("running-horizon").getAttribute("data-log10"));
   await slider.fill("500");
   await expect(frame.getByTestId("scrub-time")).toContainText("τ = 550 ms");
   const midHorizon = Number(await frame.getByTestId("running-horizon").getAttribute("data-log10"));
-  const midFar = Number(await frame.getByTestId("running-far-field").getAttribute("data-log10"));
+  const midRamps = Number(await frame.getByTestId("running-ramp").getAttribute("data-log10"));
   expect(midHorizon).toBeLessThan(atEnd);
-  expect(Number.isFinite(midFar)).toBe(true);
+  expect(Number.isFinite(midRamps)).toBe(true);
   await expect(frame.getByText(/approximation/)).toBeVisible();
   await frame.getByRole("button", { name: /Play/ }).click();
   await expect(frame.getByRole("button", { name: /Pause/ })).toBeVisible();
@@ -165,13 +165,14 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const [file] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download scenario file (JSON)" }).click()]);
   expect(file.suggestedFilename()).toBe("hovering-lab.json");
   const scenarioFile = JSON.parse(await readFile((await file.path())!, "utf8"));
-  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: blackHoleScenario("one-branch-stays") });
+  // The file carries the document as read: upgraded to the current schema version (2, with no environment).
+  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: { ...blackHoleScenario("one-branch-stays"), schemaVersion: 2, environment: null } });
 
   const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
   expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");
   const lines = (await readFile((await csv.path())!, "utf8")).split("\r\n");
   // The scenario's inputs come first, then the numbers, then the flags once each.
-  expect(lines[0]).toBe("# schemaVersion: 1");
+  expect(lines[0]).toBe("# schemaVersion: 2");
   expect(lines).toContain("# background.kind: schwarzschild");
   expect(lines).toContain("quantity,value,unit,source");
   expect(lines).toContain("flag,status,message");

@@ -88,6 +88,21 @@ const MINOR_TICK_PX = 4;
 /** Tick labels at a size that survives a slide or a printed column. */
 const TICK_FONT_PX = 13;
 
+/** What both log axes share: our own decade ticks and labels (axis-scale.ts), drawn in the chart's colours. */
+function logAxisProps(axis: NonNullable<ReturnType<typeof logAxis>>) {
+  return {
+    type: "number" as const,
+    scale: "log" as const,
+    domain: [axis.from, axis.to],
+    ticks: axis.ticks.major,
+    interval: 0,
+    allowDataOverflow: true,
+    tickFormatter: axis.label,
+    tick: { fontSize: TICK_FONT_PX, fill: AXIS_COLOUR },
+    stroke: AXIS_COLOUR,
+  };
+}
+
 /** One log axis over the positive values given: its ticks, unit and labels (kernels/diagram/axis-scale.ts). */
 function logAxis(values: number[], dimension: "length" | "time" | "number") {
   const positive = values.filter((v) => v > 0 && Number.isFinite(v));
@@ -145,28 +160,12 @@ export const SweepChart = memo(function SweepChart({
             <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
             <XAxis
               dataKey="x"
-              type="number"
-              scale="log"
-              domain={[xAxis.from, xAxis.to]}
-              ticks={xAxis.ticks.major}
-              interval={0}
-              allowDataOverflow
-              tickFormatter={xAxis.label}
-              tick={{ fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
-              stroke={AXIS_COLOUR}
+              {...logAxisProps(xAxis)}
               label={{ value: xTitle, position: "insideBottom", offset: -20, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
             />
             <YAxis
               dataKey="decoherence"
-              type="number"
-              scale="log"
-              domain={[yAxis.from, yAxis.to]}
-              ticks={yAxis.ticks.major}
-              interval={0}
-              allowDataOverflow
-              tickFormatter={yAxis.label}
-              tick={{ fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
-              stroke={AXIS_COLOUR}
+              {...logAxisProps(yAxis)}
               width={64}
               label={{ value: "decoherence 𝒟", angle: -90, position: "insideLeft", offset: 4, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR, style: { textAnchor: "middle" } }}
             />

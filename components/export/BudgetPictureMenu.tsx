@@ -4,7 +4,8 @@
  * "Picture ▾" beside the Budget: the Budget table as a PNG (1×, 2×, 4×; 2× by default) or an SVG for a slide, light or
  * dark, with the caption line. Available while the Budget is up to date.
  */
-import { useEffect, useId, useRef, useState } from "react";
+import { useState } from "react";
+import { usePopover } from "@/components/ui/usePopover";
 import { useEditor } from "@/canvas/EditorProvider";
 import { figureCaption } from "@/canvas/export/figure-caption";
 import type { FigureTheme } from "@/canvas/export/export-figure";
@@ -15,20 +16,7 @@ import { budgetPictureFileName } from "./file-names";
 const RATIOS = [1, 2, 4] as const;
 
 export function BudgetPictureMenu({ title }: { title: string }) {
-  const [open, setOpen] = useState(false);
-  const root = useRef<HTMLDivElement>(null);
-  const panelId = useId();
-  useEffect(() => {
-    if (!open) return;
-    const onKey = (e: KeyboardEvent) => e.key === "Escape" && setOpen(false);
-    const onPointer = (e: PointerEvent) => root.current && !root.current.contains(e.target as Node) && setOpen(false);
-    window.addEventListener("keydown", onKey);
-    window.addEventListener("pointerdown", onPointer);
-    return () => {
-      window.removeEventListener("keydown", onKey);
-      window.removeEventListener("pointerdown", onPointer);
-    };
-  }, [open]);
+  const { open, setOpen, root, panelId } = usePopover();
   return (
     <div ref={root} className="relative">
       <button type="button" className="rounded border border-rule-strong bg-paper px-2 py-0.5 text-xs hover:border-ink" aria-expanded={open} aria-controls={panelId} onClick={() => setOpen((o) => !o)}>

@@ -6,7 +6,8 @@
  * as CSV; the scenario as a scenario file. Everything is written in the browser from what is on screen, through
  * the same code as the figure command (canvas/export/render-figure.ts); nothing is saved.
  */
-import { useEffect, useId, useRef, useState } from "react";
+import { useId, useState } from "react";
+import { usePopover } from "@/components/ui/usePopover";
 import { useEditor } from "@/canvas/EditorProvider";
 import { DEFAULT_STANDALONE, exportDiagramDrawing, type FigureGround, type StandaloneOptions } from "@/canvas/export/export-figure";
 import { measureWith, renderFigureFile, type FigureFileRequest } from "@/canvas/export/render-figure";
@@ -51,21 +52,8 @@ function Choice<T extends string | number>({ legend, options, value, onChange, w
 }
 
 export function ExportMenu({ title, description }: { title: string; description?: string | null }) {
-  const [open, setOpen] = useState(false);
-  const panelId = useId();
-  const root = useRef<HTMLDivElement>(null);
+  const { open, setOpen, root, panelId } = usePopover();
 
-  useEffect(() => {
-    if (!open) return;
-    const onKey = (e: KeyboardEvent) => e.key === "Escape" && setOpen(false);
-    const onPointer = (e: PointerEvent) => root.current && !root.current.contains(e.target as Node) && setOpen(false);
-    window.addEventListener("keydown", onKey);
-    window.addEventListener("pointerdown", onPointer);
-    return () => {
-      window.removeEventListener("keydown", onKey);
-      window.removeEventListener("pointerdown", onPointer);
-    };
-  }, [open]);
 
   return (
     <div ref={root} className="relative">

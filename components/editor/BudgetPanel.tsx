@@ -29,9 +29,10 @@ function countRow(key: string, words: string, of: Row["of"]): Row {
 const ROWS: Row[] = [
   countRow("far-field", "To null infinity ℐ⁺", (c) => c.farFieldQuanta),
   countRow("horizon", "Into the horizon", (c) => c.horizonQuanta),
-  countRow("ramp", "Ramp-driven", (c) => c.rampDrivenQuanta),
-  countRow("hold", "Hold-driven", (c) => c.holdDrivenQuanta),
   { key: "total", words: "Total ⟨N⟩", of: (c) => c.totalQuanta, combined: (r) => r.combined.totalQuanta },
+  // The total split by what drives it: the two add up to the total above them.
+  countRow("ramp", "of which ramp-driven", (c) => c.rampDrivenQuanta),
+  countRow("hold", "of which hold-driven", (c) => c.holdDrivenQuanta),
   { key: "decoherence", words: "Decoherence 𝒟", of: (c) => c.decoherence, combined: (r) => r.combined.decoherence },
   { key: "decoherence-time", words: "Decoherence time", of: (c) => c.decoherenceTime, combined: (r) => r.combined.decoherenceTime },
 ];

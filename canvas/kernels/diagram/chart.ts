@@ -4,6 +4,7 @@
  */
 import { c } from "@/physics/constants";
 import { BackgroundInputError, makeBackground, type Background } from "@/physics/backgrounds";
+import { protocolDurationSeconds as protocolLengthSeconds } from "@/physics/scenario/ranges";
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import { ladderStepAtLeast } from "../round-numbers";
 
@@ -23,17 +24,9 @@ export interface DiagramChart {
 /** How many null scales the sampled ranges reach: the diagram's squeeze is within 1e-12 of its limit beyond ~28. */
 const REACH = 32;
 
-/** The whole protocol's length in seconds of lab time, whatever its kind. */
+/** The whole protocol's length in seconds of lab time, whatever its kind (the one reading in physics/scenario/ranges). */
 export function protocolDurationSeconds(document: ScenarioDocument): number {
-  const p = document.protocol;
-  switch (p.kind) {
-    case "segments":
-      return p.separation.durationSeconds + p.hold.durationSeconds + p.recombination.durationSeconds;
-    case "formula":
-      return p.durationSeconds;
-    case "sampled":
-      return p.samples[p.samples.length - 1].timeSeconds - p.samples[0].timeSeconds;
-  }
+  return protocolLengthSeconds(document.protocol);
 }
 
 /**

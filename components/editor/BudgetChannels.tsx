@@ -23,7 +23,13 @@ export function QuantityLink({ quantity, testId, label }: { quantity: Quantity; 
       aria-label={`${label}: ${quantityText(quantity)} (formula on the Methods page)`}
     >
       {number}
-      {unit && <span className="ml-[0.25em] text-[0.8em]">{unit}</span>}
+      {/* A real space, so the visible text reads as the accessible name does ("3.2 ms"). */}
+      {unit && (
+        <>
+          {" "}
+          <span className="text-[0.8em]">{unit}</span>
+        </>
+      )}
     </Link>
   );
 }

@@ -120,10 +120,10 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         Sweep
       </h2>
       <div className="flex flex-wrap items-end gap-3">
-        <label className="block text-xs font-semibold text-ink-soft">
+        <label className="block min-w-0 max-w-full text-xs font-semibold text-ink-soft">
           Decoherence against
           <select
-            className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
+            className="mt-1 block max-w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
             value={parameter}
             onChange={(e) => {
               setRange(null);

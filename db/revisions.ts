@@ -2,24 +2,12 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
-import { diffDocuments, type DocumentDiff } from "../lib/document-diff";
+import { diffDocuments, type DocumentDiff } from "../contracts/json-diff";
 import { AppError, notFound } from "./errors";
 import type { Database } from "./schema";
-import { person, type PersonDto } from "./people";
-import { assertScenarioInProject, saveNextVersion, type ScenarioDto } from "./scenarios";
-
-export interface RevisionSummaryDto {
-  version: number;
-  title: string;
-  schemaVersion: number;
-  createdAt: string;
-  createdBy: PersonDto | null;
-}
-
-export interface RevisionDto extends RevisionSummaryDto {
-  document: ScenarioDocument | null;
-  documentIssues: { path: string; message: string }[] | null;
-}
+import { person } from "./people";
+import { assertScenarioInProject, saveNextVersion } from "./scenarios";
+import type { RevisionDiffDto, RevisionDto, RevisionSummaryDto, ScenarioDto } from "../contracts/dto";
 
 /** Revision numbers are PostgreSQL integers. */
 export const MAX_REVISION = 2_147_483_647;
@@ -80,14 +68,6 @@ export async function getRevision(
     document: parsed.ok ? parsed.document : null,
     documentIssues: parsed.ok ? null : parsed.issues,
   };
-}
-
-export interface RevisionDiffDto extends DocumentDiff {
-  /** The older side (?against=) and the newer side (the revision in the path). */
-  from: RevisionSummaryDto;
-  to: RevisionSummaryDto;
-  /** The title, when it differs; titles live beside the document. */
-  title: { before: string; after: string } | null;
 }
 
 async function storedRevision(db: Kysely<Database>, projectId: string, scenarioId: string, version: number) {

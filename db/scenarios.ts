@@ -7,30 +7,9 @@ import { type Actor, requireProjectAction } from "./access";
 import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
 import type { Database } from "./schema";
-
-export type { PersonDto };
-
-export interface ScenarioSummaryDto {
-  id: string;
-  projectId: string;
-  title: string;
-  backgroundKind: string;
-  schemaVersion: number;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-  updatedBy: PersonDto | null;
-}
-
-export interface ScenarioDto extends ScenarioSummaryDto {
-  /** The document upgraded to the current schema version; null when it could not be read (see documentIssues). */
-  document: ScenarioDocument | null;
-  /** Why a stored document could not be read, when it could not; the raw document is kept untouched. */
-  documentIssues: { path: string; message: string }[] | null;
-  createdBy: PersonDto | null;
-}
+import type { ScenarioDto, ScenarioPage, ScenarioSummaryDto } from "../contracts/dto";
 
 export type ScenarioSortKey = "title" | "updatedAt" | "createdAt" | "backgroundKind";
 
@@ -42,13 +21,6 @@ export interface ScenarioListQuery {
   /** Case-insensitive substring of the title. */
   search?: string;
   backgroundKind?: string;
-}
-
-export interface ScenarioPage {
-  items: ScenarioSummaryDto[];
-  total: number;
-  page: number;
-  pageSize: number;
 }
 
 /**

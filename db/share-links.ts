@@ -5,34 +5,11 @@ import { recordAudit } from "./audit";
 import { type Actor, assertShareLinkAccess, shareLinkIsOpen, requireProjectAction } from "./access";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
 import { assertScenarioInProject } from "./scenarios";
 import { hashToken, newToken } from "./tokens";
 import type { Database } from "./schema";
-
-export interface ShareLinkDto {
-  id: string;
-  label: string;
-  status: "active" | "expired" | "revoked";
-  createdAt: string;
-  createdBy: PersonDto | null;
-  expiresAt: string | null;
-  revokedAt: string | null;
-  viewCount: number;
-  lastViewedAt: string | null;
-}
-
-/** What a share link's holder sees: the scenario and nothing else of its project (no names, no ids). */
-export interface SharedScenarioDto {
-  title: string;
-  backgroundKind: string;
-  version: number;
-  updatedAt: string;
-  document: ScenarioDocument | null;
-  documentIssues: { path: string; message: string }[] | null;
-  /** When the link stops working, if it does. */
-  linkExpiresAt: string | null;
-}
+import type { ShareLinkDto, SharedScenarioDto } from "../contracts/dto";
 
 function linkQuery(db: Kysely<Database>, projectId: string, scenarioId: string) {
   return db

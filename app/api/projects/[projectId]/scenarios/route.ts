@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createScenario, listScenarios, validDocument } from "@/db/scenarios";
-import { scenarioCreateSchema, scenarioListQuerySchema } from "@/lib/contracts";
+import { scenarioCreateSchema, scenarioListQuerySchema } from "@/contracts/requests";
 import { json, readJson, readQuery, requireActor, route } from "@/lib/http";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 

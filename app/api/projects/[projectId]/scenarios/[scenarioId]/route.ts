@@ -1,7 +1,7 @@
 import { getDb } from "@/db";
 import { attachmentObjectKeys, removeStoredObjects } from "@/db/attachments";
 import { deleteScenario, getScenario, updateScenario, validDocument } from "@/db/scenarios";
-import { scenarioUpdateSchema } from "@/lib/contracts";
+import { scenarioUpdateSchema } from "@/contracts/requests";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
 import { objectStore } from "@/lib/storage";
 

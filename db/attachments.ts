@@ -6,7 +6,7 @@ import "server-only";
  * the object is removed again if the commit fails.
  */
 import { randomUUID } from "node:crypto";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { type Actor, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { notFound } from "./errors";
@@ -40,7 +40,7 @@ function attachmentQuery(db: Kysely<Database>, projectId: string, scenarioId: st
     .where("a.scenarioId", "=", scenarioId);
 }
 
-type AttachmentRow = Awaited<ReturnType<ReturnType<typeof attachmentQuery>["executeTakeFirstOrThrow"]>>;
+type AttachmentRow = InferResult<ReturnType<typeof attachmentQuery>>[number];
 
 function toDto(r: AttachmentRow): AttachmentDto {
   return {

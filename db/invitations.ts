@@ -1,5 +1,5 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { type Actor, assertInvitationAcceptable, invitationIsOpen, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { conflict, notFound } from "./errors";
@@ -50,7 +50,7 @@ function invitationQuery(db: Kysely<Database>, projectId: string) {
     .where("i.revokedAt", "is", null);
 }
 
-type InvitationRow = Awaited<ReturnType<ReturnType<typeof invitationQuery>["executeTakeFirstOrThrow"]>>;
+type InvitationRow = InferResult<ReturnType<typeof invitationQuery>>[number];
 
 function toDto(r: InvitationRow, now = new Date()): InvitationDto {
   return {

@@ -1,5 +1,5 @@
 import "server-only";
-import { type Kysely, sql } from "kysely";
+import { type InferResult, type Kysely, sql } from "kysely";
 import { type Actor, type ProjectAction, allowedProjectActions, requireProjectAction } from "./access";
 import type { Database, ProjectRole } from "./schema";
 import type { ProjectDto } from "../contracts/dto";
@@ -21,7 +21,7 @@ function projectQuery(db: Kysely<Database>, userId: string) {
     ]);
 }
 
-type ProjectRow = Awaited<ReturnType<ReturnType<typeof projectQuery>["executeTakeFirstOrThrow"]>>;
+type ProjectRow = InferResult<ReturnType<typeof projectQuery>>[number];
 
 function toDto(row: ProjectRow): ProjectDto {
   return {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
 import { diffDocuments, type DocumentDiff } from "../contracts/json-diff";
@@ -29,7 +29,7 @@ function revisionQuery(db: Kysely<Database>, projectId: string, scenarioId: stri
     .where("r.scenarioId", "=", scenarioId);
 }
 
-type RevisionRow = Awaited<ReturnType<ReturnType<typeof revisionQuery>["executeTakeFirstOrThrow"]>>;
+type RevisionRow = InferResult<ReturnType<typeof revisionQuery>>[number];
 
 function toSummary(r: RevisionRow): RevisionSummaryDto {
   return {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { recordAudit } from "./audit";
 import { type Actor, assertShareLinkAccess, shareLinkIsOpen, requireProjectAction } from "./access";
@@ -20,7 +20,7 @@ function linkQuery(db: Kysely<Database>, projectId: string, scenarioId: string) 
     .where("l.scenarioId", "=", scenarioId);
 }
 
-type LinkRow = Awaited<ReturnType<ReturnType<typeof linkQuery>["executeTakeFirstOrThrow"]>>;
+type LinkRow = InferResult<ReturnType<typeof linkQuery>>[number];
 
 function toDto(r: LinkRow, now = new Date()): ShareLinkDto {
   const status = r.revokedAt ? "revoked" : r.expiresAt && r.expiresAt <= now ? "expired" : "active";

@@ -5,7 +5,7 @@
  * channel's ⟨N⟩ (the field channels and the environment's) and the whole budget's, so a chart draws one curve each.
  */
 import { computeScenario, type ComputeOptions } from "../compute";
-import type { Quantity } from "../result";
+import type { Quantity } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
 import type { EnvironmentChannel } from "../environment/types";

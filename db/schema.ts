@@ -192,6 +192,24 @@ export interface ComputeRateLimitsTable {
   expire: string | null;
 }
 
+export type ApiTokenScope = "read" | "read-write";
+
+/** A personal API token (Authorization: Bearer …); see db/api-tokens.ts. */
+export interface ApiTokensTable {
+  id: Generated<string>;
+  userId: string;
+  name: string;
+  /** SHA-256 (hex) of the token; the token itself is shown once and never stored. */
+  tokenHash: string;
+  scope: ApiTokenScope;
+  /** When set, the token acts only in this project; everywhere else its holder is a stranger. */
+  projectId: string | null;
+  createdAt: Generated<Date>;
+  expiresAt: Date | null;
+  lastUsedAt: Date | null;
+  revokedAt: Date | null;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -208,6 +226,7 @@ export interface Database {
   attachments: AttachmentsTable;
   scenarioResults: ScenarioResultsTable;
   computeRateLimits: ComputeRateLimitsTable;
+  apiTokens: ApiTokensTable;
 }
 
 export type User = Selectable<UsersTable>;
@@ -231,3 +250,4 @@ export type ProjectAuditEntry = Selectable<ProjectAuditTable>;
 export type NewProjectAuditEntry = Insertable<ProjectAuditTable>;
 export type Attachment = Selectable<AttachmentsTable>;
 export type NewAttachment = Insertable<AttachmentsTable>;
+export type ApiToken = Selectable<ApiTokensTable>;

@@ -70,6 +70,23 @@ export const shareLinkCreateSchema = z
   })
   .strict();
 
+export const API_TOKEN_MAX_DAYS = 365;
+export const apiTokenCreateSchema = z
+  .object({
+    name: keptText().trim().min(1, "name the token after what uses it, e.g. “analysis notebook”").max(100, "use at most 100 characters"),
+    scope: z.enum(["read", "read-write"], { error: "scope must be read or read-write" }),
+    /** The one project the token may act in; null or absent: every project of the account. */
+    projectId: z.uuid("choose a project from the list").nullable().optional(),
+    /** Days until the token stops working; null: until it is revoked. */
+    expiresInDays: z
+      .number({ error: "expiry must be a number of days" })
+      .int("expiry must be a whole number of days")
+      .min(1, "a token must work for at least a day")
+      .max(API_TOKEN_MAX_DAYS, `a token may work for at most ${API_TOKEN_MAX_DAYS} days`)
+      .nullable(),
+  })
+  .strict();
+
 export const revisionDiffQuerySchema = z.object({
   against: z.coerce
     .number({ error: "against must be a revision number" })

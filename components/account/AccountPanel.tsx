@@ -14,6 +14,7 @@ import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
+import { ApiTokensPanel } from "./ApiTokensPanel";
 import { displayNameSchema } from "@/lib/contracts";
 
 const nameSchema = z.object({ name: displayNameSchema });
@@ -28,6 +29,15 @@ export function AccountPanel() {
 }
 
 function AccountDetails({ user }: { user: UserDto }) {
+  return (
+    <div className="space-y-14">
+      <AccountBasics user={user} />
+      <ApiTokensPanel />
+    </div>
+  );
+}
+
+function AccountBasics({ user }: { user: UserDto }) {
   return (
     <div className="grid max-w-3xl gap-12 md:grid-cols-2">
       <NameForm user={user} />

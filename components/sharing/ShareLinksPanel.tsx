@@ -45,7 +45,7 @@ function embedCodeOf(url: string, options: Partial<EmbedOptions> = {}): string {
 }
 
 /** Copies to the clipboard, saying so; where the browser refuses, the URL stays selectable on the page. */
-function CopyButton({ url, label, words = "Copy URL" }: { url: string; label: string; words?: string }) {
+export function CopyButton({ url, label, words = "Copy URL" }: { url: string; label: string; words?: string }) {
   const [copied, setCopied] = useState<"yes" | "failed" | null>(null);
   return (
     <button

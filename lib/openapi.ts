@@ -48,6 +48,8 @@ const scenarioFileSchema = z.object({
 export const operations: Operation[] = [
   { method: "post", path: "/api/compute", tag: "Compute", summary: "Compute the decoherence budget of a scenario document", access: "anyone", body: { schema: scenarioDocumentSchema }, success: { status: 200, description: "The result (resultVersion 1): every channel's quanta, rates, decoherence and flags" } },
 
+  { method: "post", path: "/api/sweeps", tag: "Compute", summary: "Sweep one parameter of a scenario document, or of a saved scenario, over points spaced evenly in its logarithm", access: "anyone", body: { schema: contracts.sweepRequestSchema, description: `A document (anyone) or a saved scenario's projectId and scenarioId (its readers); at most ${contracts.API_SWEEP_MAX_POINTS} points; format json or csv` }, success: { status: 200, description: "JSON { sweep: { parameter, unit, spacing, points: [{ x, totalQuanta, decoherence, electromagneticQuanta, gravitationalQuanta }] } }, or with format csv a CSV file whose header lines give the inputs" } },
+
   { method: "post", path: "/api/users", tag: "Account", summary: "Create an account", access: "anyone", body: { schema: contracts.signUpSchema }, success: { status: 201, description: "Signed up (the same answer whether or not the address already has an account; its owner is e-mailed instead)" } },
   { method: "get", path: "/api/account", tag: "Account", summary: "The signed-in account", access: "signed in", success: { status: 200, description: "The account" } },
   { method: "patch", path: "/api/account", tag: "Account", summary: "Change the account's name", access: "browser session", body: { schema: contracts.accountUpdateSchema }, success: { status: 200, description: "The account" } },

@@ -4,6 +4,9 @@ import { browserOnly, type Case, everyone, holderToo, I, nextUnique, owners, P, 
 
 export const coreCases: Case[] = [
   { file: "compute/route.ts", method: "POST", path: () => "/api/compute", body: () => defaultScenarioDocument(), expected: everyone(200), tokens: { revokedToken: 401, expiredToken: 401 } },
+  { file: "sweeps/route.ts", method: "POST", path: () => "/api/sweeps", body: () => ({ document: defaultScenarioDocument(), parameter: "hold-time", fromValue: 1e-3, toValue: 1e-2, points: 2 }), expected: everyone(200), tokens: { revokedToken: 401, expiredToken: 401 } },
+  // A saved scenario's sweep reads it: its readers (a read-only token too); a token for another project is a stranger to it.
+  { file: "sweeps/route.ts", method: "POST", path: () => "/api/sweeps", body: (f) => ({ projectId: f.projectId, scenarioId: f.scenarioId, parameter: "hold-time", fromValue: 1e-3, toValue: 1e-2, points: 2 }), expected: holderToo(readers(200)), tokens: { readToken: 200, elsewhereToken: 404 } },
   { file: "openapi.json/route.ts", method: "GET", path: () => "/api/openapi.json", expected: everyone(200) },
   { file: "users/route.ts", method: "POST", path: () => "/api/users", body: () => ({ email: `new-${nextUnique()}@example.test`, name: "New Person", password: "a long enough password" }), expected: everyone(201) },
   { file: "password-reset/route.ts", method: "POST", path: () => "/api/password-reset", body: () => ({ email: "nobody@example.test" }), expected: everyone(202) },

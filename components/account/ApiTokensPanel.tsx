@@ -6,6 +6,7 @@ import { useProjects } from "@/components/api/projects";
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { CopyButton } from "@/components/sharing/ShareLinksPanel";
+import { daysOrNull, type ExpiryChoice, ExpiryField, secretStatusWords } from "@/components/sharing/ExpiryField";
 import { RevokeButton, RevokeDialog, useRevokeConfirmation } from "@/components/sharing/RevokeRowAction";
 import { EmptyState } from "@/components/ui/EmptyState";
 import { SelectField, TextField } from "@/components/ui/Field";
@@ -16,7 +17,7 @@ import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
 import { apiTokenCreateSchema } from "@/lib/contracts";
 
-const expiryChoices: { days: number | null; label: string }[] = [
+const expiryChoices: ExpiryChoice[] = [
   { days: 7, label: "7 days" },
   { days: 30, label: "30 days" },
   { days: 90, label: "90 days" },
@@ -26,11 +27,6 @@ const expiryChoices: { days: number | null; label: string }[] = [
 
 const scopeWords: Record<ApiTokenDto["scope"], string> = { read: "Read", "read-write": "Read and write" };
 
-const statusWords: Record<ApiTokenDto["status"], { text: string; className: string; icon: string }> = {
-  active: { text: "active", className: "text-ink", icon: "●" },
-  expired: { text: "expired", className: "text-caution", icon: "⚠" },
-  revoked: { text: "revoked", className: "text-ink-faint", icon: "✕" },
-};
 
 const columns = [{ label: "Name" }, { label: "Access" }, { label: "Created" }, { label: "Expires" }, { label: "Last used" }, { label: "Status" }, { label: "Actions", hiddenLabel: true }];
 
@@ -44,7 +40,6 @@ function CreateTokenForm({ onCreated }: { onCreated: (name: string, token: strin
     form.reset({ name: "", scope: input.scope, projectId: input.projectId ?? null, expiresInDays: input.expiresInDays });
     onCreated(apiToken.name, token);
   });
-  const orNull = (value: string | number | null) => (value === "" || value === null ? null : value);
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <p className="text-sm text-ink-soft">
@@ -58,7 +53,7 @@ function CreateTokenForm({ onCreated }: { onCreated: (name: string, token: strin
           <option value="read">{scopeWords.read}</option>
           <option value="read-write">{scopeWords["read-write"]}</option>
         </SelectField>
-        <SelectField label="Projects" className="w-56" error={errors.projectId?.message} {...form.register("projectId", { setValueAs: orNull })}>
+        <SelectField label="Projects" className="w-56" error={errors.projectId?.message} {...form.register("projectId", { setValueAs: (value: string | null) => (value === "" ? null : value) })}>
           <option value="">All my projects</option>
           {(projects.data ?? []).map((p) => (
             <option key={p.id} value={p.id}>
@@ -66,18 +61,7 @@ function CreateTokenForm({ onCreated }: { onCreated: (name: string, token: strin
             </option>
           ))}
         </SelectField>
-        <SelectField
-          label="Works for"
-          className="w-40"
-          error={errors.expiresInDays?.message}
-          {...form.register("expiresInDays", { setValueAs: (value: string | number | null) => (orNull(value) === null ? null : Number(value)) })}
-        >
-          {expiryChoices.map((choice) => (
-            <option key={choice.label} value={choice.days ?? ""}>
-              {choice.label}
-            </option>
-          ))}
-        </SelectField>
+        <ExpiryField choices={expiryChoices} className="w-40" error={errors.expiresInDays?.message} registration={form.register("expiresInDays", { setValueAs: daysOrNull })} />
         <button type="submit" disabled={isSubmitting} className={`${buttonStyles.primary} mt-6`}>
           {isSubmitting ? "Creating…" : "Create token"}
         </button>
@@ -123,7 +107,7 @@ export function ApiTokensPanel() {
               <TableHead columns={columns} />
               <tbody>
                 {list.map((t) => {
-                  const status = statusWords[t.status];
+                  const status = secretStatusWords[t.status];
                   return (
                     <tr key={t.id} className={tableStyles.row}>
                       <td className={`${tableStyles.cell} font-semibold`}>{t.name}</td>

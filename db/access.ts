@@ -16,7 +16,10 @@
  * managed from a signed-in browser only.
  */
 import type { Kysely } from "kysely";
+import type { ProjectAction } from "../contracts/dto";
 import type { ApiTokenScope, Database, ProjectRole, SiteRole } from "./schema";
+
+export type { ProjectAction };
 import { AppError, forbidden, notFound } from "./errors";
 import { isUuid } from "./ids";
 
@@ -35,17 +38,6 @@ export interface TokenGrant {
   projectId: string | null;
 }
 
-export type ProjectAction =
-  | "project:read"
-  | "project:rename"
-  | "project:delete"
-  | "members:read"
-  | "members:manage"
-  | "members:invite"
-  | "members:audit"
-  | "share:manage"
-  | "scenario:read"
-  | "scenario:write";
 
 export type SiteAction = "users:list" | "users:set-role";
 

@@ -1,6 +1,7 @@
 import "server-only";
 import { randomBytes } from "node:crypto";
 import type { Kysely } from "kysely";
+import type { ApiTokenDto } from "../contracts/dto";
 import { type Actor, requireProjectAction } from "./access";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
@@ -23,18 +24,6 @@ export const MAX_LIVE_TOKENS = 50;
 /** Last use is recorded to the minute: a script's every request reads the token, but writes at most once a minute. */
 const LAST_USE_RESOLUTION_MS = 60_000;
 
-export interface ApiTokenDto {
-  id: string;
-  name: string;
-  scope: ApiTokenScope;
-  /** The one project the token acts in (with its name), or null for every project of the account. */
-  project: { id: string; name: string } | null;
-  status: "active" | "expired" | "revoked";
-  createdAt: string;
-  expiresAt: string | null;
-  lastUsedAt: string | null;
-  revokedAt: string | null;
-}
 
 function tokenQuery(db: Kysely<Database>, userId: string) {
   return db

@@ -1,12 +1,12 @@
 /**
  * The OpenAPI 3.1 description of Branchline's JSON API, generated from the very zod schemas the route handlers
- * enforce (lib/contracts.ts and the scenario schema), by @asteasolutions/zod-to-openapi. One entry per route
+ * enforce (contracts/requests.ts and the scenario schema), by @asteasolutions/zod-to-openapi. One entry per route
  * and method under app/api; a unit test fails when a route has none, or an entry names no route.
  * Pure (zod and the generator only): served at /api/openapi.json and read by the API reference page.
  */
 import { extendZodWithOpenApi, OpenAPIRegistry, OpenApiGeneratorV31 } from "@asteasolutions/zod-to-openapi";
 import { z } from "zod";
-import * as contracts from "./contracts";
+import * as contracts from "../contracts/requests";
 import { scenarioDocumentSchema } from "../physics/scenario/schema";
 
 // The generator's documented set-up: it adds .openapi() to zod's types, used here only to name the error shape.

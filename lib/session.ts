@@ -4,9 +4,10 @@ import { getToken } from "next-auth/jwt";
 import type { NextRequest } from "next/server";
 import { getDb } from "../db";
 import type { Actor } from "../db/access";
+import type { UserDto } from "../contracts/dto";
 import { actorFromApiToken } from "../db/api-tokens";
 import { AppError } from "../db/errors";
-import { findUserById, type UserDto, toUserDto } from "../db/users";
+import { findUserById, toUserDto } from "../db/users";
 import { authOptions, tokenSessionVersion, useSecureCookies } from "./auth";
 import { clientAddress } from "./client-address";
 

@@ -14,8 +14,8 @@ import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
+import { displayNameSchema } from "@/contracts/requests";
 import { ApiTokensPanel } from "./ApiTokensPanel";
-import { displayNameSchema } from "@/lib/contracts";
 
 const nameSchema = z.object({ name: displayNameSchema });
 

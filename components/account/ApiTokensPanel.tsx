@@ -15,7 +15,7 @@ import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
-import { apiTokenCreateSchema } from "@/lib/contracts";
+import { apiTokenCreateSchema } from "@/contracts/requests";
 
 const expiryChoices: ExpiryChoice[] = [
   { days: 7, label: "7 days" },

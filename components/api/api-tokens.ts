@@ -1,6 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { ApiTokenDto } from "@/db/api-tokens";
-import type { ApiTokenScope } from "@/db/schema";
+import type { ApiTokenDto, ApiTokenScope } from "@/contracts/dto";
 import { apiFetch } from "./client";
 import { accountKeys } from "./account";
 

@@ -1,6 +1,6 @@
 /** What `branchline` commands print on standard output: JSON, CSV, or a table for people (columns aligned). */
-import { budgetCsv, budgetCsvRows, budgetFlagRows, BUDGET_CSV_HEADER, FLAGS_CSV_HEADER } from "../../components/export/budget-csv";
-import { sweepCsv, sweepCsvRows } from "../../components/export/sweep-csv";
+import { budgetCsv, budgetCsvRows, budgetFlagRows, BUDGET_CSV_HEADER, FLAGS_CSV_HEADER } from "../../canvas/export/budget-csv";
+import { sweepCsv, sweepCsvRows } from "../../canvas/export/sweep-csv";
 import type { ScenarioResult } from "../../physics/result";
 import type { ScenarioDocument } from "../../physics/scenario/schema";
 import type { SweepResult } from "../../physics/sweeps";

@@ -7,7 +7,7 @@ import path from "node:path";
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import * as sweepsRoute from "@/app/api/sweeps/route";
-import { API_SWEEP_MAX_POINTS } from "@/lib/contracts";
+import { API_SWEEP_MAX_POINTS } from "@/contracts/requests";
 import { computeScenario, withParameter } from "@/physics";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { call } from "./harness";

@@ -2,9 +2,9 @@ import { consumeComputePoint, computeRatePerMinute } from "@/db/compute-rate-lim
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
 import { getScenario } from "@/db/scenarios";
-import { sweepCsv } from "@/components/export/sweep-csv";
+import { sweepCsv } from "@/canvas/export/sweep-csv";
 import { clientAddress } from "@/lib/client-address";
-import { sweepRequestSchema } from "@/lib/contracts";
+import { sweepRequestSchema } from "@/contracts/requests";
 import { json, readJson, route } from "@/lib/http";
 import { sweepRequested } from "@/lib/scenario-sweep";
 import { actorFromRequest } from "@/lib/session";

@@ -3,7 +3,7 @@
  * (a progress bar on standard error) or, with --remote, by the server (POST /api/sweeps, at most its stated number
  * of points).
  */
-import { API_SWEEP_MAX_POINTS } from "../../../lib/contracts";
+import { API_SWEEP_MAX_POINTS } from "../../../contracts/requests";
 import { ScenarioInputError } from "../../../physics/scenario/input-error";
 import { parseScenarioDocument } from "../../../physics/scenario/schema";
 import { MAX_SWEEP_POINTS, SWEEP_PARAMETERS, sweepScenario, type SweepResult } from "../../../physics/sweeps";

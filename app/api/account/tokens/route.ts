@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createApiToken, listApiTokens } from "@/db/api-tokens";
-import { apiTokenCreateSchema } from "@/lib/contracts";
+import { apiTokenCreateSchema } from "@/contracts/requests";
 import { json, readJson, requireSessionActor, route } from "@/lib/http";
 
 /** A token's request is a name and a few choices: a small body. */

@@ -4,7 +4,7 @@
  * parameter's value and each number with its unit in the column's header. Shared by POST /api/sweeps and the
  * command line.
  */
-import type { Quantity } from "@/physics/result";
+import type { Quantity } from "@/physics/result-basics";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import type { SweepPoint, SweepResult } from "@/physics/sweeps";
 import { budgetInputLines, csvText, csvValue } from "./budget-csv";

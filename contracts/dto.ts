@@ -162,6 +162,23 @@ export interface ShareLinkDto {
   lastViewedAt: string | null;
 }
 
+/** A personal API token's scope: reading only, or reading and writing. */
+export type ApiTokenScope = "read" | "read-write";
+
+/** A personal API token as its account sees it (never the token itself, which is shown once when made). */
+export interface ApiTokenDto {
+  id: string;
+  name: string;
+  scope: ApiTokenScope;
+  /** The one project the token acts in (with its name), or null for every project of the account. */
+  project: { id: string; name: string } | null;
+  status: "active" | "expired" | "revoked";
+  createdAt: string;
+  expiresAt: string | null;
+  lastUsedAt: string | null;
+  revokedAt: string | null;
+}
+
 /** What a share link's holder sees: the scenario and nothing else of its project (no names, no ids). */
 export interface SharedScenarioDto {
   title: string;

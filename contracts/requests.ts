@@ -6,6 +6,7 @@ import { z } from "zod";
 import { rangeIssues } from "../physics/scenario/ranges";
 import { parseScenarioDocument } from "../physics/scenario/schema";
 import { keptText } from "../physics/scenario/text";
+import { SWEEP_PARAMETERS } from "../physics/sweeps/parameters";
 
 // Every text a request carries goes through keptText: no NUL and no lone surrogate, refused with the field's path.
 export const emailSchema = keptText().trim().toLowerCase().email("enter a valid e-mail address").max(320, "e-mail address is too long");
@@ -80,6 +81,56 @@ export const shareLinkCreateSchema = z
       .max(SHARE_LINK_MAX_DAYS, `a link may work for at most ${SHARE_LINK_MAX_DAYS} days`)
       .nullable()
       .optional(),
+  })
+  .strict();
+
+/** Points one POST /api/sweeps may ask for (it is answered directly; larger grids are maps, computed by workers). */
+export const API_SWEEP_MAX_POINTS = 100;
+const sweepEnd = (which: string) =>
+  z.number({ error: `${which} must be a number, in SI units (s, m)` }).positive(`${which} must be positive (the points are spaced evenly in its logarithm)`).finite();
+/**
+ * One parameter of a scenario varied over points spaced evenly in the logarithm between fromValue and toValue, of
+ * a document sent with the request or of a saved scenario (projectId and scenarioId; the caller must be able to
+ * read it). Answered as JSON or, with format "csv", as a CSV file with the inputs in its header.
+ */
+export const sweepRequestSchema = z
+  .object({
+    document: z.unknown().optional(),
+    projectId: z.uuid("projectId must be a project's id").optional(),
+    scenarioId: z.uuid("scenarioId must be a scenario's id").optional(),
+    parameter: z.enum(SWEEP_PARAMETERS, { error: `parameter must be one of ${SWEEP_PARAMETERS.join(", ")}` }),
+    fromValue: sweepEnd("fromValue"),
+    toValue: sweepEnd("toValue"),
+    points: z
+      .number({ error: "points must be a whole number" })
+      .int("points must be a whole number")
+      .min(2, "a sweep takes at least 2 points")
+      .max(API_SWEEP_MAX_POINTS, `a sweep through the API takes at most ${API_SWEEP_MAX_POINTS} points (a larger grid is a map)`),
+    format: z.enum(["json", "csv"], { error: "format must be json or csv" }).default("json"),
+  })
+  .strict()
+  .superRefine((v, ctx) => {
+    const saved = v.projectId !== undefined || v.scenarioId !== undefined;
+    if (saved && v.document !== undefined) ctx.addIssue({ code: "custom", path: ["document"], message: "send a document or name a saved scenario (projectId and scenarioId), not both" });
+    else if (!saved && v.document === undefined) ctx.addIssue({ code: "custom", path: ["document"], message: "send the scenario document to sweep, or name a saved scenario with projectId and scenarioId" });
+    else if (saved && (v.projectId === undefined || v.scenarioId === undefined)) ctx.addIssue({ code: "custom", path: [v.projectId === undefined ? "projectId" : "scenarioId"], message: "a saved scenario is named by both projectId and scenarioId" });
+  });
+export type SweepRequestInput = z.input<typeof sweepRequestSchema>;
+
+export const API_TOKEN_MAX_DAYS = 365;
+export const apiTokenCreateSchema = z
+  .object({
+    name: keptText().trim().min(1, "name the token after what uses it, e.g. “analysis notebook”").max(100, "use at most 100 characters"),
+    scope: z.enum(["read", "read-write"], { error: "scope must be read or read-write" }),
+    /** The one project the token may act in; null or absent: every project of the account. */
+    projectId: z.uuid("choose a project from the list").nullable().optional(),
+    /** Days until the token stops working; null: until it is revoked. */
+    expiresInDays: z
+      .number({ error: "expiry must be a number of days" })
+      .int("expiry must be a whole number of days")
+      .min(1, "a token must work for at least a day")
+      .max(API_TOKEN_MAX_DAYS, `a token may work for at most ${API_TOKEN_MAX_DAYS} days`)
+      .nullable(),
   })
   .strict();
 

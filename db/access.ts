@@ -8,10 +8,16 @@
  * Two kinds of token stand in for a membership here: an invitation (it may be accepted once, before it expires,
  * by the account with the address it was sent to) and a share link (its holder, signed in or not, may read the
  * one scenario it names while it is live, and do nothing else). A dead token of either kind is not found.
+ *
+ * A personal API token (db/api-tokens.ts) is its account acting through a script: the account's own rights,
+ * narrowed, never widened. A read-only token may only do the reading actions; a token restricted to one project
+ * is a stranger to every other project (not found), and does nothing outside projects that changes anything
+ * (no new projects, no site administration). The account itself (its name, sessions, tokens) and invitations are
+ * managed from a signed-in browser only.
  */
 import type { Kysely } from "kysely";
 import type { ProjectAction } from "../contracts/dto";
-import type { Database, ProjectRole, SiteRole } from "./schema";
+import type { ApiTokenScope, Database, ProjectRole, SiteRole } from "./schema";
 
 export type { ProjectAction };
 import { AppError, forbidden, notFound } from "./errors";
@@ -20,6 +26,16 @@ import { isUuid } from "./ids";
 export interface Actor {
   userId: string;
   siteRole: SiteRole;
+  /** Present when the caller authenticated with a personal API token rather than a browser session. */
+  token?: TokenGrant;
+}
+
+/** What a personal API token narrows its account's rights to. */
+export interface TokenGrant {
+  tokenId: string;
+  scope: ApiTokenScope;
+  /** The one project the token may act in, or null for every project of the account. */
+  projectId: string | null;
 }
 
 
@@ -50,12 +66,26 @@ const siteGrants: Record<SiteRole, ReadonlySet<SiteAction>> = {
   member: new Set(),
 };
 
+/** The actions that change nothing: all a read-only token may do. */
+const readingActions: ReadonlySet<ProjectAction> = new Set(["project:read", "members:read", "members:audit", "scenario:read"]);
+
 export function roleAllows(role: ProjectRole, action: ProjectAction): boolean {
   return projectGrants[role].has(action);
 }
 
-export function allowedProjectActions(role: ProjectRole): ProjectAction[] {
-  return [...projectGrants[role]];
+/** What the caller may do with `role` in a project: the role's grants, less what the caller's token leaves out. */
+export function allowedProjectActions(role: ProjectRole, actor?: Actor): ProjectAction[] {
+  return [...projectGrants[role]].filter((action) => actor?.token?.scope !== "read" || readingActions.has(action));
+}
+
+/** Throws unless the caller may change things at all: a read-only token may not. */
+export function assertMayWrite(actor: Actor): void {
+  if (actor.token?.scope === "read") throw forbidden("this API token is read-only; make a read-and-write token on your account page to change things");
+}
+
+/** Throws unless the caller may act outside any one project (create projects, administer the site). */
+export function assertNotProjectBound(actor: Actor): void {
+  if (actor.token?.projectId) throw forbidden("this API token is restricted to one project; it cannot act outside it");
 }
 
 /** Throws unless the caller (with `role` in the project, or null when not a member) may do `action`. */
@@ -82,14 +112,26 @@ export async function roleInProject(db: Kysely<Database>, projectId: string, use
  * write it guards see the same state.
  */
 export async function requireProjectAction(db: Kysely<Database>, actor: Actor, projectId: string, action: ProjectAction): Promise<ProjectRole> {
-  const role = await roleInProject(db, projectId, actor.userId);
+  const role = await actorRoleInProject(db, actor, projectId);
   assertProjectAccess(role, action);
+  if (!readingActions.has(action)) assertMayWrite(actor);
   return role;
+}
+
+/**
+ * The caller's role in a project as the policy sees it: their membership's role, or null when they are not a
+ * member or their token is restricted to another project (to which the project is then a stranger's).
+ */
+export async function actorRoleInProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<ProjectRole | null> {
+  if (actor.token?.projectId && actor.token.projectId !== projectId) return null;
+  return roleInProject(db, projectId, actor.userId);
 }
 
 export function assertSiteAccess(actor: Actor | null, action: SiteAction): asserts actor is Actor {
   if (!actor) throw new AppError("unauthenticated", "sign in first");
   if (!siteGrants[actor.siteRole].has(action)) throw forbidden("only a site administrator may do this");
+  assertNotProjectBound(actor);
+  if (action !== "users:list") assertMayWrite(actor);
 }
 
 /** The parts of a stored token that decide whether it still works. */

@@ -29,10 +29,13 @@ function limiter(): RateLimiterPostgres {
   return holder.branchlineComputeLimiter!.limiter;
 }
 
-/** Counts one computation for the key: null when allowed, else the seconds until the next one is. */
-export async function consumeComputePoint(key: string): Promise<number | null> {
+/**
+ * Counts `computations` (one, or a sweep's points, at most a minute's worth) for the key: null when allowed, else
+ * the seconds until they are.
+ */
+export async function consumeComputePoint(key: string, computations = 1): Promise<number | null> {
   try {
-    await limiter().consume(key);
+    await limiter().consume(key, Math.min(Math.max(1, computations), computeRatePerMinute()));
     return null;
   } catch (rejection) {
     if (rejection instanceof RateLimiterRes) return Math.ceil(rejection.msBeforeNext / 1000);

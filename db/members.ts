@@ -1,6 +1,6 @@
 import "server-only";
 import type { Kysely } from "kysely";
-import { type Actor, assertProjectAccess, requireProjectAction, roleInProject } from "./access";
+import { type Actor, actorRoleInProject, assertMayWrite, assertProjectAccess, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
@@ -150,9 +150,10 @@ export async function transferOwnership(db: Kysely<Database>, actor: Actor, proj
 /** Removes a member (an owner removing anyone, or any member leaving). The last owner cannot leave. */
 export async function removeMember(db: Kysely<Database>, actor: Actor, projectId: string, userId: string): Promise<void> {
   await db.transaction().execute(async (trx) => {
-    const callerRole = await roleInProject(trx, projectId, actor.userId);
+    const callerRole = await actorRoleInProject(trx, actor, projectId);
     const leaving = actor.userId === userId;
     assertProjectAccess(callerRole, leaving ? "project:read" : "members:manage");
+    assertMayWrite(actor);
     await lockMembers(trx, projectId);
     const current = await existingMember(trx, projectId, userId);
     if (current.role === "owner" && (await countOwners(trx, projectId)) === 1) {

@@ -1,6 +1,6 @@
 import "server-only";
 import { type InferResult, type Kysely, sql } from "kysely";
-import { type Actor, type ProjectAction, allowedProjectActions, requireProjectAction } from "./access";
+import { type Actor, type ProjectAction, allowedProjectActions, assertMayWrite, assertNotProjectBound, requireProjectAction } from "./access";
 import type { Database, ProjectRole } from "./schema";
 import type { ProjectDto } from "../contracts/dto";
 
@@ -23,13 +23,13 @@ function projectQuery(db: Kysely<Database>, userId: string) {
 
 type ProjectRow = InferResult<ReturnType<typeof projectQuery>>[number];
 
-function toDto(row: ProjectRow): ProjectDto {
+function toDto(row: ProjectRow, actor: Actor): ProjectDto {
   return {
     id: row.id,
     name: row.name,
     description: row.description,
     role: row.role,
-    can: allowedProjectActions(row.role),
+    can: allowedProjectActions(row.role, actor),
     scenarioCount: Number(row.scenarioCount),
     lastChangedAt: new Date(row.lastChangedAt).toISOString(),
     createdAt: row.createdAt.toISOString(),
@@ -37,13 +37,16 @@ function toDto(row: ProjectRow): ProjectDto {
 }
 
 export async function listProjects(db: Kysely<Database>, actor: Actor): Promise<ProjectDto[]> {
-  const rows = await projectQuery(db, actor.userId).orderBy("lastChangedAt", "desc").execute();
-  return rows.map(toDto);
+  // A token restricted to one project sees that project alone.
+  const restrictedTo = actor.token?.projectId;
+  const query = restrictedTo ? projectQuery(db, actor.userId).where("p.id", "=", restrictedTo) : projectQuery(db, actor.userId);
+  const rows = await query.orderBy("lastChangedAt", "desc").execute();
+  return rows.map((row) => toDto(row, actor));
 }
 
 export async function getProject(db: Kysely<Database>, actor: Actor, projectId: string): Promise<ProjectDto> {
   await requireProjectAction(db, actor, projectId, "project:read");
-  return toDto(await projectQuery(db, actor.userId).where("p.id", "=", projectId).executeTakeFirstOrThrow());
+  return toDto(await projectQuery(db, actor.userId).where("p.id", "=", projectId).executeTakeFirstOrThrow(), actor);
 }
 
 export async function createProject(
@@ -51,6 +54,8 @@ export async function createProject(
   actor: Actor,
   input: { name: string; description?: string },
 ): Promise<ProjectDto> {
+  assertNotProjectBound(actor);
+  assertMayWrite(actor);
   const id = await db.transaction().execute(async (trx) => {
     const project = await trx
       .insertInto("projects")

@@ -3,9 +3,9 @@
  * between them). Generated<> marks columns the database fills in.
  */
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from "kysely";
-import type { AuditAction, InvitedRole, ProjectRole, SiteRole } from "../contracts/dto";
+import type { ApiTokenScope, AuditAction, InvitedRole, ProjectRole, SiteRole } from "../contracts/dto";
 
-export type { AuditAction, InvitedRole, ProjectRole, SiteRole };
+export type { ApiTokenScope, AuditAction, InvitedRole, ProjectRole, SiteRole };
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json = ColumnType<unknown, string, string>;
@@ -177,6 +177,22 @@ export interface ComputeRateLimitsTable {
   expire: string | null;
 }
 
+/** A personal API token (Authorization: Bearer …); see db/api-tokens.ts. */
+export interface ApiTokensTable {
+  id: Generated<string>;
+  userId: string;
+  name: string;
+  /** SHA-256 (hex) of the token; the token itself is shown once and never stored. */
+  tokenHash: string;
+  scope: ApiTokenScope;
+  /** When set, the token acts only in this project; everywhere else its holder is a stranger. */
+  projectId: string | null;
+  createdAt: Generated<Date>;
+  expiresAt: Date | null;
+  lastUsedAt: Date | null;
+  revokedAt: Date | null;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -193,6 +209,7 @@ export interface Database {
   attachments: AttachmentsTable;
   scenarioResults: ScenarioResultsTable;
   computeRateLimits: ComputeRateLimitsTable;
+  apiTokens: ApiTokensTable;
 }
 
 export type User = Selectable<UsersTable>;
@@ -216,3 +233,4 @@ export type ProjectAuditEntry = Selectable<ProjectAuditTable>;
 export type NewProjectAuditEntry = Insertable<ProjectAuditTable>;
 export type Attachment = Selectable<AttachmentsTable>;
 export type NewAttachment = Insertable<AttachmentsTable>;
+export type ApiToken = Selectable<ApiTokensTable>;

@@ -91,30 +91,54 @@ export async function consumeSignInSlot(db: Kysely<Database>, email: string, add
   try {
     await db.transaction().execute(async (trx) => {
       for (const { key, account, policy } of keys) {
-        const forgotten = sql<boolean>`l.updated_at < now() - make_interval(hours => ${FORGET_AFTER_HOURS})`;
-        const next = sql<number>`(case when ${forgotten} then 0 else l.failures end) + 1`;
-        const row = await sql<{ failures: number }>`
-          insert into sign_in_limits as l (key, account, failures, next_attempt_at, updated_at)
-          values (${key}, ${account}, 1, now() + ${delayFor(sql<number>`1`, policy)}, now())
-          on conflict (key) do update set
-            failures = ${next},
-            next_attempt_at = now() + ${delayFor(next, policy)},
-            updated_at = now()
-          where l.next_attempt_at <= now() or ${forgotten}
-          returning failures`.execute(trx);
-        if (row.rows.length === 0) throw new KeyClosed(key);
+        if (!(await takeSlot(trx, key, account, policy))) throw new KeyClosed(key);
       }
     });
     return { allowed: true, keys };
   } catch (error) {
     if (!(error instanceof KeyClosed)) throw error;
-    const open = await db
-      .selectFrom("signInLimits")
-      .select(sql<number>`ceil(extract(epoch from max(next_attempt_at) - now()))`.as("seconds"))
-      .where("key", "in", keys.map((k) => k.key))
-      .executeTakeFirst();
-    return { allowed: false, retryAfterSeconds: Math.max(1, Number(open?.seconds ?? 1)) };
+    return { allowed: false, retryAfterSeconds: (await secondsUntilOpen(db, keys.map((k) => k.key))) ?? 1 };
   }
+}
+
+/** Takes one slot on a key when it is open (counting one more attempt against it); false when it is closed. */
+async function takeSlot(db: Kysely<Database>, key: string, account: string | null, policy: LimitPolicy): Promise<boolean> {
+  const forgotten = sql<boolean>`l.updated_at < now() - make_interval(hours => ${FORGET_AFTER_HOURS})`;
+  const next = sql<number>`(case when ${forgotten} then 0 else l.failures end) + 1`;
+  const row = await sql<{ failures: number }>`
+    insert into sign_in_limits as l (key, account, failures, next_attempt_at, updated_at)
+    values (${key}, ${account}, 1, now() + ${delayFor(sql<number>`1`, policy)}, now())
+    on conflict (key) do update set
+      failures = ${next},
+      next_attempt_at = now() + ${delayFor(next, policy)},
+      updated_at = now()
+    where l.next_attempt_at <= now() or ${forgotten}
+    returning failures`.execute(db);
+  return row.rows.length > 0;
+}
+
+/** Seconds until every one of `keys` is open again, or null when all are open now. */
+async function secondsUntilOpen(db: Kysely<Database>, keys: string[]): Promise<number | null> {
+  const row = await db
+    .selectFrom("signInLimits")
+    .select(sql<number | null>`ceil(extract(epoch from max(next_attempt_at) - now()))`.as("seconds"))
+    .where("key", "in", keys)
+    .where("nextAttemptAt", ">", sql<Date>`now()`)
+    .executeTakeFirst();
+  return row?.seconds == null ? null : Math.max(1, Number(row.seconds));
+}
+
+/**
+ * The same back-off for a credential that is not a password (a personal API token), keyed by client address:
+ * `limitKeyWait` before the credential is looked up (null when the key is open), `countLimitFailure` after an
+ * unknown one. Unlike a password attempt, a success takes no slot, so that a script's every request costs one
+ * read here; concurrent guesses can overshoot the free failures by the number in flight, which is harmless against
+ * a 256-bit secret and still closes the key for everyone after.
+ */
+export const limitKeyWait = (db: Kysely<Database>, key: string) => secondsUntilOpen(db, [key]);
+
+export async function countLimitFailure(db: Kysely<Database>, key: string, policy: LimitPolicy): Promise<void> {
+  await takeSlot(db, key, null, policy);
 }
 
 /**

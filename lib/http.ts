@@ -63,6 +63,16 @@ export async function requireActor(req: NextRequest): Promise<Actor> {
   return actor;
 }
 
+/**
+ * The caller, signed in with a browser session: the account itself (its name, sessions, API tokens) and
+ * invitations are not for API tokens, so a token here answers 403 (see db/access.ts).
+ */
+export async function requireSessionActor(req: NextRequest): Promise<Actor> {
+  const actor = await requireActor(req);
+  if (actor.token) throw new AppError("forbidden", "API tokens cannot manage the account or accept invitations; sign in in a browser to do this");
+  return actor;
+}
+
 type RouteContext<P> = { params: Promise<P> };
 
 /**

@@ -1,6 +1,6 @@
 /**
  * The OpenAPI 3.1 description of Branchline's JSON API, generated from the very zod schemas the route handlers
- * enforce (lib/contracts.ts and the scenario schema), by @asteasolutions/zod-to-openapi. One entry per route
+ * enforce (contracts/requests.ts and the scenario schema), by @asteasolutions/zod-to-openapi. One entry per route
  * and method under app/api; a unit test fails when a route has none, or an entry names no route.
  * Pure (zod and the generator only): served at /api/openapi.json and read by the API reference page.
  */
@@ -15,7 +15,7 @@ extendZodWithOpenApi(z);
 type Method = "get" | "post" | "put" | "patch" | "delete";
 
 /** Who may call an operation, in words (the authorization table in the integration tests is the proof). */
-type Access = "anyone" | "signed in" | "project viewer" | "project editor" | "project owner" | "site administrator" | "share link";
+type Access = "anyone" | "signed in" | "browser session" | "project viewer" | "project editor" | "project owner" | "site administrator" | "share link";
 
 interface Operation {
   method: Method;
@@ -48,10 +48,15 @@ const scenarioFileSchema = z.object({
 export const operations: Operation[] = [
   { method: "post", path: "/api/compute", tag: "Compute", summary: "Compute the decoherence budget of a scenario document", access: "anyone", body: { schema: scenarioDocumentSchema }, success: { status: 200, description: "The result (resultVersion 1): every channel's quanta, rates, decoherence and flags" } },
 
+  { method: "post", path: "/api/sweeps", tag: "Compute", summary: "Sweep one parameter of a scenario document, or of a saved scenario, over points spaced evenly in its logarithm", access: "anyone", body: { schema: contracts.sweepRequestSchema, description: `A document (anyone) or a saved scenario's projectId and scenarioId (its readers); at most ${contracts.API_SWEEP_MAX_POINTS} points; format json or csv` }, success: { status: 200, description: "JSON { sweep: { parameter, unit, spacing, points: [{ x, totalQuanta, decoherence, electromagneticQuanta, gravitationalQuanta }] } }, or with format csv a CSV file whose header lines give the inputs" } },
+
   { method: "post", path: "/api/users", tag: "Account", summary: "Create an account", access: "anyone", body: { schema: contracts.signUpSchema }, success: { status: 201, description: "Signed up (the same answer whether or not the address already has an account; its owner is e-mailed instead)" } },
   { method: "get", path: "/api/account", tag: "Account", summary: "The signed-in account", access: "signed in", success: { status: 200, description: "The account" } },
-  { method: "patch", path: "/api/account", tag: "Account", summary: "Change the account's name", access: "signed in", body: { schema: contracts.accountUpdateSchema }, success: { status: 200, description: "The account" } },
-  { method: "delete", path: "/api/account/sessions", tag: "Account", summary: "Sign out everywhere: end every session of the account, this one included", access: "signed in", success: { status: 204, description: "Every session ended" } },
+  { method: "patch", path: "/api/account", tag: "Account", summary: "Change the account's name", access: "browser session", body: { schema: contracts.accountUpdateSchema }, success: { status: 200, description: "The account" } },
+  { method: "delete", path: "/api/account/sessions", tag: "Account", summary: "Sign out everywhere: end every session of the account, this one included", access: "browser session", success: { status: 204, description: "Every session ended" } },
+  { method: "get", path: "/api/account/tokens", tag: "Account", summary: "The account's personal API tokens (never the tokens themselves)", access: "browser session", success: { status: 200, description: "The tokens: name, scope, project, status, created, expires, last used" } },
+  { method: "post", path: "/api/account/tokens", tag: "Account", summary: "Make a personal API token (read, or read and write; optionally for one project)", access: "browser session", body: { schema: contracts.apiTokenCreateSchema }, success: { status: 201, description: "The token (shown once, here) and its description" } },
+  { method: "delete", path: "/api/account/tokens/{tokenId}", tag: "Account", summary: "Revoke a personal API token", access: "browser session", success: { status: 204, description: "Revoked: the token stops working at once" } },
   { method: "post", path: "/api/password-reset", tag: "Account", summary: "Send a password-reset link by e-mail", access: "anyone", body: { schema: contracts.passwordResetRequestSchema }, success: { status: 202, description: "Accepted (the same answer whether or not the address has an account)" } },
   { method: "post", path: "/api/password-reset/confirm", tag: "Account", summary: "Set a new password with a reset token", access: "anyone", body: { schema: contracts.passwordResetConfirmSchema }, success: { status: 200, description: "The password is changed" } },
 
@@ -74,7 +79,7 @@ export const operations: Operation[] = [
   { method: "post", path: "/api/projects/{projectId}/invitations", tag: "Members", summary: "Invite an address by e-mail", access: "project owner", body: { schema: contracts.invitationCreateSchema }, success: { status: 201, description: "The invitation (its link goes out by e-mail only)" } },
   { method: "delete", path: "/api/projects/{projectId}/invitations/{invitationId}", tag: "Members", summary: "Revoke an invitation", access: "project owner", success: { status: 204, description: "Revoked" } },
   { method: "post", path: "/api/projects/{projectId}/invitations/{invitationId}/resend", tag: "Members", summary: "Send an invitation again with a fresh link", access: "project owner", success: { status: 200, description: "The invitation" } },
-  { method: "post", path: "/api/invitations/{token}/accept", tag: "Members", summary: "Accept an invitation sent to the caller's address", access: "signed in", success: { status: 200, description: "The project joined" } },
+  { method: "post", path: "/api/invitations/{token}/accept", tag: "Members", summary: "Accept an invitation sent to the caller's address", access: "browser session", success: { status: 200, description: "The project joined" } },
 
   { method: "get", path: "/api/projects/{projectId}/scenarios", tag: "Scenarios", summary: "A page of the project's scenarios, sorted and filtered", access: "project viewer", query: contracts.scenarioListQuerySchema, success: { status: 200, description: "The page and the total count" } },
   { method: "post", path: "/api/projects/{projectId}/scenarios", tag: "Scenarios", summary: "Create a scenario", access: "project editor", body: { schema: contracts.scenarioCreateSchema.extend({ document: scenarioDocumentSchema.optional() }) }, success: { status: 201, description: "The scenario at version 1" } },
@@ -115,6 +120,12 @@ export function openApiDocument() {
   const registry = new OpenAPIRegistry();
   const error = registry.register("Error", errorSchema);
   registry.registerComponent("securitySchemes", "session", { type: "apiKey", in: "cookie", name: "next-auth.session-token", description: "The browser session after signing in" });
+  registry.registerComponent("securitySchemes", "apiToken", {
+    type: "http",
+    scheme: "bearer",
+    description:
+      "A personal API token from the account page (Authorization: Bearer bltok_…): its account's access, narrowed to its scope (read, or read and write) and, when it names one, to one project (every other project is then not found). Revoked or expired: 401.",
+  });
   for (const op of operations) {
     const body = op.body && {
       description: op.body.description,
@@ -126,7 +137,7 @@ export function openApiDocument() {
       tags: [op.tag],
       summary: op.summary,
       description: `Who may call it: ${op.access}.`,
-      security: op.access === "anyone" || op.access === "share link" ? [] : [{ session: [] }],
+      security: op.access === "anyone" || op.access === "share link" ? [] : op.access === "browser session" ? [{ session: [] }] : [{ session: [] }, { apiToken: [] }],
       request: { params: pathParameters(op.path), query: op.query, body },
       responses: {
         [op.success.status]: {

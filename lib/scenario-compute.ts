@@ -41,7 +41,7 @@ function overBudgetMessage(budgetMs: number): string {
 const tooCostlyMessage = "this document would cost more to compute than the server spends on one request: relax the numerics named in the fields";
 
 /** The error a failed outcome answers with: 400 for a document that cannot be computed, 422 for one too costly, 503 when busy. */
-function failure(outcome: Exclude<PoolOutcome, { kind: "result" }>, document: unknown): AppError {
+export function computeFailure(outcome: Exclude<PoolOutcome, { kind: "result" }>, document: unknown): AppError {
   switch (outcome.kind) {
     case "issues":
       return new AppError("validation_failed", "the scenario document cannot be computed", outcome.issues);
@@ -60,7 +60,7 @@ function failure(outcome: Exclude<PoolOutcome, { kind: "result" }>, document: un
 export async function computeRequested(input: unknown): Promise<ScenarioResult> {
   const outcome = await computePool().run(input);
   if (outcome.kind === "result") return outcome.result;
-  throw failure(outcome, input);
+  throw computeFailure(outcome, input);
 }
 
 /**
@@ -88,7 +88,7 @@ function savedComputation(outcome: PoolOutcome, document: unknown): SavedComputa
     const reasons = outcome.issues.map((i) => i.message).join("; ");
     return { result: null, resultIssues: outcome.issues, error: new AppError("unprocessable", `this scenario cannot be computed: ${reasons}`, outcome.issues) };
   }
-  const error = failure(outcome, document);
+  const error = computeFailure(outcome, document);
   return { result: null, resultIssues: error.fields ?? [{ path: "", message: error.message }], error };
 }
 

@@ -12,16 +12,15 @@ import { parseArgs } from "node:util";
 import { exportDiagramDrawing, type StandaloneOptions } from "../canvas/export/export-figure";
 import { measureWith, renderFigureFile, type FigureFileRequest } from "../canvas/export/render-figure";
 import { buildDiagramScene } from "../canvas/kernels/diagram/scene";
-import { defaultSweepRange } from "../canvas/kernels/sweep-range";
 import { diagramHeightFor } from "../components/export/figure-size";
 import { DEFAULT_SWEEP_FIGURE_SIZE, SWEEP_PARAMETER_WORDS, sweepDrawing } from "../components/export/sweep-export";
 import { BackgroundInputError } from "../physics/backgrounds";
 import { ScenarioInputError } from "../physics/scenario/input-error";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { MAX_SWEEP_POINTS, parameterDimension, sweepScenario, type SweepParameter } from "../physics/sweeps";
-import { parseQuantity } from "../physics/units";
+import { MAX_SWEEP_POINTS, sweepScenario } from "../physics/sweeps";
 import { InputRefusal, readInputJson, refuse, refuseIssues, type InputIssue } from "./scenario-input";
 import { nodeFigureToolkit } from "./figure-toolkit";
+import { sweepBounds } from "./sweep-options";
 import type { FigureToolkit } from "../canvas/export/render-figure";
 
 const USAGE = [
@@ -118,23 +117,7 @@ export async function figureCommand(argv: string[], given?: FigureToolkit): Prom
   }
 
   function sweep(doc: ScenarioDocument) {
-    const parameter = oneOf("vary", args.values.vary ?? (doc.protocol.kind === "segments" ? "recombination-time" : "lab-distance"), Object.keys(SWEEP_PARAMETER_WORDS) as SweepParameter[]);
-    const range = defaultSweepRange(doc, parameter);
-    const dimension = parameterDimension(parameter);
-    const bound = (name: "from" | "to", fallback: number | undefined): number => {
-      const text = args.values[name];
-      if (text === undefined) {
-        if (fallback === undefined) issues.push({ path: `--${name}`, message: "this scenario has no default range for the sweep: give --from and --to" });
-        return fallback ?? NaN;
-      }
-      const value = parseQuantity(text, dimension);
-      if (value.ok) return value.valueSI;
-      issues.push({ path: `--${name}`, message: value.message });
-      return NaN;
-    };
-    const fromValue = bound("from", range?.from);
-    const toValue = bound("to", range?.to);
-    if (issues.length === 0 && !(toValue > fromValue)) issues.push({ path: "--to", message: "must be above --from" });
+    const { parameter, fromValue, toValue } = sweepBounds(doc, args.values, issues);
     if (issues.length > 0) refuseIssues("the options cannot be used:", issues);
     let result;
     try {

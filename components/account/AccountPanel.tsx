@@ -15,6 +15,7 @@ import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
 import { displayNameSchema } from "@/contracts/requests";
+import { ApiTokensPanel } from "./ApiTokensPanel";
 
 const nameSchema = z.object({ name: displayNameSchema });
 
@@ -28,6 +29,15 @@ export function AccountPanel() {
 }
 
 function AccountDetails({ user }: { user: UserDto }) {
+  return (
+    <div className="space-y-14">
+      <AccountBasics user={user} />
+      <ApiTokensPanel />
+    </div>
+  );
+}
+
+function AccountBasics({ user }: { user: UserDto }) {
   return (
     <div className="grid max-w-3xl gap-12 md:grid-cols-2">
       <NameForm user={user} />

@@ -5,7 +5,7 @@ import { useCreateShareLink, useRevokeShareLink, useShareLinks, type ShareLinkDt
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { EmptyState } from "@/components/ui/EmptyState";
-import { SelectField, TextField } from "@/components/ui/Field";
+import { TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
@@ -13,9 +13,10 @@ import { TimeStamp } from "@/components/ui/TimeStamp";
 import { embedSnippet, type EmbedOptions } from "@/components/export/embed-options";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
 import { shareLinkCreateSchema } from "@/contracts/requests";
+import { daysOrNull, type ExpiryChoice, ExpiryField, secretStatusWords } from "./ExpiryField";
 import { RevokeButton, RevokeDialog, useRevokeConfirmation } from "./RevokeRowAction";
 
-const expiryChoices: { days: number | null; label: string }[] = [
+const expiryChoices: ExpiryChoice[] = [
   { days: null, label: "Until revoked" },
   { days: 1, label: "1 day" },
   { days: 7, label: "7 days" },
@@ -32,11 +33,6 @@ const columns = [
   { label: "Actions", hiddenLabel: true },
 ];
 
-const statusWords: Record<ShareLinkDto["status"], { text: string; className: string; icon: string }> = {
-  active: { text: "active", className: "text-ink", icon: "●" },
-  expired: { text: "expired", className: "text-caution", icon: "⚠" },
-  revoked: { text: "revoked", className: "text-ink-faint", icon: "✕" },
-};
 
 /** The embed code of a share link's URL (the embed takes the same token). */
 function embedCodeOf(url: string, options: Partial<EmbedOptions> = {}): string {
@@ -45,7 +41,7 @@ function embedCodeOf(url: string, options: Partial<EmbedOptions> = {}): string {
 }
 
 /** Copies to the clipboard, saying so; where the browser refuses, the URL stays selectable on the page. */
-function CopyButton({ url, label, words = "Copy URL" }: { url: string; label: string; words?: string }) {
+export function CopyButton({ url, label, words = "Copy URL" }: { url: string; label: string; words?: string }) {
   const [copied, setCopied] = useState<"yes" | "failed" | null>(null);
   return (
     <button
@@ -117,18 +113,7 @@ function CreateLinkForm({ projectId, scenarioId, onCreated }: { projectId: strin
       <FormProblem problem={problem} />
       <div className="flex flex-wrap items-start gap-4">
         <TextField label="Label" placeholder="for the referee" autoComplete="off" className="min-w-64 flex-1" error={errors.label?.message} {...form.register("label")} />
-        <SelectField
-          label="Works for"
-          className="w-44"
-          error={errors.expiresInDays?.message}
-          {...form.register("expiresInDays", { setValueAs: (value: string | number | null) => (value === "" || value === null ? null : Number(value)) })}
-        >
-          {expiryChoices.map((choice) => (
-            <option key={choice.label} value={choice.days ?? ""}>
-              {choice.label}
-            </option>
-          ))}
-        </SelectField>
+        <ExpiryField choices={expiryChoices} className="w-44" error={errors.expiresInDays?.message} registration={form.register("expiresInDays", { setValueAs: daysOrNull })} />
         <button type="submit" disabled={isSubmitting} className={`${buttonStyles.primary} mt-6`}>
           {isSubmitting ? "Creating…" : "Create link"}
         </button>
@@ -189,7 +174,7 @@ export function ShareLinksPanel({ projectId, scenarioId }: { projectId: string; 
                 <TableHead columns={columns} />
                 <tbody>
                   {list.map((link) => {
-                    const status = statusWords[link.status];
+                    const status = secretStatusWords[link.status];
                     return (
                       <tr key={link.id} className={tableStyles.row}>
                         <td className={`${tableStyles.cell} font-semibold`}>{link.label}</td>

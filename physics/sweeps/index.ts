@@ -1,4 +1,4 @@
-export { sweepScenario, logSpaced, MAX_SWEEP_POINTS, type SweepRequest, type SweepPoint, type SweepResult, type SweepOptions } from "./sweep";
+export { sweepScenario, sweepPointOf, sweepResultOf, sweepDocuments, logSpaced, MAX_SWEEP_POINTS, type SweepRequest, type SweepPoint, type SweepResult, type SweepOptions } from "./sweep";
 export { optimiseRecombinationTime, type RecombinationOptimum, type RecombinationOptimumRequest } from "./optimise";
 export {
   withParameter,
@@ -11,3 +11,4 @@ export {
   type EnvironmentSweepParameter,
   type SweepUnit,
 } from "./vary";
+export { SWEEP_PARAMETERS } from "./parameters";

@@ -5,6 +5,7 @@
  * channel's ⟨N⟩ (the field channels and the environment's) and the whole budget's, so a chart draws one curve each.
  */
 import { computeScenario, type ComputeOptions } from "../compute";
+import type { ScenarioResult } from "../result";
 import type { Quantity } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
@@ -64,21 +65,35 @@ function validate(request: SweepRequest): void {
 }
 
 export function sweepScenario(document: ScenarioDocument, request: SweepRequest, options: SweepOptions = {}): SweepResult {
-  validate(request);
-  const xs = logSpaced(request.fromValue, request.toValue, request.points);
-  const points = xs.map((x, i) => {
-    const result = computeScenario(withParameter(document, request.parameter, x), options.compute);
-    options.onProgress?.(i + 1, xs.length);
-    return {
-      x,
-      totalQuanta: result.combined.totalQuanta,
-      decoherence: result.combined.decoherence,
-      electromagneticQuanta: result.electromagnetic.totalQuanta,
-      gravitationalQuanta: result.gravitational.totalQuanta,
-      environmentQuanta: (result.environment?.channels ?? []).map((ch) => ({ channel: ch.channel, quanta: ch.totalQuanta })),
-      budgetTotalQuanta: (result.environment?.total ?? result.combined).totalQuanta,
-      budgetDecoherence: (result.environment?.total ?? result.combined).decoherence,
-    };
+  const runs = sweepDocuments(document, request);
+  const points = runs.map(({ x, document: varied }, i) => {
+    const result = computeScenario(varied, options.compute);
+    options.onProgress?.(i + 1, runs.length);
+    return sweepPointOf(x, result);
   });
-  return { parameter: request.parameter, unit: parameterUnit(request.parameter), spacing: "log", points };
+  return sweepResultOf(request.parameter, points);
+}
+
+/** One point of a sweep from the result computed at it (here, in a server's compute threads, or a worker's). */
+export function sweepPointOf(x: number, result: ScenarioResult): SweepPoint {
+  return {
+    x,
+    totalQuanta: result.combined.totalQuanta,
+    decoherence: result.combined.decoherence,
+    electromagneticQuanta: result.electromagnetic.totalQuanta,
+    gravitationalQuanta: result.gravitational.totalQuanta,
+    environmentQuanta: (result.environment?.channels ?? []).map((ch) => ({ channel: ch.channel, quanta: ch.totalQuanta })),
+    budgetTotalQuanta: (result.environment?.total ?? result.combined).totalQuanta,
+    budgetDecoherence: (result.environment?.total ?? result.combined).decoherence,
+  };
+}
+
+export function sweepResultOf(parameter: SweepParameter, points: SweepPoint[]): SweepResult {
+  return { parameter, unit: parameterUnit(parameter), spacing: "log", points };
+}
+
+/** The documents a sweep computes, one per point, with the parameter's values: refused (with a path) when invalid. */
+export function sweepDocuments(document: ScenarioDocument, request: SweepRequest): { x: number; document: ScenarioDocument }[] {
+  validate(request);
+  return logSpaced(request.fromValue, request.toValue, request.points).map((x) => ({ x, document: withParameter(document, request.parameter, x) }));
 }

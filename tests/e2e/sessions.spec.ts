@@ -82,3 +82,36 @@ test("a sign-in attempt is recorded under the socket's address, not a forged X-F
   expect(rows).toHaveLength(1);
   expect(["127.0.0.1", "::1"]).toContain(rows[0].address);
 });
+
+test("a personal API token made on the account page is shown once, works as a Bearer token within its scope, and stops when revoked", async ({ browser, baseURL }) => {
+  const email = `notebook-${Date.now()}@example.test`;
+  const page = await signedInAs(browser, "Notebook Keeper", email);
+  await page.goto("/account");
+  await hydrated(page);
+  const panel = page.getByRole("region", { name: "API tokens" });
+  await panel.getByLabel("Name").fill("e2e notebook");
+  await panel.getByLabel("Access").selectOption("read");
+  await panel.getByRole("button", { name: "Create token" }).click();
+  const shown = panel.getByLabel("New API token");
+  await expect(shown).toHaveValue(/^bltok_/);
+  const token = await shown.inputValue();
+  await expect(panel.getByRole("row", { name: /e2e notebook/ })).toContainText("Read");
+
+  // Over HTTP to the production server, without the cookie: the token reads, and is refused a change.
+  const script = await playwrightRequest.newContext({ baseURL, extraHTTPHeaders: { authorization: `Bearer ${token}` } });
+  expect((await script.get("/api/projects")).status()).toBe(200);
+  expect((await script.post("/api/projects", { data: { name: "From a script" } })).status()).toBe(403);
+
+  // Shown once: after a reload the page no longer holds it.
+  await page.reload();
+  await hydrated(page);
+  await expect(page.getByRole("row", { name: /e2e notebook/ })).toBeVisible();
+  expect(await page.content()).not.toContain(token);
+
+  await page.getByRole("button", { name: "Revoke “e2e notebook”" }).click();
+  await page.getByRole("button", { name: "Revoke token" }).click();
+  await expect(page.getByRole("row", { name: /e2e notebook/ })).toContainText("revoked");
+  expect((await script.get("/api/projects")).status()).toBe(401);
+  await script.dispose();
+  await page.context().close();
+});

@@ -7,18 +7,22 @@
  * Where a scenario is involved there is a sixth caller, the link holder: signed out, holding a live share link
  * of the fixture's scenario. On the share route the token is the path (the other callers hold only a revoked
  * one); everywhere else it rides along as a header and a query parameter, and must grant nothing.
+ *
+ * Then every row again with the owner's personal API tokens as `Authorization: Bearer …` (no cookie): read-write,
+ * read-only, restricted to another project, revoked, expired (authorization-cases/tokens.ts says what each gets).
  */
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { coreCases } from "./authorization-cases/core";
 import { outputCases } from "./authorization-cases/outputs";
-import type { Caller, Case } from "./authorization-cases/shared";
+import { type Caller, type Case, tokenCallers } from "./authorization-cases/shared";
+import { tokenCases, tokenExpectation, tokenFor } from "./authorization-cases/tokens";
 import { uploadCases } from "./authorization-cases/uploads";
 import { call, makeUser } from "./harness";
 import { projectFixture, type Role, type TeamExtras, teamExtras, userFor } from "./fixtures";
 
-const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases];
+const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases];
 
 /** Routes tested elsewhere, with the reason. */
 const exempt: Record<string, string> = {
@@ -53,6 +57,26 @@ describe("authorization table", () => {
           params: c.params?.(f, x, caller),
           body: c.body?.(f),
           ...holding,
+        });
+        expect(res.status, JSON.stringify(res.body)).toBe(expected);
+        if (res.status >= 400) expect(res.body.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });
+      });
+    }
+  }
+
+  for (const c of cases) {
+    for (const caller of tokenCallers) {
+      const expected = tokenExpectation(c, caller);
+      it(`${c.method} ${c.file} with the owner's ${caller} answers ${expected}`, async () => {
+        const mod = await import(/* @vite-ignore */ `../../app/api/${c.file}`);
+        const f = await projectFixture();
+        const x = c.extras ? await teamExtras(f) : noExtras;
+        const token = await tokenFor(f, caller);
+        const res = await call(mod[c.method], c.method, c.path(f, x, "owner"), {
+          params: c.params?.(f, x, "owner"),
+          body: c.body?.(f),
+          query: c.query?.(f),
+          headers: { authorization: `Bearer ${token}` },
         });
         expect(res.status, JSON.stringify(res.body)).toBe(expected);
         if (res.status >= 400) expect(res.body.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });

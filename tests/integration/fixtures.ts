@@ -1,4 +1,5 @@
 import { getDb } from "@/db";
+import { createApiToken } from "@/db/api-tokens";
 import { uploadAttachment } from "@/db/attachments";
 import { createInvitation } from "@/db/invitations";
 import { addMemberByEmail } from "@/db/members";
@@ -50,6 +51,8 @@ export interface TeamExtras {
   revokedLinkToken: string;
   /** A small CSV kept with the fixture's scenario, in the fake S3 store (made by teamExtras). */
   attachmentId?: string;
+  /** A personal API token of the fixture's owner (made by teamExtras). */
+  ownerTokenId?: string;
 }
 
 /** An invitation and share links in a fixture project, made by its owner through the data access layer. */
@@ -68,7 +71,9 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
     mediaType: "text/csv",
     bytes: new TextEncoder().encode("t [ms],separation [um]\n0,0\n5,2\n10,0\n"),
   });
+  const ownerToken = await createApiToken(db, owner, { name: "fixture notebook", scope: "read", expiresInDays: 30 });
   return {
+    ownerTokenId: ownerToken.apiToken.id,
     invitationId: invitation.id,
     invitationToken,
     linkId: live.link.id,

@@ -11,11 +11,12 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { coreCases } from "./authorization-cases/core";
 import { outputCases } from "./authorization-cases/outputs";
 import type { Case } from "./authorization-cases/shared";
+import { tokenCases } from "./authorization-cases/tokens";
 import { uploadCases } from "./authorization-cases/uploads";
 import { projectFixture, teamExtras, type ProjectFixture, type TeamExtras } from "./fixtures";
 import { call, type TestUser } from "./harness";
 
-const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases];
+const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases];
 const RUNS = Number(process.env.FUZZ_RUNS ?? 6);
 
 const evilText = fc.constantFrom(

@@ -2,7 +2,7 @@ import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
 import { findUserById, toUserDto, updateAccount } from "@/db/users";
 import { accountUpdateSchema } from "@/contracts/requests";
-import { json, readJson, requireActor, route } from "@/lib/http";
+import { json, readJson, requireActor, requireSessionActor, route } from "@/lib/http";
 
 export const GET = route(async (req) => {
   const actor = await requireActor(req);
@@ -12,7 +12,7 @@ export const GET = route(async (req) => {
 });
 
 export const PATCH = route(async (req) => {
-  const actor = await requireActor(req);
+  const actor = await requireSessionActor(req);
   const input = await readJson(req, accountUpdateSchema);
   return json({ user: await updateAccount(getDb(), actor, input) });
 });

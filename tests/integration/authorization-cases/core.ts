@@ -1,20 +1,23 @@
 /** Authorization rows for the foundation and team routes: accounts, projects, members, scenarios, history, invitations, share links. */
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
-import { type Case, everyone, holderToo, I, nextUnique, owners, P, R1, readers, S, signedIn, writers } from "./shared";
+import { browserOnly, type Case, everyone, holderToo, I, nextUnique, owners, P, R1, readers, S, signedIn, writers } from "./shared";
 
 export const coreCases: Case[] = [
-  { file: "compute/route.ts", method: "POST", path: () => "/api/compute", body: () => defaultScenarioDocument(), expected: everyone(200) },
+  { file: "compute/route.ts", method: "POST", path: () => "/api/compute", body: () => defaultScenarioDocument(), expected: everyone(200), tokens: { revokedToken: 401, expiredToken: 401 } },
+  { file: "sweeps/route.ts", method: "POST", path: () => "/api/sweeps", body: () => ({ document: defaultScenarioDocument(), parameter: "hold-time", fromValue: 1e-3, toValue: 1e-2, points: 2 }), expected: everyone(200), tokens: { revokedToken: 401, expiredToken: 401 } },
+  // A saved scenario's sweep reads it: its readers (a read-only token too); a token for another project is a stranger to it.
+  { file: "sweeps/route.ts", method: "POST", path: () => "/api/sweeps", body: (f) => ({ projectId: f.projectId, scenarioId: f.scenarioId, parameter: "hold-time", fromValue: 1e-3, toValue: 1e-2, points: 2 }), expected: holderToo(readers(200)), tokens: { readToken: 200, elsewhereToken: 404 } },
   { file: "openapi.json/route.ts", method: "GET", path: () => "/api/openapi.json", expected: everyone(200) },
   { file: "users/route.ts", method: "POST", path: () => "/api/users", body: () => ({ email: `new-${nextUnique()}@example.test`, name: "New Person", password: "a long enough password" }), expected: everyone(201) },
   { file: "password-reset/route.ts", method: "POST", path: () => "/api/password-reset", body: () => ({ email: "nobody@example.test" }), expected: everyone(202) },
   { file: "password-reset/confirm/route.ts", method: "POST", path: () => "/api/password-reset/confirm", body: () => ({ token: "not-a-real-token-at-all", password: "a long enough password" }), expected: everyone(422) },
   { file: "account/route.ts", method: "GET", path: () => "/api/account", expected: signedIn(200) },
-  { file: "account/route.ts", method: "PATCH", path: () => "/api/account", body: () => ({ name: "Renamed Person" }), expected: signedIn(200) },
-  { file: "account/sessions/route.ts", method: "DELETE", path: () => "/api/account/sessions", expected: signedIn(204) },
+  { file: "account/route.ts", method: "PATCH", path: () => "/api/account", body: () => ({ name: "Renamed Person" }), expected: signedIn(200), ...browserOnly },
+  { file: "account/sessions/route.ts", method: "DELETE", path: () => "/api/account/sessions", expected: signedIn(204), ...browserOnly },
   { file: "admin/users/route.ts", method: "GET", path: () => "/api/admin/users", expected: { ...signedIn(403) } },
   { file: "admin/users/[userId]/route.ts", method: "PATCH", path: (f) => `/api/admin/users/${f.users.viewer.id}`, params: (f) => ({ userId: f.users.viewer.id }), body: () => ({ siteRole: "admin" }), expected: signedIn(403) },
   { file: "projects/route.ts", method: "GET", path: () => "/api/projects", expected: signedIn(200) },
-  { file: "projects/route.ts", method: "POST", path: () => "/api/projects", body: () => ({ name: "Another project" }), expected: signedIn(201) },
+  { file: "projects/route.ts", method: "POST", path: () => "/api/projects", body: () => ({ name: "Another project" }), expected: signedIn(201), tokens: { elsewhereToken: 403 } },
   { file: "projects/[projectId]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}`, params: P, expected: readers(200) },
   { file: "projects/[projectId]/route.ts", method: "PATCH", path: (f) => `/api/projects/${f.projectId}`, params: P, body: () => ({ name: "Renamed project" }), expected: owners(200) },
   { file: "projects/[projectId]/route.ts", method: "DELETE", path: (f) => `/api/projects/${f.projectId}`, params: P, expected: owners(204) },
@@ -32,15 +35,16 @@ export const coreCases: Case[] = [
   { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1`, params: R1, expected: holderToo(readers(200)) },
   { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/restore/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1/restore`, params: R1, expected: holderToo(writers(201)) },
   { file: "projects/[projectId]/scenarios/[scenarioId]/revisions/[version]/diff/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/revisions/1/diff`, params: R1, query: () => ({ against: "1" }), expected: holderToo(readers(200)) },
-  { file: "projects/[projectId]/invitations/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/invitations`, params: P, expected: owners(200) },
+  // Listing invitations and share links is part of managing them (members:invite, share:manage), which a read-only token may not do.
+  { file: "projects/[projectId]/invitations/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/invitations`, params: P, expected: owners(200), tokens: { readToken: 403 } },
   { file: "projects/[projectId]/invitations/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/invitations`, params: P, body: () => ({ email: `invitee-${nextUnique()}@example.test`, role: "viewer" }), expected: owners(201) },
   { file: "projects/[projectId]/invitations/[invitationId]/route.ts", method: "DELETE", extras: true, path: (f, x) => `/api/projects/${f.projectId}/invitations/${x.invitationId}`, params: I, expected: owners(204) },
   { file: "projects/[projectId]/invitations/[invitationId]/resend/route.ts", method: "POST", extras: true, path: (f, x) => `/api/projects/${f.projectId}/invitations/${x.invitationId}/resend`, params: I, expected: owners(200) },
   // The invitation is addressed to the fixture's stranger: only that account may accept it.
-  { file: "invitations/[token]/accept/route.ts", method: "POST", extras: true, path: (_f, x) => `/api/invitations/${x.invitationToken}/accept`, params: (_f, x) => ({ token: x.invitationToken }), expected: { anonymous: 401, stranger: 200, viewer: 403, editor: 403, owner: 403 } },
+  { file: "invitations/[token]/accept/route.ts", method: "POST", extras: true, path: (_f, x) => `/api/invitations/${x.invitationToken}/accept`, params: (_f, x) => ({ token: x.invitationToken }), expected: { anonymous: 401, stranger: 200, viewer: 403, editor: 403, owner: 403 }, ...browserOnly },
   { file: "projects/[projectId]/ownership/route.ts", method: "POST", path: (f) => `/api/projects/${f.projectId}/ownership`, params: P, body: (f) => ({ userId: f.extraMember.id }), expected: owners(200) },
   { file: "projects/[projectId]/audit/route.ts", method: "GET", path: (f) => `/api/projects/${f.projectId}/audit`, params: P, expected: owners(200) },
-  { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/route.ts", method: "GET", extras: true, path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links`, params: S, expected: holderToo(writers(200)) },
+  { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/route.ts", method: "GET", extras: true, path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links`, params: S, expected: holderToo(writers(200)), tokens: { readToken: 403 } },
   { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/route.ts", method: "POST", extras: true, path: (f) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links`, params: S, body: () => ({ label: "for the referee", expiresInDays: 7 }), expected: holderToo(writers(201)) },
   { file: "projects/[projectId]/scenarios/[scenarioId]/share-links/[linkId]/route.ts", method: "DELETE", extras: true, path: (f, x) => `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/share-links/${x.linkId}`, params: (f, x) => ({ ...S(f), linkId: x.linkId }), expected: holderToo(writers(204)) },
   { file: "share/[token]/route.ts", method: "GET", extras: true, path: (_f, x, caller) => `/api/share/${caller === "linkHolder" ? x.linkToken : x.revokedLinkToken}`, params: (_f, x, caller) => ({ token: caller === "linkHolder" ? x.linkToken : x.revokedLinkToken }), expected: { ...everyone(404), linkHolder: 200 } },

@@ -17,7 +17,19 @@ export interface Case {
   query?: (f: ProjectFixture) => Record<string, string>;
   body?: (f: ProjectFixture) => unknown;
   expected: Record<Role, number> & { linkHolder?: number };
+  /** The owner's API tokens, where the rule of authorization-cases/tokens.ts (tokenExpectation) does not say it. */
+  tokens?: Partial<Record<TokenCaller, number>>;
 }
+
+/**
+ * Callers holding one of the fixture owner's personal API tokens: read-write for every project (`ownerToken`),
+ * read-only (`readToken`), read-write but restricted to another project of the owner (`elsewhereToken`), and a
+ * revoked and an expired read-write token.
+ */
+export type TokenCaller = "ownerToken" | "readToken" | "elsewhereToken" | "revokedToken" | "expiredToken";
+export const tokenCallers: TokenCaller[] = ["ownerToken", "readToken", "elsewhereToken", "revokedToken", "expiredToken"];
+/** Routes for a signed-in browser only (the account itself, its tokens, invitations): every live token gets 403. */
+export const browserOnly = { tokens: { ownerToken: 403, readToken: 403, elsewhereToken: 403 } } as const;
 
 export const P = (f: ProjectFixture) => ({ projectId: f.projectId });
 export const S = (f: ProjectFixture) => ({ projectId: f.projectId, scenarioId: f.scenarioId });

@@ -4,6 +4,8 @@ import {
   assertInvitationAcceptable,
   assertProjectAccess,
   assertShareLinkAccess,
+  assertMayWrite,
+  assertNotProjectBound,
   assertSiteAccess,
   roleAllows,
   type ProjectAction,
@@ -108,5 +110,26 @@ describe("an invitation", () => {
     for (const dead of [{ ...open, acceptedAt: now }, { ...open, revokedAt: now }, { ...open, expiresAt: now }, undefined]) {
       expect(codeOf(() => assertInvitationAcceptable(dead, open.email, now))).toBe("not_found");
     }
+  });
+
+  it("narrows an account's rights by its API token, never widening them", () => {
+    const session = { userId: "u", siteRole: "admin" as const };
+    const reading = { ...session, token: { tokenId: "t", scope: "read" as const, projectId: null } };
+    const everything = { ...session, token: { tokenId: "t", scope: "read-write" as const, projectId: null } };
+    const bound = { ...session, token: { tokenId: "t", scope: "read-write" as const, projectId: "p" } };
+    for (const role of ["viewer", "editor", "owner"] as const) {
+      expect(allowedProjectActions(role, everything)).toEqual(allowedProjectActions(role));
+      const narrowed = allowedProjectActions(role, reading);
+      expect(narrowed.every((a) => allowedProjectActions(role).includes(a))).toBe(true);
+      expect(narrowed).not.toContain("scenario:write");
+      expect(narrowed).toContain("scenario:read");
+    }
+    expect(codeOf(() => assertMayWrite(reading))).toBe("forbidden");
+    expect(codeOf(() => assertMayWrite(everything))).toBeNull();
+    expect(codeOf(() => assertNotProjectBound(bound))).toBe("forbidden");
+    expect(codeOf(() => assertSiteAccess(session, "users:set-role"))).toBeNull();
+    expect(codeOf(() => assertSiteAccess(reading, "users:list"))).toBeNull();
+    expect(codeOf(() => assertSiteAccess(reading, "users:set-role"))).toBe("forbidden");
+    expect(codeOf(() => assertSiteAccess(bound, "users:list"))).toBe("forbidden");
   });
 });

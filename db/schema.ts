@@ -192,6 +192,34 @@ export interface ComputeRateLimitsTable {
   expire: string | null;
 }
 
+export type ParameterMapStatus = "queued" | "running" | "done" | "cancelled" | "failed";
+
+/** A parameter map (db/parameter-maps.ts): its inputs, status, progress in rows and, once done, its grid. */
+export interface ParameterMapsTable {
+  id: Generated<string>;
+  projectId: string | null;
+  scenarioId: string | null;
+  scenarioVersion: number | null;
+  createdBy: string | null;
+  inputs: Json;
+  status: ColumnType<ParameterMapStatus, ParameterMapStatus | undefined, ParameterMapStatus>;
+  rowsTotal: number;
+  rowsDone: Generated<number>;
+  result: ColumnType<unknown, string | null | undefined, string | null>;
+  failure: string | null;
+  createdAt: Generated<Date>;
+  updatedAt: Timestamp;
+  finishedAt: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+}
+
+/** One finished row of a parameter map, kept once however often its chunk ran. */
+export interface ParameterMapRowsTable {
+  mapId: string;
+  rowIndex: number;
+  rowData: Json;
+  computedAt: Generated<Date>;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -208,6 +236,8 @@ export interface Database {
   attachments: AttachmentsTable;
   scenarioResults: ScenarioResultsTable;
   computeRateLimits: ComputeRateLimitsTable;
+  parameterMaps: ParameterMapsTable;
+  parameterMapRows: ParameterMapRowsTable;
 }
 
 export type User = Selectable<UsersTable>;

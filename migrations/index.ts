@@ -7,6 +7,7 @@ import * as widenProjectAudit from "./2026_12_02_010000_widen_project_audit";
 import * as createAttachments from "./2026_12_02_020000_create_attachments";
 import * as addSessionVersionsAndSignInLimits from "./2026_12_05_070000_add_session_versions_and_sign_in_limits";
 import * as createScenarioResults from "./2026_12_05_090000_create_scenario_results";
+import * as createParameterMaps from "./2026_12_05_110000_create_parameter_maps";
 
 export const migrations: Record<string, Migration> = {
   "2026_12_01_000000_create_core_tables": createCoreTables,
@@ -15,4 +16,5 @@ export const migrations: Record<string, Migration> = {
   "2026_12_02_020000_create_attachments": createAttachments,
   "2026_12_05_070000_add_session_versions_and_sign_in_limits": addSessionVersionsAndSignInLimits,
   "2026_12_05_090000_create_scenario_results": createScenarioResults,
+  "2026_12_05_110000_create_parameter_maps": createParameterMaps,
 };

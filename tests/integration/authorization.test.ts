@@ -12,13 +12,14 @@ import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { coreCases } from "./authorization-cases/core";
+import { mapCases } from "./authorization-cases/maps";
 import { outputCases } from "./authorization-cases/outputs";
 import type { Caller, Case } from "./authorization-cases/shared";
 import { uploadCases } from "./authorization-cases/uploads";
 import { call, makeUser } from "./harness";
 import { projectFixture, type Role, type TeamExtras, teamExtras, userFor } from "./fixtures";
 
-const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases];
+const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...mapCases];
 
 /** Routes tested elsewhere, with the reason. */
 const exempt: Record<string, string> = {

@@ -1,6 +1,8 @@
 import { getDb } from "@/db";
 import { uploadAttachment } from "@/db/attachments";
 import { createInvitation } from "@/db/invitations";
+import { createParameterMap } from "@/db/parameter-maps";
+import { enqueueMapRows } from "@/lib/map-queue";
 import { addMemberByEmail } from "@/db/members";
 import { createProject } from "@/db/projects";
 import { createScenario } from "@/db/scenarios";
@@ -50,6 +52,9 @@ export interface TeamExtras {
   revokedLinkToken: string;
   /** A small CSV kept with the fixture's scenario, in the fake S3 store (made by teamExtras). */
   attachmentId?: string;
+  /** A queued 2 × 2 parameter map of the fixture's scenario, and one of an unsaved document, both by the owner. */
+  scenarioMapId?: string;
+  ownMapId?: string;
 }
 
 /** An invitation and share links in a fixture project, made by its owner through the data access layer. */
@@ -68,7 +73,9 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
     mediaType: "text/csv",
     bytes: new TextEncoder().encode("t [ms],separation [um]\n0,0\n5,2\n10,0\n"),
   });
+  const maps = await fixtureMaps(f);
   return {
+    ...maps,
     invitationId: invitation.id,
     invitationToken,
     linkId: live.link.id,
@@ -76,4 +83,18 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
     revokedLinkToken: revoked.token,
     attachmentId: attachment.id,
   };
+}
+
+/** A small map request, cheap for a worker (2 × 2 points), that the default document can make. */
+export const smallMapRequest = () => ({
+  x: { parameter: "recombination-time" as const, from: 1e-3, to: 1e-2, points: 2, scale: "log" as const },
+  y: { parameter: "hold-time" as const, from: 1e-2, to: 1e-1, points: 2, scale: "linear" as const },
+  quantity: "total-quanta" as const,
+});
+
+async function fixtureMaps(f: ProjectFixture): Promise<{ scenarioMapId: string; ownMapId: string }> {
+  const owner = { userId: f.users.owner.id, siteRole: "member" as const };
+  const ofScenario = await createParameterMap(getDb(), owner, { scenario: { projectId: f.projectId, scenarioId: f.scenarioId }, request: smallMapRequest() }, enqueueMapRows);
+  const own = await createParameterMap(getDb(), owner, { document: defaultScenarioDocument(), request: smallMapRequest() }, enqueueMapRows);
+  return { scenarioMapId: ofScenario.id, ownMapId: own.id };
 }

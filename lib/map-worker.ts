@@ -61,6 +61,7 @@ export async function startMapWorker(options: MapWorkerOptions): Promise<MapWork
     MAP_ROWS_QUEUE,
     { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: options.pollingIntervalSeconds ?? 0.5 },
     async ([job]) => {
+      log(`map ${job.data.mapId} row ${job.data.row}: started (try ${job.retryCount + 1})`);
       try {
         const kept = await computeChunk(options.db, job.data, inputsCache);
         chunks++;

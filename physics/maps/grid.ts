@@ -4,8 +4,9 @@
  * of workers; each point is an ordinary computeScenario of the document with both parameters set (physics/sweeps/
  * vary.ts says what a parameter changes). Values are kept as log10, the natural scale of every quantity mapped here.
  */
+import { BackgroundInputError } from "../backgrounds";
 import { computeScenario, type ComputeOptions } from "../compute";
-import { computeCostRefusal } from "../compute-cost";
+import { COMPUTE_COST_CEILING, computeCostRefusal } from "../compute-cost";
 import type { Quantity, ScenarioResult } from "../result";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
@@ -61,7 +62,7 @@ function axisRefusal(axis: MapAxis, name: "x" | "y"): MapRefusal | null {
  * or a corner of the grid whose document costs more than one computation may (physics/compute-cost.ts: the cost
  * grows with the ratio of the protocol's longest to its shortest time, which is extreme at the grid's corners).
  */
-export function mapRefusal(document: ScenarioDocument, request: MapRequest): MapRefusal | null {
+export function mapRefusal(document: ScenarioDocument, request: MapRequest, ceiling = COMPUTE_COST_CEILING): MapRefusal | null {
   const axis = axisRefusal(request.x, "x") ?? axisRefusal(request.y, "y");
   if (axis) return axis;
   if (request.x.parameter === request.y.parameter) return { kind: "invalid", path: "y.parameter", message: "the two axes must vary different parameters" };
@@ -74,7 +75,7 @@ export function mapRefusal(document: ScenarioDocument, request: MapRequest): Map
         if (error instanceof ScenarioInputError) return { kind: "invalid", path: error.path, message: error.message };
         throw error;
       }
-      const refusal = computeCostRefusal(corner);
+      const refusal = computeCostRefusal(corner, ceiling);
       if (refusal) return { kind: "too-costly", path: refusal[0].path, message: `at the corner (${x}, ${y}) of the map: ${refusal[0].message}` };
     }
   }
@@ -92,7 +93,7 @@ export function computeMapPoint(document: ScenarioDocument, request: MapRequest,
     const quantity = quantityOf(computeScenario(documentAt(document, request, x, y), options), request.quantity);
     return { log10: quantity?.log10 ?? null, gap: null };
   } catch (error) {
-    if (!(error instanceof ScenarioInputError)) throw error;
+    if (!(error instanceof ScenarioInputError || error instanceof BackgroundInputError)) throw error;
     return { log10: null, gap: { column, row, path: error.path, message: error.message } };
   }
 }

@@ -11,7 +11,8 @@ import type { Quantity, ScenarioResult } from "../result";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
 import { logSpaced } from "../sweeps/sweep";
-import { parameterUnit, withParameter } from "../sweeps/vary";
+import { parameterUnit } from "../sweeps/vary";
+import { documentAt } from "./point";
 import { MAP_PARAMETERS, MAX_MAP_SIDE, QUANTITY_UNITS, type MapAxis, type MapGap, type MapGrid, type MapQuantity, type MapRequest, type MapRow } from "./axes";
 
 export function axisValues(axis: MapAxis): number[] {
@@ -35,9 +36,6 @@ export function quantityOf(result: ScenarioResult, quantity: MapQuantity): Quant
   }
 }
 
-export function documentAt(document: ScenarioDocument, request: MapRequest, x: number, y: number): ScenarioDocument {
-  return withParameter(withParameter(document, request.y.parameter, y), request.x.parameter, x);
-}
 
 /** Why a map cannot be made: `path` is "x.…"/"y.…" for an axis, else a path into the document. */
 export type MapRefusal = { kind: "invalid" | "too-costly"; path: string; message: string };

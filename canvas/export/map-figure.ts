@@ -177,7 +177,7 @@ export function mapFigureDrawing(data: MapFigureData, size: { width: number; hei
       for (const polygon of contour.coordinates) {
         for (const ring of polygon) {
           // d3-contour puts point (i, j) at (i + 0.5, j + 0.5): exactly the centre of cell (i, j) here.
-          shapes.push(line(ring.flatMap(([u, w]) => [space.x.atCell(u), space.y.atCell(w)]), palette.paper, 1));
+          shapes.push(line(ring.flatMap(([u, w]) => [space.x.atCell(u), space.y.atCell(w)]), palette.ink, 0.75));
         }
       }
     }

@@ -65,3 +65,19 @@ describe("the map figure", () => {
     expect(texts).toEqual(expect.arrayContaining(["lab distance (km)", "recombination time (ms)", "total ⟨N⟩"]));
   });
 });
+
+describe("the map's words", () => {
+  it("put the scenario and both axes with ranges, points and spacing in the caption", async () => {
+    const { mapCaption } = await import("@/components/export/map-export");
+    const { defaultScenarioDocument } = await import("@/physics/scenario/schema");
+    const caption = mapCaption(defaultScenarioDocument(), {
+      x: { parameter: "recombination-time", from: 1e-3, to: 1, points: 50, scale: "log" },
+      y: { parameter: "hold-time", from: 0.01, to: 0.1, points: 20, scale: "linear" },
+      quantity: "decoherence",
+    });
+    expect(caption).toMatch(/^Minkowski/);
+    expect(caption).toContain("map of decoherence 𝒟");
+    expect(caption).toMatch(/x: recombination time 1(\.0+)? ms to 1(\.0+)? s, 50 points, log/);
+    expect(caption).toMatch(/y: hold time 10(\.0+)? ms to 100(\.0+)? ms, 20 points, linear/);
+  });
+});

@@ -9,6 +9,7 @@ import { computeScenario, type ComputeOptions } from "../compute";
 import { COMPUTE_COST_CEILING, computeCostRefusal } from "../compute-cost";
 import type { Quantity, ScenarioResult } from "../result";
 import { ScenarioInputError } from "../scenario/input-error";
+import { rangeIssues } from "../scenario/ranges";
 import type { ScenarioDocument } from "../scenario/schema";
 import { logSpaced } from "../sweeps/sweep";
 import { parameterUnit } from "../sweeps/vary";
@@ -57,7 +58,7 @@ function axisRefusal(axis: MapAxis, name: "x" | "y"): MapRefusal | null {
 
 /**
  * Why a map cannot be made, or null: a bad axis, the same parameter twice, a parameter the document cannot vary,
- * or a corner of the grid whose document costs more than one computation may (physics/compute-cost.ts: the cost
+ * a corner outside the ranges a document may hold (physics/scenario/ranges.ts), or a corner of the grid whose document costs more than one computation may (physics/compute-cost.ts: the cost
  * grows with the ratio of the protocol's longest to its shortest time, which is extreme at the grid's corners).
  */
 export function mapRefusal(document: ScenarioDocument, request: MapRequest, ceiling = COMPUTE_COST_CEILING): MapRefusal | null {
@@ -73,6 +74,8 @@ export function mapRefusal(document: ScenarioDocument, request: MapRequest, ceil
         if (error instanceof ScenarioInputError) return { kind: "invalid", path: error.path, message: error.message };
         throw error;
       }
+      const outOfRange = rangeIssues(corner)[0];
+      if (outOfRange) return { kind: "invalid", path: outOfRange.path, message: `at the corner (${x}, ${y}) of the map: ${outOfRange.message}` };
       const refusal = computeCostRefusal(corner, ceiling);
       if (refusal) return { kind: "too-costly", path: refusal[0].path, message: `at the corner (${x}, ${y}) of the map: ${refusal[0].message}` };
     }

@@ -52,6 +52,11 @@ describe("refusing a map", () => {
     expect(mapRefusal(doc, { ...small(), y: { ...small().y, from: 0 } })).toBeNull(); // a linear axis may start at zero
     expect(mapRefusal(doc, { ...small(), x: { ...small().x, to: 1e-3 } })).toMatchObject({ kind: "invalid", path: "x.to" });
   });
+  it("names the document field a corner of the map puts outside the ranges a document may hold", () => {
+    const refusal = mapRefusal(doc, { ...small(), x: { ...small().x, to: 1e300 } });
+    expect(refusal).toMatchObject({ kind: "invalid", path: expect.stringMatching(/^protocol\.recombination/) });
+    expect(refusal?.message).toMatch(/corner/);
+  });
   it("names the document field when the document cannot vary a parameter (a Minkowski lab has no distance)", () => {
     const refusal = mapRefusal(doc, { ...small(), y: { parameter: "lab-distance", from: 1, to: 10, points: 2, scale: "log" } });
     expect(refusal).toMatchObject({ kind: "invalid", path: "background.kind" });
@@ -61,7 +66,7 @@ describe("refusing a map", () => {
     const kinked: ScenarioDocument = {
       ...doc,
       protocol: { kind: "segments", separation: { durationSeconds: 0.01, shape: "linear" }, hold: { durationSeconds: 0.1 }, recombination: { durationSeconds: 0.01, shape: "linear" } },
-      numerics: { ...doc.numerics, kinkTimeResolutionSeconds: 1e-12 },
+      numerics: { ...doc.numerics, kinkTimeResolutionSeconds: 1e-9 },
     };
     expect(mapRefusal(kinked, small())).toBeNull();
     const refusal = mapRefusal(kinked, small(), 100_000);

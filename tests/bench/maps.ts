@@ -2,12 +2,12 @@
  * Bench of parameter maps through the queue (figures printed, nothing asserted): a map of BENCH_MAP_SIDE ×
  * BENCH_MAP_SIDE points (default 200 × 200) computed by 1 worker process and then by 2, with the times and the
  * speed-up (target ≥ 1.8× on a 2-core machine); the cost of one map point against one plain computation of the
- * same document; and the queue's overhead per chunk (a row): workers × wall time / rows, less the row's own
- * computing. Runs on a fresh database on the configured server (DATABASE_URL, or the project-local cluster),
+ * same point; and the queue's overhead per chunk (a row), from a map of two points a row. Runs on a fresh database on the configured server (DATABASE_URL, or the project-local cluster),
  * dropped afterwards. Run: npm run bench (it starts this when the database answers), or directly:
  *   node --conditions react-server --import tsx tests/bench/maps.ts
  */
 import { type ChildProcess, spawn } from "node:child_process";
+import { cpus, loadavg } from "node:os";
 import path from "node:path";
 import pg from "pg";
 import { createDb } from "../../db/connect";
@@ -16,7 +16,7 @@ import { createParameterMap, mapStatus } from "../../db/parameter-maps";
 import { createUser } from "../../db/users";
 import { stopMapSender, enqueueMapRows } from "../../lib/map-queue";
 import { computeScenario } from "../../physics/compute";
-import { axisValues, computeMapPoint, type MapRequest } from "../../physics/maps";
+import { axisValues, computeMapPoint, documentAt, type MapRequest } from "../../physics/maps";
 import { defaultScenarioDocument, type ScenarioDocument } from "../../physics/scenario/schema";
 import { migrateToLatest } from "../../scripts/migrate";
 
@@ -34,8 +34,6 @@ const request: MapRequest = {
   y: { parameter: "hold-time", from: 1e-2, to: 1, points: SIDE, scale: "log" },
   quantity: "total-quanta",
 };
-
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 async function admin(statement: string): Promise<void> {
   const url = new URL(databaseUrl());
@@ -66,11 +64,36 @@ async function stop(children: ChildProcess[]): Promise<void> {
 }
 
 async function main(): Promise<void> {
-  // Per point: a map point (parameters set, quantity read off) against one plain computation of the document.
-  const single = median(Array.from({ length: 41 }, () => { const t = performance.now(); computeScenario(document); return performance.now() - t; }));
+  // Per point, on the same points: a map point (both parameters set, the quantity read off) against one plain
+  // computation of the document at that point. Rows sampled across the grid (the cost varies with the durations).
   const columns = axisValues(request.x).length;
-  const pointTimes = Array.from({ length: 41 }, (_, k) => { const t = performance.now(); computeMapPoint(document, request, (k * 37) % columns, (k * 53) % SIDE); return performance.now() - t; });
-  const perPoint = median(pointTimes);
+  const xs = axisValues(request.x);
+  const ys = axisValues(request.y);
+  let mapMs = 0;
+  let plainMs = 0;
+  const sampledRows = [0, Math.floor(SIDE / 2), SIDE - 1];
+  // A first pass warms the engine (compiled code, spectrum cache) for both; then each point is timed both ways,
+  // in alternating order, so neither side gets the other's warm cache more often.
+  for (const row of sampledRows) for (let column = 0; column < columns; column++) computeMapPoint(document, request, column, row);
+  for (const row of sampledRows) {
+    for (let column = 0; column < columns; column++) {
+      const timeMap = () => {
+        const t = performance.now();
+        computeMapPoint(document, request, column, row);
+        mapMs += performance.now() - t;
+      };
+      const timePlain = () => {
+        const t = performance.now();
+        computeScenario(documentAt(document, request, xs[column], ys[row]));
+        plainMs += performance.now() - t;
+      };
+      if (column % 2 === 0) (timeMap(), timePlain());
+      else (timePlain(), timeMap());
+    }
+  }
+  const points = sampledRows.length * columns;
+  const perPoint = mapMs / points;
+  const rowMs = mapMs / sampledRows.length;
 
   const name = `branchline_bench_maps_${process.pid}`;
   const url = new URL(databaseUrl());
@@ -82,18 +105,25 @@ async function main(): Promise<void> {
   const wall: Record<number, number> = {};
   try {
     await migrateToLatest(url.toString());
-    for (const workers of [1, 2]) {
+    const runMap = async (workers: number, mapRequest: MapRequest) => {
       const children = await Promise.all(Array.from({ length: workers }, () => startWorker(url.toString())));
       const user = await createUser(db, { email: `bench-${workers}-${Date.now()}@example.test`, name: "Bench" });
       // The clock starts once the rows are queued (the first run also starts this process's queue sender).
-      const map = await createParameterMap(db, { userId: user.id, siteRole: "member" }, { document, request }, enqueueMapRows);
+      const map = await createParameterMap(db, { userId: user.id, siteRole: "member" }, { document, request: mapRequest }, enqueueMapRows);
       const started = performance.now();
-      while ((await mapStatus(db, map.id)) !== "done") await new Promise((r) => setTimeout(r, 200));
-      wall[workers] = (performance.now() - started) / 1000;
+      while ((await mapStatus(db, map.id)) !== "done") await new Promise((r) => setTimeout(r, 100));
+      const seconds = (performance.now() - started) / 1000;
       await stop(children);
-      const overhead = (workers * wall[workers] * 1000) / SIDE - columns * perPoint;
-      lines.push(`${workers} worker${workers > 1 ? "s" : ""}: ${wall[workers].toFixed(1)} s (${((wall[workers] * 1000) / (SIDE * SIDE)).toFixed(2)} ms a point of wall time); queue overhead ≈ ${overhead.toFixed(0)} ms a chunk (workers × wall / rows − a row's computing)`);
+      return seconds;
+    };
+    for (const workers of [1, 2]) {
+      wall[workers] = await runMap(workers, request);
+      lines.push(`${workers} worker${workers > 1 ? "s" : ""}: ${wall[workers].toFixed(1)} s (${((wall[workers] * 1000) / (SIDE * SIDE)).toFixed(2)} ms a point of wall time; a row computed alone: ${rowMs.toFixed(0)} ms)`);
     }
+    // The queue's own cost: rows of two points each, so that nearly all of a chunk's time is fetching, recording, completing.
+    const thin: MapRequest = { ...request, x: { ...request.x, points: 2 } };
+    const thinSeconds = await runMap(1, thin);
+    lines.push(`queue overhead per chunk: ${((thinSeconds * 1000) / SIDE - 2 * perPoint).toFixed(1)} ms (a 2 × ${SIDE} map by 1 worker: wall / rows − two points' computing)`);
   } finally {
     await stopMapSender();
     await db.destroy();
@@ -101,7 +131,8 @@ async function main(): Promise<void> {
   }
   lines.push(
     `speed-up 2 workers / 1: ${(wall[1] / wall[2]).toFixed(2)}× (target ≥ 1.8× on 2 cores: ${wall[1] / wall[2] >= 1.8 ? "met" : "not met"})`,
-    `one map point: median ${perPoint.toFixed(2)} ms against ${single.toFixed(2)} ms for one plain computation of the document (${(perPoint / single).toFixed(2)}×)`,
+    `one map point: ${perPoint.toFixed(2)} ms on average against ${(plainMs / points).toFixed(2)} ms for one plain computation of the same point (${(mapMs / plainMs).toFixed(2)}×; ${points} points of ${sampledRows.length} rows)`,
+    `load average while measuring: ${loadavg().map((l) => l.toFixed(1)).join(", ")} on ${cpus().length} cores (other work on the machine slows both runs and hides the speed-up)`,
   );
   console.log(lines.join("\n"));
 }

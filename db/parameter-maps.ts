@@ -1,12 +1,12 @@
 import "server-only";
 import { type Kysely, sql } from "kysely";
 import { assembleMap, mapRefusal, type MapGrid, type MapRequest, type MapRow } from "../physics/maps";
-import type { ScenarioDocument } from "../physics/scenario/schema";
+import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
-import { AppError, notFound } from "./errors";
+import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
-import type { Database, ParameterMapStatus } from "./schema";
-import { validDocument } from "./scenarios";
+import type { ParameterMapDto, ParameterMapStatus, ParameterMapSummary } from "../contracts/dto";
+import type { Database } from "./schema";
 
 /**
  * Parameter maps: created by a caller (POST /api/maps), computed a row at a time by queue workers (lib/map-worker.ts),
@@ -18,29 +18,11 @@ import { validDocument } from "./scenarios";
 
 export const MAX_ACTIVE_MAPS = 4;
 
+export type { ParameterMapDto, ParameterMapSummary };
+
 export interface MapInputs {
   document: ScenarioDocument;
   request: MapRequest;
-}
-
-export interface ParameterMapSummary {
-  id: string;
-  url: string;
-  status: ParameterMapStatus;
-  progress: { rowsDone: number; rowsTotal: number; fraction: number };
-  request: MapRequest;
-  scenario: { projectId: string; scenarioId: string; version: number } | null;
-  failure: string | null;
-  createdAt: string;
-  updatedAt: string;
-  finishedAt: string | null;
-}
-
-export interface ParameterMapDto extends ParameterMapSummary {
-  /** The document that was mapped (the scenario's at `scenario.version`). */
-  document: ScenarioDocument;
-  /** The grid, once status is done. */
-  result: MapGrid | null;
 }
 
 const ACTIVE: ParameterMapStatus[] = ["queued", "running"];
@@ -108,8 +90,8 @@ function refusalError(document: ScenarioDocument, request: MapRequest): AppError
 
 export interface NewMapInput {
   scenario?: { projectId: string; scenarioId: string };
-  /** Unparsed: checked against the physics schema here. */
-  document?: unknown;
+  /** Parsed and checked by the request contract (contracts/requests.ts, scenarioDocumentInput). */
+  document?: ScenarioDocument;
   request: MapRequest;
 }
 
@@ -133,10 +115,14 @@ export async function createParameterMap(
         ? await trx.selectFrom("scenarios").select(["document", "version"]).where("id", "=", scenarioId).where("projectId", "=", projectId).executeTakeFirst()
         : undefined;
       if (!saved) throw notFound("scenario");
-      document = validDocument(saved.document, { ranges: false });
+      const parsed = parseScenarioDocument(saved.document);
+      if (!parsed.ok) throw invalid("the saved scenario's document cannot be read, so it cannot be mapped", parsed.issues.map((i) => ({ path: `document.${i.path}`, message: i.message })));
+      document = parsed.document;
       scenario = { projectId, scenarioId, version: saved.version };
+    } else if (input.document) {
+      document = input.document;
     } else {
-      document = validDocument(input.document);
+      throw invalid("give either scenario or document", [{ path: "scenario", message: "a map needs a saved scenario or a document" }]);
     }
     const refused = refusalError(document, input.request);
     if (refused) throw refused;

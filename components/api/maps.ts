@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { ParameterMapDto, ParameterMapSummary } from "@/db/parameter-maps";
+import type { ParameterMapDto, ParameterMapSummary } from "@/contracts/dto";
 import type { z } from "zod";
-import type { mapCreateSchema } from "@/lib/contracts";
+import type { mapCreateSchema } from "@/contracts/requests";
 import { apiFetch } from "./client";
 
 export type { ParameterMapDto, ParameterMapSummary };

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createParameterMap } from "@/db/parameter-maps";
-import { mapCreateSchema } from "@/lib/contracts";
+import { mapCreateSchema } from "@/contracts/requests";
 import { readJson, requireActor, route } from "@/lib/http";
 import { enqueueMapRows } from "@/lib/map-queue";
 import { NextResponse } from "next/server";

@@ -1,8 +1,8 @@
 import { getDb } from "@/db";
 import { cancelParameterMap, getParameterMap } from "@/db/parameter-maps";
-import { mapResultQuerySchema } from "@/lib/contracts";
+import { mapResultQuerySchema } from "@/contracts/requests";
 import { json, noContent, readQuery, requireActor, route } from "@/lib/http";
-import { mapCsv } from "@/components/export/map-csv";
+import { mapCsv } from "@/canvas/export/map-csv";
 import { AppError } from "@/db/errors";
 
 type Params = { mapId: string };

@@ -1,11 +1,11 @@
 /**
- * A parameter map as a CSV file (RFC 4180, as the Budget's: components/export/budget-csv.ts): the inputs first, one
+ * A parameter map as a CSV file (RFC 4180, as the Budget's: canvas/export/budget-csv.ts): the inputs first, one
  * "# key: value" comment line each — what was mapped, both axes, and the scenario document itself — then one row
  * per point: both parameters (SI, unit in the column name), the quantity, and its log10. A point that could not be
  * computed has empty value columns and its reason in the last column; an exact zero is "0" with an empty log10.
  * Shared by GET /api/maps/{id}?format=csv and the editor's Map export. Pure.
  */
-import { figureCaption } from "@/canvas/export/figure-caption";
+import { figureCaption } from "./figure-caption";
 import type { MapGrid, MapRequest } from "@/physics/maps/axes";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { budgetInputLines, csvText, csvValue } from "./budget-csv";

@@ -4,6 +4,8 @@
  */
 import { z } from "zod";
 import { MAP_PARAMETERS, MAP_QUANTITIES, MAX_MAP_SIDE } from "../physics/maps/axes";
+import { rangeIssues } from "../physics/scenario/ranges";
+import { parseScenarioDocument } from "../physics/scenario/schema";
 import { keptText } from "../physics/scenario/text";
 import type { SweepParameter } from "../physics/sweeps/vary";
 
@@ -31,13 +33,24 @@ export const memberAddSchema = z.object({ email: emailSchema, role: projectRoleS
 export const memberUpdateSchema = z.object({ role: projectRoleSchema }).strict();
 
 export const scenarioTitleSchema = keptText().trim().min(1, "enter a title").max(200, "use at most 200 characters");
-/** The document itself is checked against the physics schema (with upgrades of older versions) by the server. */
-export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: z.unknown().optional() }).strict();
+/**
+ * A scenario document from a client, validated once, here: the physics schema (older versions upgraded on the way)
+ * and every parameter against the range where the computation is defined (physics/scenario/ranges.ts). Every
+ * problem is reported with its path inside the document.
+ */
+export const scenarioDocumentInput = z.unknown().transform((value, ctx) => {
+  const parsed = parseScenarioDocument(value);
+  const issues = parsed.ok ? rangeIssues(parsed.document) : parsed.issues;
+  for (const issue of issues) ctx.addIssue({ code: "custom", path: issue.path ? issue.path.split(".") : [], message: issue.message });
+  return parsed.ok && issues.length === 0 ? parsed.document : z.NEVER;
+});
+
+export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: scenarioDocumentInput.optional() }).strict();
 export const scenarioUpdateSchema = z
   .object({
     version: z.number({ error: "version is required (the version you edited)" }).int().positive(),
     title: scenarioTitleSchema.optional(),
-    document: z.unknown().optional(),
+    document: scenarioDocumentInput.optional(),
   })
   .strict();
 export const scenarioDuplicateSchema = z.object({ title: scenarioTitleSchema.optional() }).strict();
@@ -130,12 +143,12 @@ export const mapAxisSchema = z
 
 /**
  * POST /api/maps: a map of a saved scenario (kept with it) or of a document sent along (the caller's alone).
- * The saved scenario's current version is mapped; the document is checked against the physics schema by the server.
+ * The saved scenario's current version is mapped; a document sent along is checked here (scenarioDocumentInput).
  */
 export const mapCreateSchema = z
   .object({
     scenario: z.object({ projectId: keptText().min(1).max(100), scenarioId: keptText().min(1).max(100) }).strict().optional(),
-    document: z.unknown().optional(),
+    document: scenarioDocumentInput.optional(),
     x: mapAxisSchema,
     y: mapAxisSchema,
     quantity: z.enum(MAP_QUANTITIES, { error: `quantity must be one of ${MAP_QUANTITIES.join(", ")}` }).default("total-quanta"),

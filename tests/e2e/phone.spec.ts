@@ -25,6 +25,15 @@ async function overflow(page: Page): Promise<{ scrollWidth: number; width: numbe
       if (parent && parent.getBoundingClientRect().right > width + 1) continue;
       culprits.push(`${element.tagName.toLowerCase()}${element.id ? "#" + element.id : ""}.${String(element.className).split(" ").slice(0, 4).join(".")} right=${Math.round(box.right)}`);
     }
+    if (culprits.length === 0) {
+      // Nothing sticks out in plain sight: name the furthest-reaching elements, wherever they are.
+      const widest = Array.from(document.querySelectorAll("body *"))
+        .map((element) => ({ element, right: element.getBoundingClientRect().right }))
+        .filter(({ right }) => right > width + 1)
+        .sort((a, b) => b.right - a.right)
+        .slice(0, 8);
+      for (const { element, right } of widest) culprits.push(`${element.tagName.toLowerCase()}.${String(element.className).split(" ").slice(0, 4).join(".")} right=${Math.round(right)} (inside a clipped or scrolling box)`);
+    }
     return { scrollWidth: document.documentElement.scrollWidth, width, culprits: culprits.slice(0, 8) };
   });
 }

@@ -9,7 +9,7 @@
 import { contours } from "d3-contour";
 import type { MapGrid } from "@/physics/maps/axes";
 import { superscript } from "@/physics/superscript";
-import { axisTickLabels, axisTitle, axisUnit, linearTicks, logTicks } from "../kernels/diagram/axis-scale";
+import { axisTickLabels, axisTitle, axisUnit, linearTicks, logTicks, type AxisUnit } from "../kernels/diagram/axis-scale";
 import type { FigurePalette } from "../theme";
 import type { FigureShape } from "./diagram-figure";
 import type { ExportDrawing, NamedGroup } from "./standalone-figure";
@@ -147,6 +147,13 @@ function axisTicks(values: number[], scale: "log" | "linear", shown: [number, nu
   return { major: ticks.major.filter((v) => v >= shown[0] && v <= shown[1]), minor: ticks.minor.filter((v) => v >= shown[0] && v <= shown[1]) };
 }
 
+/** One unit per axis: SI prefixes for times and lengths (axis-scale.ts), the plain SI unit (Pa, K) otherwise. */
+function unitOfAxis(axis: MapGrid["x"]): AxisUnit {
+  const largest = Math.max(...axis.values.map(Math.abs));
+  if (axis.unit === "s" || axis.unit === "m") return axisUnit(largest, axis.unit === "m" ? "length" : "time");
+  return { symbol: axis.unit, siPerUnit: 1 };
+}
+
 export function mapFigureDrawing(data: MapFigureData, size: { width: number; height: number }, palette: FigurePalette, paper: boolean): ExportDrawing {
   const { width, height } = size;
   const { grid } = data;
@@ -184,8 +191,8 @@ export function mapFigureDrawing(data: MapFigureData, size: { width: number; hei
     groups.push({ id: "contours", shapes });
   }
 
-  const xUnit = axisUnit(Math.max(...grid.x.values.map(Math.abs)), grid.x.unit === "m" ? "length" : "time");
-  const yUnit = axisUnit(Math.max(...grid.y.values.map(Math.abs)), grid.y.unit === "m" ? "length" : "time");
+  const xUnit = unitOfAxis(grid.x);
+  const yUnit = unitOfAxis(grid.y);
   const xTicks = axisTicks(grid.x.values, grid.x.scale, space.x.shown);
   const yTicks = axisTicks(grid.y.values, grid.y.scale, space.y.shown);
   groups.push({

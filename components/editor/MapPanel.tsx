@@ -26,7 +26,7 @@ import { buttonStyles } from "@/components/ui/styles";
 import { MAP_QUANTITIES, MAX_MAP_SIDE, type AxisScale, type MapQuantity } from "@/physics/maps/axes";
 import { documentAt } from "@/physics/maps/point";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import type { SweepParameter } from "@/physics/sweeps/vary";
+import { ENVIRONMENT_SWEEP_PARAMETERS, type SweepParameter } from "@/physics/sweeps/vary";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
@@ -44,10 +44,12 @@ interface AxisDraft {
 
 const DEFAULT_POINTS = 24;
 
+/** What the document can vary: segment times, a horizon distance, and the environment's parameters it has a part for. */
 function availableParameters(document: ScenarioDocument): SweepParameter[] {
   return [
     ...(document.protocol.kind === "segments" ? (["recombination-time", "hold-time"] as const) : []),
     ...(document.background.kind === "minkowski" ? [] : (["lab-distance"] as const)),
+    ...ENVIRONMENT_SWEEP_PARAMETERS.filter((p) => defaultSweepRange(document, p) !== null),
   ];
 }
 

@@ -12,6 +12,7 @@ import { withBand, type ExportDrawing, type MeasureText } from "@/canvas/export/
 import { currentSweepValue } from "@/canvas/kernels/sweep-range";
 import type { MapAxis, MapGrid, MapQuantity, MapRequest } from "@/physics/maps/axes";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
+import { parameterDimension } from "@/physics/sweeps/vary";
 import { formatQuantity } from "@/physics/units";
 import { SWEEP_PARAMETER_WORDS } from "./sweep-export";
 
@@ -48,7 +49,7 @@ export function mapFigureData(document: ScenarioDocument, map: MapToDraw): MapFi
 }
 
 function axisWords(axis: MapAxis): string {
-  const dimension = axis.parameter === "lab-distance" ? "length" : "time";
+  const dimension = parameterDimension(axis.parameter);
   return `${SWEEP_PARAMETER_WORDS[axis.parameter]} ${formatQuantity(axis.from, dimension)} to ${formatQuantity(axis.to, dimension)}, ${axis.points} points, ${axis.scale}`;
 }
 

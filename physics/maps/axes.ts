@@ -2,13 +2,20 @@
  * What a parameter map is made of: the parameters it may vary, the quantities it may show, the axes and the grid.
  * Types and constants only (safe for lib/contracts.ts and the browser); physics/maps/grid.ts computes.
  */
-import type { SweepParameter } from "../sweeps/vary";
+import type { SweepParameter, SweepUnit } from "../sweeps/vary";
 
 /**
  * Every parameter a map may vary. A record keyed by SweepParameter, so that the type check names this list as soon
  * as physics/sweeps/vary.ts learns a new parameter.
  */
-const parameterSet: Record<SweepParameter, true> = { "recombination-time": true, "hold-time": true, "lab-distance": true };
+const parameterSet: Record<SweepParameter, true> = {
+  "recombination-time": true,
+  "hold-time": true,
+  "lab-distance": true,
+  "gas-pressure": true,
+  "surroundings-temperature": true,
+  "surface-distance": true,
+};
 export const MAP_PARAMETERS = Object.keys(parameterSet) as SweepParameter[];
 
 /** What a map shows at each point: ⟨N⟩ (both channels, or one), the decoherence 𝒟, or the decoherence time. */
@@ -22,7 +29,7 @@ export type AxisScale = "log" | "linear";
 
 export interface MapAxis {
   parameter: SweepParameter;
-  /** SI (s or m), as parameterUnit says. */
+  /** SI (s, m, Pa or K), as parameterUnit says. */
   from: number;
   to: number;
   points: number;
@@ -55,8 +62,8 @@ export interface MapRow {
 export interface MapGrid {
   quantity: MapQuantity;
   unit: string;
-  x: { parameter: SweepParameter; unit: "s" | "m"; scale: AxisScale; values: number[] };
-  y: { parameter: SweepParameter; unit: "s" | "m"; scale: AxisScale; values: number[] };
+  x: { parameter: SweepParameter; unit: SweepUnit; scale: AxisScale; values: number[] };
+  y: { parameter: SweepParameter; unit: SweepUnit; scale: AxisScale; values: number[] };
   /** log10[row][column]: row j is y.values[j], column i is x.values[i]. */
   log10: (number | null)[][];
   gaps: MapGap[];

@@ -2,6 +2,7 @@
  * What the JSON API answers with: the data transfer objects of every resource, as the browser, the CLI and the
  * tests read them. Pure types (no server code): db/ maps its rows onto these, components/ and notebooks read them.
  */
+import type { MapGrid, MapRequest } from "../physics/maps/axes";
 import type { ScenarioDocument } from "../physics/scenario/schema";
 import type { DocumentDiff } from "./json-diff";
 
@@ -199,4 +200,29 @@ export interface AttachmentDto {
   sizeBytes: number;
   uploadedBy: PersonDto | null;
   createdAt: string;
+}
+
+export type ParameterMapStatus = "queued" | "running" | "done" | "cancelled" | "failed";
+
+/** A parameter map without its grid (lists, progress). */
+export interface ParameterMapSummary {
+  id: string;
+  url: string;
+  status: ParameterMapStatus;
+  /** Rows of the grid finished, of all its rows. */
+  progress: { rowsDone: number; rowsTotal: number; fraction: number };
+  request: MapRequest;
+  /** The saved scenario it belongs to, at the version mapped; null for a map of an unsaved document. */
+  scenario: { projectId: string; scenarioId: string; version: number } | null;
+  failure: string | null;
+  createdAt: string;
+  updatedAt: string;
+  finishedAt: string | null;
+}
+
+export interface ParameterMapDto extends ParameterMapSummary {
+  /** The document that was mapped (the scenario's at `scenario.version`). */
+  document: ScenarioDocument;
+  /** The grid, once status is done. */
+  result: MapGrid | null;
 }

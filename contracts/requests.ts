@@ -3,10 +3,12 @@
  * (which show the same messages inline). Pure zod: no server code, safe to import in the browser.
  */
 import { z } from "zod";
+import { MAP_PARAMETERS, MAP_QUANTITIES, MAX_MAP_SIDE } from "../physics/maps/axes";
 import { rangeIssues } from "../physics/scenario/ranges";
 import { parseScenarioDocument } from "../physics/scenario/schema";
 import { keptText } from "../physics/scenario/text";
 import { SWEEP_PARAMETERS } from "../physics/sweeps/parameters";
+import type { SweepParameter } from "../physics/sweeps/vary";
 
 // Every text a request carries goes through keptText: no NUL and no lone surrogate, refused with the field's path.
 export const emailSchema = keptText().trim().toLowerCase().email("enter a valid e-mail address").max(320, "e-mail address is too long");
@@ -178,3 +180,31 @@ export const sequencerProfileJsonSchema = sequencerProfileOptionsSchema.extend({
 export const exportQuerySchema = z.object({
   what: z.enum(["scenario", "budget"], { error: 'what must be "scenario" (the scenario file) or "budget" (the Budget as CSV)' }),
 });
+
+/** One axis of a parameter map: SI values (s or m, as the parameter says), log or linear spacing. */
+export const mapAxisSchema = z
+  .object({
+    parameter: z.enum(MAP_PARAMETERS as [SweepParameter, ...SweepParameter[]], { error: `parameter must be one of ${MAP_PARAMETERS.join(", ")}` }),
+    from: z.number({ error: "from must be a number (SI: s or m)" }).finite(),
+    to: z.number({ error: "to must be a number (SI: s or m)" }).finite(),
+    points: z.number({ error: "points must be a whole number" }).int("points must be a whole number").min(2, "an axis takes at least 2 points").max(MAX_MAP_SIDE, `an axis takes at most ${MAX_MAP_SIDE} points`),
+    scale: z.enum(["log", "linear"], { error: "scale must be log or linear" }).default("log"),
+  })
+  .strict();
+
+/**
+ * POST /api/maps: a map of a saved scenario (kept with it) or of a document sent along (the caller's alone).
+ * The saved scenario's current version is mapped; a document sent along is checked here (scenarioDocumentInput).
+ */
+export const mapCreateSchema = z
+  .object({
+    scenario: z.object({ projectId: keptText().min(1).max(100), scenarioId: keptText().min(1).max(100) }).strict().optional(),
+    document: scenarioDocumentInput.optional(),
+    x: mapAxisSchema,
+    y: mapAxisSchema,
+    quantity: z.enum(MAP_QUANTITIES, { error: `quantity must be one of ${MAP_QUANTITIES.join(", ")}` }).default("total-quanta"),
+  })
+  .strict()
+  .refine((v) => (v.scenario === undefined) !== (v.document === undefined), { message: "give either scenario (a saved one) or document (an unsaved one), not both", path: ["scenario"] });
+
+export const mapResultQuerySchema = z.object({ format: z.enum(["json", "csv"], { error: "format must be json or csv" }).default("json") }).strict();

@@ -3,7 +3,7 @@
  * between them). Generated<> marks columns the database fills in.
  */
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from "kysely";
-import type { ApiTokenScope, AuditAction, InvitedRole, ProjectRole, SiteRole } from "../contracts/dto";
+import type { ApiTokenScope, AuditAction, InvitedRole, ParameterMapStatus, ProjectRole, SiteRole } from "../contracts/dto";
 
 export type { ApiTokenScope, AuditAction, InvitedRole, ProjectRole, SiteRole };
 
@@ -193,6 +193,32 @@ export interface ApiTokensTable {
   revokedAt: Date | null;
 }
 
+/** A parameter map (db/parameter-maps.ts): its inputs, status, progress in rows and, once done, its grid. */
+export interface ParameterMapsTable {
+  id: Generated<string>;
+  projectId: string | null;
+  scenarioId: string | null;
+  scenarioVersion: number | null;
+  createdBy: string | null;
+  inputs: Json;
+  status: ColumnType<ParameterMapStatus, ParameterMapStatus | undefined, ParameterMapStatus>;
+  rowsTotal: number;
+  rowsDone: Generated<number>;
+  result: ColumnType<unknown, string | null | undefined, string | null>;
+  failure: string | null;
+  createdAt: Generated<Date>;
+  updatedAt: Timestamp;
+  finishedAt: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+}
+
+/** One finished row of a parameter map, kept once however often its chunk ran. */
+export interface ParameterMapRowsTable {
+  mapId: string;
+  rowIndex: number;
+  rowData: Json;
+  computedAt: Generated<Date>;
+}
+
 export interface Database {
   users: UsersTable;
   verificationTokens: VerificationTokensTable;
@@ -210,6 +236,8 @@ export interface Database {
   scenarioResults: ScenarioResultsTable;
   computeRateLimits: ComputeRateLimitsTable;
   apiTokens: ApiTokensTable;
+  parameterMaps: ParameterMapsTable;
+  parameterMapRows: ParameterMapRowsTable;
 }
 
 export type User = Selectable<UsersTable>;

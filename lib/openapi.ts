@@ -107,6 +107,11 @@ export const operations: Operation[] = [
   { method: "get", path: "/api/share/{token}", tag: "Sharing", summary: "A shared scenario and its computed result", access: "share link", success: { status: 200, description: "The scenario, read-only, with its result" } },
   { method: "get", path: "/api/share/{token}/export", tag: "Sharing", summary: "Download a shared scenario's file or Budget", access: "share link", query: contracts.exportQuerySchema, success: { status: 200, description: "The file, as an attachment", mediaType: "application/octet-stream" } },
 
+  { method: "post", path: "/api/maps", tag: "Maps", summary: "Start a parameter map: one quantity over a grid of two parameters (up to 200 × 200, log or linear per axis), computed by the queue's workers", access: "signed in", body: { schema: contracts.mapCreateSchema, description: "Either scenario (a saved scenario, editor's right needed; the map is kept with it) or document (an unsaved one; the map is the caller's alone)" }, success: { status: 202, description: "The map, queued; its URL is in map.url and the Location header" } },
+  { method: "get", path: "/api/maps/{mapId}", tag: "Maps", summary: "A map's status and progress (rows done of rows) and, once done, its grid (log10 of the quantity per point); ?format=csv for one line per point", access: "signed in", query: contracts.mapResultQuerySchema, success: { status: 200, description: "The map (JSON), or its points (CSV, inputs in the header) once done" } },
+  { method: "delete", path: "/api/maps/{mapId}", tag: "Maps", summary: "Cancel a queued or running map (its rows stop), or delete a finished one", access: "signed in", success: { status: 200, description: "The cancelled map (204 when a finished map was deleted)" } },
+  { method: "get", path: "/api/projects/{projectId}/scenarios/{scenarioId}/maps", tag: "Maps", summary: "The maps kept with a saved scenario, newest first", access: "project viewer", success: { status: 200, description: "The maps with status and progress (grids at each map's URL)" } },
+
   { method: "get", path: "/api/openapi.json", tag: "Reference", summary: "This description of the API", access: "anyone", success: { status: 200, description: "The OpenAPI 3.1 document" } },
 ];
 

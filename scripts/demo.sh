@@ -24,6 +24,13 @@ npm run --silent db:seed
 echo "[demo] building (about half a minute)" >&2
 node_modules/.bin/next build >.data/run/build.log 2>&1 || { tail -40 .data/run/build.log; exit 1; }
 
+# One parameter-map worker beside the server (more: `npm run worker` in other terminals, or on other machines
+# with DATABASE_URL pointing here). It stops with the demo.
+node_modules/.bin/tsx --conditions react-server scripts/worker.ts >.data/run/worker.log 2>&1 &
+worker_pid=$!
+trap 'kill "$worker_pid" 2>/dev/null || true; bash scripts/services.sh stop' EXIT
+echo "[demo] one map worker running (pid $worker_pid, log in .data/run/worker.log)" >&2
+
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(ensure_secret)}"
 export BRANCHLINE_MAILBOX_URL="http://127.0.0.1:${MAILBOX_PORT:-2526}"
 

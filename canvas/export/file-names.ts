@@ -17,6 +17,11 @@ export function sweepFileName(title: string, format: FigureFormat): string {
   return figureFileName(title, "sweep", format);
 }
 
+/** "slow-recombination-map.svg", "slow-recombination-map-2x.png", "slow-recombination-map.pdf", "slow-recombination-map.csv". */
+export function mapFileName(title: string, format: FigureFormat | { kind: "csv" }): string {
+  return format.kind === "csv" ? scenarioFileName(`${title} map`, "csv") : figureFileName(title, "map", format);
+}
+
 /** "slow-recombination-budget.png", "slow-recombination-budget.svg": the Budget table as a picture. */
 export function budgetPictureFileName(title: string, kind: "png" | "svg"): string {
   return scenarioFileName(`${title} budget`, kind);

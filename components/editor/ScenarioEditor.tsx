@@ -26,6 +26,7 @@ import { ProtocolStrip } from "./ProtocolStrip";
 import { filesPath, historyPath, sharingPath } from "@/components/sharing/ScenarioSharingIndex";
 import { EditorSequencerImport } from "@/components/uploads/EditorSequencerImport";
 import { SweepPanel } from "./SweepPanel";
+import { MapPanel } from "./MapPanel";
 import { useAutosave } from "./useAutosave";
 import { useUndoShortcuts } from "./useUndoShortcuts";
 
@@ -114,6 +115,7 @@ function EditorBody({
         <div className="space-y-8">
           <BudgetPanel title={scenario.title} />
           <SweepPanel />
+          <MapPanel projectId={project.id} scenarioId={scenario.id} title={scenario.title} />
         </div>
       </div>
       <ConflictDialog projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />

@@ -10,6 +10,7 @@
  * The bare transform and the computations are timed in turn within one loop, so that a load that comes and goes
  * (other builds on the machine) weighs on both sides of the ratio alike. Medians throughout.
  */
+import { spawnSync } from "node:child_process";
 import FFT from "fft.js";
 import { computeScenario } from "../../physics/compute";
 import { elementaryCharge } from "../../physics/constants";
@@ -131,6 +132,11 @@ const lines = [
   `target exact rate < 100 ms per 200-point sweep: ${verdict(exactSweep < 100)}`,
 ];
 console.log(lines.join("\n"));
+
+// The map bench needs PostgreSQL and the react-server condition (db/): its own process, after these figures.
+if (process.env.BENCH_MAPS !== "0") {
+  spawnSync(process.execPath, ["--conditions", "react-server", "--import", "tsx", "tests/bench/maps.ts"], { stdio: "inherit" });
+} else console.log("parameter maps through the queue: skipped (BENCH_MAPS=0)");
 
 // The browser bench needs a running Branchline with the demo data, so it runs only when BRANCH_URL names one.
 if (process.env.BRANCH_URL) void import("./editor-browser");

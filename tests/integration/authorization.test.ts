@@ -15,6 +15,7 @@ import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { coreCases } from "./authorization-cases/core";
+import { mapCases } from "./authorization-cases/maps";
 import { outputCases } from "./authorization-cases/outputs";
 import { type Caller, type Case, tokenCallers } from "./authorization-cases/shared";
 import { tokenCases, tokenExpectation, tokenFor } from "./authorization-cases/tokens";
@@ -22,7 +23,7 @@ import { uploadCases } from "./authorization-cases/uploads";
 import { call, makeUser } from "./harness";
 import { projectFixture, type Role, type TeamExtras, teamExtras, userFor } from "./fixtures";
 
-const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases];
+const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases, ...mapCases];
 
 /** Routes tested elsewhere, with the reason. */
 const exempt: Record<string, string> = {

@@ -2,6 +2,8 @@ import { getDb } from "@/db";
 import { createApiToken } from "@/db/api-tokens";
 import { uploadAttachment } from "@/db/attachments";
 import { createInvitation } from "@/db/invitations";
+import { createParameterMap } from "@/db/parameter-maps";
+import { enqueueMapRows } from "@/lib/map-queue";
 import { addMemberByEmail } from "@/db/members";
 import { createProject } from "@/db/projects";
 import { createScenario } from "@/db/scenarios";
@@ -53,6 +55,9 @@ export interface TeamExtras {
   attachmentId?: string;
   /** A personal API token of the fixture's owner (made by teamExtras). */
   ownerTokenId?: string;
+  /** A queued 2 × 2 parameter map of the fixture's scenario, and one of an unsaved document, both by the owner. */
+  scenarioMapId?: string;
+  ownMapId?: string;
 }
 
 /** An invitation and share links in a fixture project, made by its owner through the data access layer. */
@@ -72,7 +77,9 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
     bytes: new TextEncoder().encode("t [ms],separation [um]\n0,0\n5,2\n10,0\n"),
   });
   const ownerToken = await createApiToken(db, owner, { name: "fixture notebook", scope: "read", expiresInDays: 30 });
+  const maps = await fixtureMaps(f);
   return {
+    ...maps,
     ownerTokenId: ownerToken.apiToken.id,
     invitationId: invitation.id,
     invitationToken,
@@ -81,4 +88,18 @@ export async function teamExtras(f: ProjectFixture): Promise<TeamExtras> {
     revokedLinkToken: revoked.token,
     attachmentId: attachment.id,
   };
+}
+
+/** A small map request, cheap for a worker (2 × 2 points), that the default document can make. */
+export const smallMapRequest = () => ({
+  x: { parameter: "recombination-time" as const, from: 1e-3, to: 1e-2, points: 2, scale: "log" as const },
+  y: { parameter: "hold-time" as const, from: 1e-2, to: 1e-1, points: 2, scale: "linear" as const },
+  quantity: "total-quanta" as const,
+});
+
+async function fixtureMaps(f: ProjectFixture): Promise<{ scenarioMapId: string; ownMapId: string }> {
+  const owner = { userId: f.users.owner.id, siteRole: "member" as const };
+  const ofScenario = await createParameterMap(getDb(), owner, { scenario: { projectId: f.projectId, scenarioId: f.scenarioId }, request: smallMapRequest() }, enqueueMapRows);
+  const own = await createParameterMap(getDb(), owner, { document: defaultScenarioDocument(), request: smallMapRequest() }, enqueueMapRows);
+  return { scenarioMapId: ofScenario.id, ownMapId: own.id };
 }

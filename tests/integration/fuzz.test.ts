@@ -9,6 +9,7 @@
 import fc from "fast-check";
 import { beforeAll, describe, expect, it } from "vitest";
 import { coreCases } from "./authorization-cases/core";
+import { mapCases } from "./authorization-cases/maps";
 import { outputCases } from "./authorization-cases/outputs";
 import type { Case } from "./authorization-cases/shared";
 import { tokenCases } from "./authorization-cases/tokens";
@@ -16,7 +17,7 @@ import { uploadCases } from "./authorization-cases/uploads";
 import { projectFixture, teamExtras, type ProjectFixture, type TeamExtras } from "./fixtures";
 import { call, type TestUser } from "./harness";
 
-const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases];
+const cases: Case[] = [...coreCases, ...outputCases, ...uploadCases, ...tokenCases, ...mapCases];
 const RUNS = Number(process.env.FUZZ_RUNS ?? 6);
 
 const evilText = fc.constantFrom(

@@ -1,0 +1,3 @@
+export * from "./axes";
+export * from "./grid";
+export * from "./point";

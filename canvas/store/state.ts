@@ -2,11 +2,11 @@
 import type { DiagramPoint } from "@/physics/backgrounds";
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepResult } from "../compute-client";
-import type { DragStart, ProtocolPlan } from "../kernels/lab-view/drag-plan";
-import type { HandleId } from "../kernels/lab-view/handles";
+import type { DragStart, ProtocolPlan } from "../kernels/offsets/drag-plan";
+import type { HandleId } from "../kernels/offsets/handles";
 import type { LabKeyEvent, LabPointerEvent } from "../tools/types";
 import type { History } from "./history";
-import type { LabViewSelectors } from "./selectors";
+import type { OffsetsSelectors } from "./selectors";
 import type { SceneOutcome } from "../kernels/diagram/scene";
 
 export type LabToolState = { name: "idle" } | { name: "dragging"; start: DragStart; plan: ProtocolPlan | null };
@@ -54,8 +54,8 @@ export interface EditorData {
   transaction: { label: string; mark: ScenarioDocument } | null;
   selection: HandleId | null;
   hover: HandleId | null;
-  labTool: LabToolState;
-  labViewSize: { width: number; height: number };
+  offsetsTool: LabToolState;
+  offsetsSize: { width: number; height: number };
   diagramPointer: DiagramPoint | null;
   /** The last edit the editor refused, with why; cleared by the next accepted edit. */
   refused: { label: string; issues: SchemaIssue[] } | null;
@@ -73,7 +73,7 @@ export interface EditorActions {
   begin(label: string): void;
   /** One frame of a drag: the step of the edit under way (computed from the document at the mark) and the Lab
    *  tool's new state, set together. */
-  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, labTool: LabToolState): void;
+  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, offsetsTool: LabToolState): void;
   /** Finish the edit under way as one undo step. */
   commit(): void;
   /** Abandon the edit under way: the document returns to the mark. */
@@ -82,15 +82,15 @@ export interface EditorActions {
   redo(): void;
   select(handle: HandleId | null): void;
   setHover(handle: HandleId | null): void;
-  setLabViewSize(size: { width: number; height: number }): void;
+  setOffsetsSize(size: { width: number; height: number }): void;
   setDiagramPointer(point: DiagramPoint | null): void;
-  labPointerDown(event: LabPointerEvent): void;
-  labPointerMove(event: LabPointerEvent): void;
-  labPointerUp(event: LabPointerEvent): void;
+  offsetsPointerDown(event: LabPointerEvent): void;
+  offsetsPointerMove(event: LabPointerEvent): void;
+  offsetsPointerUp(event: LabPointerEvent): void;
   /** Escape, or the pointer lost: cancel a drag. */
-  labCancel(): void;
+  offsetsCancel(): void;
   /** Returns true when the key was used (so the caller can prevent its default). */
-  labKeyDown(event: LabKeyEvent): boolean;
+  offsetsKeyDown(event: LabKeyEvent): boolean;
   /** Replace the document with the server's (reload after a conflict): a new base, a fresh history. */
   loadDocument(document: ScenarioDocument, version: number): void;
   saveStarted(): void;
@@ -109,7 +109,7 @@ export interface EditorActions {
 
 /** Memoised derived values of this store (one set per store, so editors never share a cache). */
 export interface EditorDerived {
-  labView: LabViewSelectors;
+  offsets: OffsetsSelectors;
   /** The Diagram's scene for a document (the same document gives the same object; the backdrop survives drags). */
   diagramScene(document: ScenarioDocument): SceneOutcome;
 }

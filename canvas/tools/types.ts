@@ -1,4 +1,4 @@
-/** Events the Lab view sends to its tool, in stage pixels, and the handlers each tool state may define. */
+/** Events the Offsets panel sends to its tool, in stage pixels, and the handlers each tool state may define. */
 import type { EditorState, LabToolState } from "../store/state";
 
 export interface LabPointerEvent {

@@ -13,7 +13,7 @@
  * the radius it reaches whichever way it moves (both branches of a symmetric split fall on one curve there).
  *
  * The picture is centred on the protocol (drawn Killing time 0 is its middle; a time translation is a symmetry of
- * every background here), while times are labelled from the start of the separation, as in the Lab view. Near a horizon a protocol of many e-folding times 1/κ would crowd into i⁻ and
+ * every background here), while times are labelled from the start of the separation, as in the Offsets panel. Near a horizon a protocol of many e-folding times 1/κ would crowd into i⁻ and
  * i⁺, and one much shorter than 1/κ would shrink to a point, so there the time along the branches is drawn
  * compressed or stretched until it spans a readable stretch of the worldline, and the diagram says so; Minkowski
  * needs neither (its scale L is chosen from the protocol's duration, see chart.ts).
@@ -40,7 +40,7 @@ const DRAWN_REACH = 0.6;
 const MIN_PIECE_SHARE = 0.2;
 
 /**
- * A piecewise-linear schedule of lab time, as the Lab view's axis has: each stretch between two of the protocol's
+ * A piecewise-linear schedule of lab time, as the Offsets panel's axis has: each stretch between two of the protocol's
  * events (ramps, hold) is drawn at least MIN_PIECE_SHARE of the whole, so a 10 ms ramp beside a 1000 s hold is not
  * a point on the worldline (and the branch has the room to move apart while staying timelike). The branches are then
  * the worldlines of a protocol with those drawn durations; the slices' labels give the true times.

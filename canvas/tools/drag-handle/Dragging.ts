@@ -1,10 +1,10 @@
 /**
  * Drag-handle tool, dragging: every move asks the drag kernel for a plan from the document at pointer-down and
  * shows it with the tool's new state in one store update (subscribers never see one without the other); release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
- * Tab is held back while dragging, so focus stays in the Lab view.
+ * Tab is held back while dragging, so focus stays in the Offsets panel.
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
-import { planHandleDrag } from "../../kernels/lab-view/drag-plan";
+import { planHandleDrag } from "../../kernels/offsets/drag-plan";
 import type { LabToolState } from "../../store/state";
 import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
 

@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * The Lab view: both branches' offsets along the separation axis against the lab's proper time, at a scale where
+ * The Offsets panel: both branches' offsets along the separation axis against the lab's proper time, at a scale where
  * a micrometre reads, with the handles that set the protocol. Pointer events go to the store's drag-handle tool
  * (captured, so a drag may leave the stage). From the keyboard, Tab and Shift+Tab walk the handles in protocol order
  * (a ring marks the one selected while the view has focus, and a live line names it with its value), arrow keys
@@ -12,16 +12,16 @@ import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import { formatQuantity } from "@/physics/units";
 import { useEditor, useEditorStore } from "../EditorProvider";
 import { compactQuantity } from "../kernels/diagram/labels";
-import { boundaryTicks, offsetTicks, timeAxisLabels, type Tick } from "../kernels/lab-view/axis-ticks";
-import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/lab-view/handles";
-import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type LabViewport, type PlotRect } from "../kernels/lab-view/viewport";
+import { boundaryTicks, offsetTicks, timeAxisLabels, type Tick } from "../kernels/offsets/axis-ticks";
+import { HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId, type HandlePlacement } from "../kernels/offsets/handles";
+import { metresToPx, pxToTime, scaleBreaksPx, timeToPx, type OffsetsViewport, type PlotRect } from "../kernels/offsets/viewport";
 import { branchOffsetsMetres, pathSampleTimes, segmentTimes, separationFraction, SEGMENT_NAMES, type SegmentsProtocol } from "../kernels/timeline";
 import { profilePaths } from "../kernels/profile";
 import type { EditorState } from "../store/state";
 import { DASHES, FIGURE_PALETTES, type FigurePalette } from "../theme";
 import { useFigureFonts, type FigureFonts } from "./useFigureFonts";
 
-function branchPaths(viewport: LabViewport, protocol: SegmentsProtocol, separation: Parameters<typeof branchOffsetsMetres>[0], origin: number) {
+function branchPaths(viewport: OffsetsViewport, protocol: SegmentsProtocol, separation: Parameters<typeof branchOffsetsMetres>[0], origin: number) {
   const times = segmentTimes(protocol, origin);
   const first = viewport.pieces[0];
   const last = viewport.pieces[viewport.pieces.length - 1];
@@ -45,7 +45,7 @@ const SANS_EM = 0.51;
 const AXIS_FONT_PX = 11;
 
 /** A formula or sampled profile, as the physics library samples it (shown, not edited: it has no handles). */
-function profileCurves(viewport: LabViewport, document: Parameters<typeof profilePaths>[0]) {
+function profileCurves(viewport: OffsetsViewport, document: Parameters<typeof profilePaths>[0]) {
   const a: number[] = [];
   const b: number[] = [];
   for (const p of profilePaths(document, 400)) {
@@ -56,8 +56,8 @@ function profileCurves(viewport: LabViewport, document: Parameters<typeof profil
   return { a, b };
 }
 
-/** A ring around the selected handle while the Lab view has focus: round on the point, tall on a rule's grip. */
-function FocusRing({ handle, viewport, palette }: { handle: HandlePlacement; viewport: LabViewport; palette: FigurePalette }) {
+/** A ring around the selected handle while the Offsets panel has focus: round on the point, tall on a rule's grip. */
+function FocusRing({ handle, viewport, palette }: { handle: HandlePlacement; viewport: OffsetsViewport; palette: FigurePalette }) {
   if (handle.axis === "distance") return <Circle x={handle.x} y={handle.y} radius={17} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
   const bottom = viewport.plot.top + viewport.plot.height;
   return <Rect x={handle.x - 9} y={bottom - 11} width={18} height={20} cornerRadius={4} stroke={palette.focus} strokeWidth={2} dash={[4, 3]} />;
@@ -140,11 +140,11 @@ type FocusMode = "none" | "pointer" | "keyboard";
  * What the stage draws, subscribed to the store from inside the stage: a drag re-renders this layer in react-konva's
  * own renderer, not the Stage and the page around it.
  */
-function LabViewLayer({ width, height, focus }: { width: number; height: number; focus: FocusMode }) {
+function OffsetsLayer({ width, height, focus }: { width: number; height: number; focus: FocusMode }) {
   const document = useEditor((s) => s.document);
-  const viewport = useEditor((s) => s.labView.viewport(s));
-  const origin = useEditor((s) => s.labView.originSeconds(s));
-  const handles = useEditor((s) => s.labView.handles(s));
+  const viewport = useEditor((s) => s.offsets.viewport(s));
+  const origin = useEditor((s) => s.offsets.originSeconds(s));
+  const handles = useEditor((s) => s.offsets.handles(s));
   const hover = useEditor((s) => s.hover);
   const selection = useEditor((s) => s.selection);
   const fonts = useFigureFonts();
@@ -229,30 +229,30 @@ function LabViewLayer({ width, height, focus }: { width: number; height: number;
 
 /** Where the pointer may grab: the cursor for the handle under it, or the one being dragged. */
 function cursorFor(state: EditorState): string {
-  if (state.labTool.name === "dragging") return "grabbing";
-  const hovered = state.labView.handles(state).find((h) => h.id === state.hover);
+  if (state.offsetsTool.name === "dragging") return "grabbing";
+  const hovered = state.offsets.handles(state).find((h) => h.id === state.hover);
   return hovered ? (hovered.axis === "time" ? "ew-resize" : "ns-resize") : "default";
 }
 
 /** The handles' positions in stage pixels, for tests and benches that drive the view with a mouse. */
 function handlesAttribute(state: EditorState): string {
-  return JSON.stringify(state.labView.handles(state).map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })));
+  return JSON.stringify(state.offsets.handles(state).map((h) => ({ id: h.id, x: Math.round(h.x), y: h.axis === "distance" ? Math.round(h.y) : null })));
 }
 
 /** The live line naming the selected handle and its value; quiet while dragging (a value a frame would flood a screen reader). */
 function SelectionLine({ id }: { id: string }) {
-  const dragging = useEditor((s) => s.labTool.name === "dragging");
+  const dragging = useEditor((s) => s.offsetsTool.name === "dragging");
   const words = useEditor((s) => (s.document.protocol.kind === "segments" ? selectionWords(s.selection, s.document.protocol, s.document.separation) : ""));
   return (
-    <p id={id} aria-live="polite" className="sr-only" data-testid="lab-view-selection">
+    <p id={id} aria-live="polite" className="sr-only" data-testid="offsets-selection">
       {dragging ? "" : words}
     </p>
   );
 }
 
-export default function LabViewStage({ width, height }: { width: number; height: number }) {
+export default function OffsetsStage({ width, height }: { width: number; height: number }) {
   const store = useEditorStore();
-  const readable = useEditor((s) => s.labView.viewport(s) !== null);
+  const readable = useEditor((s) => s.offsets.viewport(s) !== null);
   const protocolKind = useEditor((s) => s.document.protocol.kind);
   const selection = useEditor((s) => s.selection);
   const cursor = useEditor(cursorFor);
@@ -282,7 +282,7 @@ export default function LabViewStage({ width, height }: { width: number; height:
     };
   }, []);
   const local = (event: PointerEvent) => {
-    if (store.getState().labTool.name === "dragging") dragBox.current ??= container.current!.getBoundingClientRect();
+    if (store.getState().offsetsTool.name === "dragging") dragBox.current ??= container.current!.getBoundingClientRect();
     const box = dragBox.current ?? container.current!.getBoundingClientRect();
     return { x: event.clientX - box.left, y: event.clientY - box.top, shiftKey: event.shiftKey };
   };
@@ -290,13 +290,13 @@ export default function LabViewStage({ width, height }: { width: number; height:
     if (event.button !== 0) return;
     container.current?.focus();
     event.currentTarget.setPointerCapture(event.pointerId);
-    store.getState().labPointerDown(local(event));
+    store.getState().offsetsPointerDown(local(event));
   };
   const endDrag = () => {
     dragBox.current = null;
   };
   const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
-    if (store.getState().labKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
+    if (store.getState().offsetsKeyDown({ key: event.key, shiftKey: event.shiftKey })) event.preventDefault();
   };
   if (!readable) {
     return <div className="flex h-full items-center justify-center p-6 text-sm text-ink-soft">This scenario's {protocolKind} profile cannot be read.</div>;
@@ -306,32 +306,32 @@ export default function LabViewStage({ width, height }: { width: number; height:
       ref={container}
       tabIndex={0}
       role="application"
-      aria-label="Lab view: branch offsets against lab time; Tab selects the next handle, the arrow keys move it, Escape lets it go"
+      aria-label="Offsets: branch offsets against lab time; Tab selects the next handle, the arrow keys move it, Escape lets it go"
       aria-describedby={selectionLineId}
-      data-testid="lab-view"
+      data-testid="offsets"
       data-selected={selection ?? ""}
       style={{ cursor, touchAction: "none", outline: "none" }}
       onFocus={(e) => setFocus(e.currentTarget.matches(":focus-visible") ? "keyboard" : "pointer")}
       onBlur={() => setFocus("none")}
       onPointerDown={onPointerDown}
-      onPointerMove={(e) => store.getState().labPointerMove(local(e))}
+      onPointerMove={(e) => store.getState().offsetsPointerMove(local(e))}
       onPointerUp={(e) => {
-        store.getState().labPointerUp(local(e));
+        store.getState().offsetsPointerUp(local(e));
         endDrag();
       }}
       onPointerCancel={() => {
-        store.getState().labCancel();
+        store.getState().offsetsCancel();
         endDrag();
       }}
       onLostPointerCapture={() => {
-        if (store.getState().labTool.name === "dragging") store.getState().labCancel();
+        if (store.getState().offsetsTool.name === "dragging") store.getState().offsetsCancel();
         endDrag();
       }}
-      onPointerLeave={() => store.getState().labTool.name === "idle" && store.getState().setHover(null)}
+      onPointerLeave={() => store.getState().offsetsTool.name === "idle" && store.getState().setHover(null)}
       onKeyDown={onKeyDown}
     >
       <Stage width={width} height={height} listening={false}>
-        <LabViewLayer width={width} height={height} focus={focus} />
+        <OffsetsLayer width={width} height={height} focus={focus} />
       </Stage>
       <SelectionLine id={selectionLineId} />
     </div>

@@ -91,72 +91,99 @@ function EmbedBody({ title, result, resultIssues, sharePath, options, palette }:
   const counts = useMemo(() => (result ? createRunningCounts(document, result) : null), [document, result]);
   const total = counts?.totalSeconds ?? 0;
   const [ref, size] = useElementSize<HTMLDivElement>({ width: 0, height: 0 });
+  const [chromeRef, chromeSize] = useElementSize<HTMLDivElement>({ width: 0, height: 0 });
   const scrubbing = options.scrub && outcome.ok && outcome.scene.protocol !== null && total > 0;
   const playback = usePlayback(total, scrubbing);
   const { tau } = playback;
 
   const cursor = scrubbing && outcome.ok && tau < total ? timeCursor(outcome.scene, total, tau) : null;
   const scale = options.largeType ? LARGE_TYPE_SCALE : 1;
-  // Large type is for the figure's labels, read from afar; the lines under it stay small, so the Diagram keeps the frame.
+  // Large type is for the figure's labels, read from afar; the lines beside it stay small, so the Diagram keeps the frame.
   const text = options.largeType ? "text-sm" : "text-xs";
   const rows = scrubbing && counts ? counts.rows(tau) : null;
+  const side = chromeBeside(size);
+  const inset = side ? { right: side, bottom: 0 } : { right: 0, bottom: chromeSize.height };
 
   return (
-    <div className="flex h-screen flex-col overflow-hidden" style={{ background: palette.paper, color: palette.inkSoft }} data-testid="embed" data-theme={document.display.theme}>
-      <div ref={ref} className="min-h-0 flex-1" data-testid="embed-diagram">
-        {size.width > 0 && size.height > 0 && <DiagramStage width={size.width} height={size.height} labelScale={scale} cursor={cursor} />}
+    <div className="relative h-screen overflow-hidden" style={{ background: palette.paper, color: palette.inkSoft }} data-testid="embed" data-theme={document.display.theme}>
+      <div ref={ref} className="absolute inset-0" data-testid="embed-diagram">
+        {size.width > 0 && size.height > 0 && <DiagramStage width={size.width} height={size.height} labelScale={scale} cursor={cursor} inset={inset} />}
       </div>
-      {scrubbing && (
-        <div className={`flex flex-wrap items-center gap-x-3 gap-y-1 px-3 pt-1 ${text}`} role="group" aria-label="Time scrubber">
-          <button type="button" onClick={playback.toggle} className="rounded border px-2 py-0.5" style={{ borderColor: palette.inkFaint, color: palette.ink }} aria-pressed={playback.playing}>
-            {playback.playing ? "❚❚ Pause" : "▶ Play"}
-          </button>
-          <input
-            type="range"
-            min={0}
-            max={SLIDER_STEPS}
-            value={Math.round((tau / total) * SLIDER_STEPS)}
-            onChange={(e) => playback.scrubTo((Number(e.target.value) / SLIDER_STEPS) * total)}
-            aria-label="Lab time"
-            aria-valuetext={`${formatQuantity(tau, "time")} of ${formatQuantity(total, "time")}`}
-            className="min-w-32 flex-1"
-            style={{ accentColor: palette.branchB }}
-          />
-          <span className="tabular" data-testid="scrub-time">
-            τ = {formatQuantity(tau, "time")} / {formatQuantity(total, "time")}
+      <div
+        ref={chromeRef}
+        className={side ? "absolute bottom-0 right-0 top-0 flex flex-col justify-end overflow-y-auto" : "absolute inset-x-0 bottom-0"}
+        style={{ background: palette.paper, width: side || undefined }}
+        data-testid="embed-chrome"
+      >
+        {scrubbing && (
+          <div className={`flex flex-wrap items-center gap-x-3 gap-y-1 px-3 pt-1 ${text}`} role="group" aria-label="Time scrubber">
+            <button type="button" onClick={playback.toggle} className="rounded border px-2 py-0.5" style={{ borderColor: palette.inkFaint, color: palette.ink }} aria-pressed={playback.playing}>
+              {playback.playing ? "❚❚ Pause" : "▶ Play"}
+            </button>
+            <input
+              type="range"
+              min={0}
+              max={SLIDER_STEPS}
+              value={Math.round((tau / total) * SLIDER_STEPS)}
+              onChange={(e) => playback.scrubTo((Number(e.target.value) / SLIDER_STEPS) * total)}
+              aria-label="Lab time"
+              aria-valuetext={`${formatQuantity(tau, "time")} of ${formatQuantity(total, "time")}`}
+              className="min-w-32 flex-1"
+              style={{ accentColor: palette.branchB }}
+            />
+            <span className="tabular" data-testid="scrub-time">
+              τ = {formatQuantity(tau, "time")} / {formatQuantity(total, "time")}
+            </span>
+          </div>
+        )}
+        {rows && (
+          <div className={`flex flex-wrap items-baseline gap-x-3 gap-y-0.5 px-3 pt-1 ${text}`}>
+            <RunningCounts rows={rows} />
+            <span className="flex items-center gap-1" title="The totals are the computed ones; how they build up in time is an estimate: the ramps' share by their strength, the hold's by the time spent apart.">
+              <FlagIcon kind="note" />
+              approximation: the computed totals shared out along lab time
+            </span>
+          </div>
+        )}
+        {!result && resultIssues && resultIssues.length > 0 && (
+          <p className={`px-3 pt-1 ${text}`} role="status" data-testid="embed-issues">
+            The numbers cannot be computed: {resultIssues.map((i) => `${i.message}${i.path ? ` (${i.path})` : ""}`).join("; ")}
+          </p>
+        )}
+        {outcome.ok && outcome.scene.notes.length > 0 && (
+          <p className="px-3 pt-1 text-xs opacity-80" data-testid="embed-notes">
+            {outcome.scene.notes.join(" ")}
+          </p>
+        )}
+        <div className={`flex flex-wrap items-center justify-between gap-x-4 gap-y-1 px-3 py-1.5 ${text}`}>
+          <BranchLegend radiation onFigurePaper large={options.largeType} />
+          <span className="min-w-0 truncate">
+            {title} ·{" "}
+            <a href={sharePath} target="_blank" rel="noopener" className="underline underline-offset-2" style={{ color: palette.ink }}>
+              Branchline
+            </a>
           </span>
         </div>
-      )}
-      {rows && (
-        <div className={`flex flex-wrap items-baseline gap-x-3 gap-y-0.5 px-3 pt-1 ${text}`}>
-          <RunningCounts rows={rows} />
-          <span className="flex items-center gap-1" title="The totals are the computed ones; how they build up in time is an estimate: the ramps' share by their strength, the hold's by the time spent apart.">
-            <FlagIcon kind="note" />
-            approximation: the computed totals shared out along lab time
-          </span>
-        </div>
-      )}
-      {!result && resultIssues && resultIssues.length > 0 && (
-        <p className={`px-3 pt-1 ${text}`} role="status" data-testid="embed-issues">
-          The numbers cannot be computed: {resultIssues.map((i) => `${i.message}${i.path ? ` (${i.path})` : ""}`).join("; ")}
-        </p>
-      )}
-      {outcome.ok && outcome.scene.notes.length > 0 && (
-        <p className="px-3 pt-1 text-xs opacity-80" data-testid="embed-notes">
-          {outcome.scene.notes.join(" ")}
-        </p>
-      )}
-      <div className={`flex flex-wrap items-center justify-between gap-x-4 gap-y-1 px-3 py-1.5 ${text}`}>
-        <BranchLegend radiation onFigurePaper large={options.largeType} />
-        <span className="min-w-0 truncate">
-          {title} ·{" "}
-          <a href={sharePath} target="_blank" rel="noopener" className="underline underline-offset-2" style={{ color: palette.ink }}>
-            Branchline
-          </a>
-        </span>
       </div>
     </div>
   );
+}
+
+/** Width of the column of controls beside a landscape Diagram, and the height a band of them at the foot takes, about. */
+const COLUMN_PX = { least: 240, most: 320 };
+const BAND_ESTIMATE_PX = 120;
+
+/**
+ * Where the controls, counts, notes and key go: in a column at the right when that leaves the Diagram (about as tall
+ * as it is wide) more room than a band along the foot would, as in a landscape frame; else in the band. The Diagram's
+ * canvas fills the whole frame either way, and the figure keeps clear of the controls. Returns the column's width, or
+ * 0 for the band.
+ */
+export function chromeBeside(frame: { width: number; height: number }): number {
+  const column = Math.min(COLUMN_PX.most, Math.max(COLUMN_PX.least, frame.width - frame.height));
+  const besideRoom = Math.min(frame.width - column, frame.height);
+  const belowRoom = Math.min(frame.width, frame.height - BAND_ESTIMATE_PX);
+  return besideRoom > belowRoom ? column : 0;
 }
 
 export function EmbeddedDiagram({ document, version, ...rest }: EmbeddedDiagramProps) {

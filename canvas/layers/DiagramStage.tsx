@@ -11,8 +11,8 @@ import { useEditor, useEditorStore } from "../EditorProvider";
 import { diagramFigure, diagramViewport, NO_INSET } from "../export/diagram-figure";
 import { konvaShape, type KonvaFonts } from "../export/konva-shapes";
 import type { TimeCursor } from "../export/time-cursor";
-import { compactQuantity } from "../kernels/diagram/labels";
 import { lightConeAt } from "../kernels/diagram/light-cone";
+import { pointerReadout } from "../kernels/diagram/pointer-readout";
 import type { DiagramScene } from "../kernels/diagram/scene";
 import { fromPx, toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 import { FIGURE_PALETTES, type FigurePalette } from "../theme";
@@ -78,13 +78,6 @@ const FigureLayer = memo(
     before.groups.every((g, i) => g.id === after.groups[i].id && sameShapes(g.shapes, after.groups[i].shapes)),
 );
 
-function pointerReadout(scene: DiagramScene, cone: ReturnType<typeof lightConeAt>): string {
-  if (!cone.coordinates) return "outside the lab's static region";
-  const kind = scene.chart.background.kind;
-  const radius = kind === "rindler" ? "ξ" : kind === "minkowski" ? "x" : "r";
-  return `t = ${compactQuantity(cone.coordinates.tSeconds, "time")}   ${radius} = ${compactQuantity(cone.coordinates.rMetres, "length")}`;
-}
-
 function LightConeGizmo({ scene, viewport, palette, font, inset }: { scene: DiagramScene; viewport: DiagramViewport; palette: FigurePalette; font: string; inset: FigureInset }) {
   const pointer = useEditor((s) => s.diagramPointer);
   if (!pointer) return null;
@@ -98,7 +91,7 @@ function LightConeGizmo({ scene, viewport, palette, font, inset }: { scene: Diag
       <Line points={[fi.x, fi.y, at.x, at.y, fo.x, fo.y]} stroke={palette.inkSoft} strokeWidth={1} />
       <Line points={[pi.x, pi.y, at.x, at.y, po.x, po.y]} stroke={palette.inkFaint} strokeWidth={1} dash={[2, 3]} />
       <Circle x={at.x} y={at.y} radius={2} fill={palette.ink} />
-      <Text x={viewport.width - inset.right - 410} y={viewport.height - inset.bottom - 18} width={400} align="right" wrap="none" text={pointerReadout(scene, cone)} fontSize={11} fontFamily={font} fill={palette.inkSoft} />
+      <Text x={viewport.width - inset.right - 510} y={viewport.height - inset.bottom - 18} width={500} align="right" wrap="none" text={pointerReadout(scene, viewport, at, cone.coordinates)} fontSize={11} fontFamily={font} fill={palette.inkSoft} />
     </Group>
   );
 }

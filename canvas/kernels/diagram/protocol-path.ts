@@ -80,6 +80,18 @@ function warpedTime(warp: TimeWarp | undefined, tauSeconds: number): number {
   return drawnEvents[i] + s * (drawnEvents[i + 1] - drawnEvents[i]);
 }
 
+/** The inverse of warpedTime: the lab time drawn at a warped instant. */
+function unwarpedTime(warp: TimeWarp | undefined, drawnSeconds: number): number {
+  if (!warp) return drawnSeconds;
+  const { events, drawnEvents } = warp;
+  const last = drawnEvents.length - 1;
+  if (drawnSeconds <= 0 || drawnSeconds >= drawnEvents[last]) return drawnSeconds;
+  let i = 0;
+  while (i < last - 1 && drawnSeconds > drawnEvents[i + 1]) i++;
+  const s = (drawnSeconds - drawnEvents[i]) / (drawnEvents[i + 1] - drawnEvents[i]);
+  return events[i] + s * (events[i + 1] - events[i]);
+}
+
 /** Drawn offset of the branches at full separation, as a fraction of the diagram's larger span (before the cap by c). */
 const DRAWN_OFFSET_SHARE = 0.016;
 /** The branches never stray further than this many times the drawn offset from the lab's worldline (labels keep clear). */
@@ -122,6 +134,8 @@ export interface RadiationStrip {
 
 export interface ProtocolOnDiagram {
   timeScale: TimeScale;
+  /** The protocol's length in lab proper time, seconds (drawn centred on Killing time 0). */
+  totalSeconds: number;
   /** Largest distance on the diagram between a branch and the lab's worldline (diagram units); labels keep clear of it. */
   corridor: number;
   /** Start of separation, start of hold, start of recombination, end (for other protocols: each moving window's ends). */
@@ -137,6 +151,16 @@ export interface ProtocolOnDiagram {
 export function drawnTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, tauSeconds: number): number {
   const killing = (warpedTime(scale.warp, tauSeconds) - totalSeconds / 2) / chart.background.labRedshiftFactor;
   return scale.kind === "true" ? killing : killing * (scale.drawnEfolds / scale.protocolEfolds);
+}
+
+/**
+ * The inverse of drawnTime: the lab's proper time τ (seconds from the start of the separation) at the drawn Killing
+ * time t of the lab's worldline. Where the drawing is true to scale this is dτ = √(−g_tt) dt, the static lab's
+ * redshift factor; a rescaled or warped protocol is undone first, so the readout gives the lab's own clock.
+ */
+export function labProperTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, killingSeconds: number): number {
+  const killing = scale.kind === "true" ? killingSeconds : killingSeconds * (scale.protocolEfolds / scale.drawnEfolds);
+  return unwarpedTime(scale.warp, killing * chart.background.labRedshiftFactor + totalSeconds / 2);
 }
 
 function timeScaleOf(chart: DiagramChart, totalSeconds: number): TimeScale {
@@ -282,6 +306,7 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
   const labels = labTimeLabels(marked);
   return {
     timeScale,
+    totalSeconds: total,
     corridor,
     slices: marked.map((tau, i) => ({ tauSeconds: tau, label: labels[i], labPoint: at(tau), points: timeCurve(chart, drawn(tau), 48) })),
     branches,

@@ -187,9 +187,9 @@ describe("the Offsets figure on random scenarios", () => {
         expect(scene.branchA.length).toBeGreaterThan(0);
         expect(scene.labels.length).toBeGreaterThan(0);
       }),
-      { numRuns: 150 },
+      { numRuns: 100 },
     );
-  });
+  }, 60_000);
 
   it("keeps the paths inside the plot while a drag holds the axes it started with", () => {
     fc.assert(
@@ -198,7 +198,7 @@ describe("the Offsets figure on random scenarios", () => {
         const total = segmentTimes(protocolOf(document)).recombinationEnd;
         expectCleanFigure(buildOffsetsScene({ document, viewport, originSeconds: shift * total }));
       }),
-      { numRuns: 100 },
+      { numRuns: 60 },
     );
-  });
+  }, 60_000);
 });

@@ -68,28 +68,27 @@ function timeWarp(events: number[], totalSeconds: number): TimeWarp | undefined 
   return { events, drawnEvents };
 }
 
+/**
+ * x through the piecewise-linear map taking each of `from` to the matching one of `to` (both start at 0 and end at the
+ * protocol's length); unchanged before and after the protocol.
+ */
+function alongPieces(from: number[], to: number[], x: number): number {
+  const last = from.length - 1;
+  if (x <= 0 || x >= from[last]) return x;
+  let i = 0;
+  while (i < last - 1 && x > from[i + 1]) i++;
+  const s = (x - from[i]) / (from[i + 1] - from[i]);
+  return to[i] + s * (to[i + 1] - to[i]);
+}
+
 /** Lab time as drawn: through the warp inside the protocol, unchanged before and after it. */
 function warpedTime(warp: TimeWarp | undefined, tauSeconds: number): number {
-  if (!warp) return tauSeconds;
-  const { events, drawnEvents } = warp;
-  const last = events.length - 1;
-  if (tauSeconds <= 0 || tauSeconds >= events[last]) return tauSeconds;
-  let i = 0;
-  while (i < last - 1 && tauSeconds > events[i + 1]) i++;
-  const s = (tauSeconds - events[i]) / (events[i + 1] - events[i]);
-  return drawnEvents[i] + s * (drawnEvents[i + 1] - drawnEvents[i]);
+  return warp ? alongPieces(warp.events, warp.drawnEvents, tauSeconds) : tauSeconds;
 }
 
 /** The inverse of warpedTime: the lab time drawn at a warped instant. */
 function unwarpedTime(warp: TimeWarp | undefined, drawnSeconds: number): number {
-  if (!warp) return drawnSeconds;
-  const { events, drawnEvents } = warp;
-  const last = drawnEvents.length - 1;
-  if (drawnSeconds <= 0 || drawnSeconds >= drawnEvents[last]) return drawnSeconds;
-  let i = 0;
-  while (i < last - 1 && drawnSeconds > drawnEvents[i + 1]) i++;
-  const s = (drawnSeconds - drawnEvents[i]) / (drawnEvents[i + 1] - drawnEvents[i]);
-  return events[i] + s * (events[i + 1] - events[i]);
+  return warp ? alongPieces(warp.drawnEvents, warp.events, drawnSeconds) : drawnSeconds;
 }
 
 /** Drawn offset of the branches at full separation, as a fraction of the diagram's larger span (before the cap by c). */

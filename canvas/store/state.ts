@@ -4,12 +4,13 @@ import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepResult } from "../compute-client";
 import type { DragStart, ProtocolPlan } from "../kernels/offsets/drag-plan";
 import type { HandleId } from "../kernels/offsets/handles";
-import type { LabKeyEvent, LabPointerEvent } from "../tools/types";
+import type { OffsetsKeyEvent, OffsetsPointerEvent, OffsetsToolState } from "../tools/offsets-tool";
 import type { History } from "./history";
-import type { OffsetsSelectors } from "./selectors";
+import type { OffsetsSelectors } from "./offsets-selectors";
+
+export type { OffsetsToolState };
 import type { SceneOutcome } from "../kernels/diagram/scene";
 
-export type LabToolState = { name: "idle" } | { name: "dragging"; start: DragStart; plan: ProtocolPlan | null };
 
 export interface SaveState {
   /** The server version the document was last loaded at or saved as. */
@@ -54,7 +55,7 @@ export interface EditorData {
   transaction: { label: string; mark: ScenarioDocument } | null;
   selection: HandleId | null;
   hover: HandleId | null;
-  offsetsTool: LabToolState;
+  offsetsTool: OffsetsToolState;
   offsetsSize: { width: number; height: number };
   diagramPointer: DiagramPoint | null;
   /** The last edit the editor refused, with why; cleared by the next accepted edit. */
@@ -73,7 +74,7 @@ export interface EditorActions {
   begin(label: string): void;
   /** One frame of a drag: the step of the edit under way (computed from the document at the mark) and the Lab
    *  tool's new state, set together. */
-  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, offsetsTool: LabToolState): void;
+  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, offsetsTool: OffsetsToolState): void;
   /** Finish the edit under way as one undo step. */
   commit(): void;
   /** Abandon the edit under way: the document returns to the mark. */
@@ -84,13 +85,13 @@ export interface EditorActions {
   setHover(handle: HandleId | null): void;
   setOffsetsSize(size: { width: number; height: number }): void;
   setDiagramPointer(point: DiagramPoint | null): void;
-  offsetsPointerDown(event: LabPointerEvent): void;
-  offsetsPointerMove(event: LabPointerEvent): void;
-  offsetsPointerUp(event: LabPointerEvent): void;
+  offsetsPointerDown(event: OffsetsPointerEvent): void;
+  offsetsPointerMove(event: OffsetsPointerEvent): void;
+  offsetsPointerUp(event: OffsetsPointerEvent): void;
   /** Escape, or the pointer lost: cancel a drag. */
   offsetsCancel(): void;
   /** Returns true when the key was used (so the caller can prevent its default). */
-  offsetsKeyDown(event: LabKeyEvent): boolean;
+  offsetsKeyDown(event: OffsetsKeyEvent): boolean;
   /** Replace the document with the server's (reload after a conflict): a new base, a fresh history. */
   loadDocument(document: ScenarioDocument, version: number): void;
   saveStarted(): void;

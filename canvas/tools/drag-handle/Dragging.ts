@@ -5,12 +5,12 @@
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
 import { planHandleDrag } from "../../kernels/offsets/drag-plan";
-import type { LabToolState } from "../../store/state";
-import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
+import type { OffsetsToolState } from "../../store/state";
+import type { OffsetsPointerEvent, ToolContext, ToolStateHandlers } from "../types";
 
-type Dragging = Extract<LabToolState, { name: "dragging" }>;
+type Dragging = Extract<OffsetsToolState, { name: "dragging" }>;
 
-function follow(ctx: ToolContext, state: Dragging, event: LabPointerEvent): void {
+function follow(ctx: ToolContext, state: Dragging, event: OffsetsPointerEvent): void {
   const plan = planHandleDrag(state.start, event, { snap: event.shiftKey });
   ctx.get().dragTo((mark) => withProtocolPlan(mark, plan), { ...state, plan });
 }

@@ -8,13 +8,13 @@ import { NUDGE_LARGE_PX, NUDGE_PX, planHandleDrag } from "../../kernels/offsets/
 import { cycleHandle, HANDLE_WORDS, type HandleId, type HandlePlacement } from "../../kernels/offsets/handles";
 import { hitTestOffsets } from "../../kernels/offsets/hit-test";
 import { segmentTimes, segmentsProtocolOf } from "../../kernels/timeline";
-import type { EditorState, LabToolState } from "../../store/state";
-import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
+import type { EditorState, OffsetsToolState } from "../../store/state";
+import type { OffsetsPointerEvent, ToolContext, ToolStateHandlers } from "../types";
 
 /** How far from a handle, in pixels, a press still takes it. */
 export const HIT_TOLERANCE_PX = 8;
 
-function handleUnder(state: EditorState, event: LabPointerEvent): HandlePlacement | null {
+function handleUnder(state: EditorState, event: OffsetsPointerEvent): HandlePlacement | null {
   const selectors = state.offsets;
   const viewport = selectors.viewport(state);
   const protocol = segmentsProtocolOf(state.document);
@@ -46,7 +46,7 @@ function nudge(state: EditorState, handle: HandleId, direction: { dx: number; dy
   return true;
 }
 
-type Idle = Extract<LabToolState, { name: "idle" }>;
+type Idle = Extract<OffsetsToolState, { name: "idle" }>;
 
 export const Idle: ToolStateHandlers<Idle> = {
   onPointerMove(ctx: ToolContext, _state, event) {

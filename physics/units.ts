@@ -12,7 +12,7 @@ const math = create(all);
 math.createUnit("Msun", { definition: `${solarMass.value} kg` });
 math.createUnit("echarge", { definition: `${elementaryChargeCoulombs} C` });
 
-export type QuantityDimension = "length" | "time" | "mass" | "charge" | "acceleration" | "rate";
+export type QuantityDimension = "length" | "time" | "mass" | "charge" | "acceleration" | "rate" | "pressure" | "temperature" | "resistivity";
 
 const DIMENSIONS: Record<QuantityDimension, { siUnit: string; example: string; article: string }> = {
   length: { siUnit: "m", example: "2.5 um", article: "a length" },
@@ -21,21 +21,29 @@ const DIMENSIONS: Record<QuantityDimension, { siUnit: string; example: string; a
   charge: { siUnit: "C", example: "1e-3 e", article: "a charge" },
   acceleration: { siUnit: "m/s^2", example: "9.81 m/s^2", article: "an acceleration" },
   rate: { siUnit: "Hz", example: "2.2e-18 1/s", article: "a rate" },
+  pressure: { siUnit: "Pa", example: "1e-6 Pa", article: "a pressure" },
+  temperature: { siUnit: "K", example: "4 K", article: "a temperature (in kelvin)" },
+  resistivity: { siUnit: "ohm m", example: "2.2e-8 ohm m", article: "a resistivity" },
 };
 
 export type ParsedQuantity = { ok: true; valueSI: number } | { ok: false; message: string };
 
 const LEADING_NUMBER = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*)$/;
-const SUPERSCRIPTS: Record<string, string> = { "⁻": "-", "⁰": "0", "¹": "1", "²": "2", "³": "3", "⁴": "4" };
+const SUPERSCRIPTS: Record<string, string> = { "⁻": "-", "⁰": "0", "¹": "1", "²": "2", "³": "3", "⁴": "4", "⁵": "5", "⁶": "6", "⁷": "7", "⁸": "8", "⁹": "9" };
 
-/** Spellings mathjs does not read: micro signs, M☉, Unicode minus and superscript exponents. */
+/**
+ * Spellings mathjs does not read: Ω, micro signs, M☉, Unicode minus, superscript exponents, and the printed
+ * "2.20 × 10⁻⁸" form (read as 2.20e-8, so what formatQuantity prints parses back).
+ */
 function normaliseSpelling(text: string): string {
   return text
     .trim()
+    .replace(/Ω/g, "ohm ")
     .replace(/[µμ](?=[A-Za-z])/g, "u")
     .replace(/M☉/g, "Msun")
     .replace(/−/g, "-")
-    .replace(/[⁻⁰¹²³⁴]+/g, (run) => `^${[...run].map((ch) => SUPERSCRIPTS[ch]).join("")}`);
+    .replace(/[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+/g, (run) => `^${[...run].map((ch) => SUPERSCRIPTS[ch]).join("")}`)
+    .replace(/^([+-]?(?:\d+\.?\d*|\.\d+))\s*×\s*10\^(-?\d+)/, "$1e$2");
 }
 
 /** The unit part as mathjs reads it: a lone `e` is the elementary charge; "1/s" style reciprocals are kept. */
@@ -79,6 +87,9 @@ const PRINTING: Record<QuantityDimension, { symbol: string; perSI: number; prefi
   charge: { symbol: "C", perSI: 1, prefixes: [-21, 0] },
   acceleration: { symbol: "m/s²", perSI: 1, prefixes: null },
   rate: { symbol: "s⁻¹", perSI: 1, prefixes: null },
+  pressure: { symbol: "Pa", perSI: 1, prefixes: null },
+  temperature: { symbol: "K", perSI: 1, prefixes: [-9, 3] },
+  resistivity: { symbol: "Ω m", perSI: 1, prefixes: null },
 };
 
 

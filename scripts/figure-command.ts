@@ -3,7 +3,7 @@
  * app exports it, as the bytes of the file.
  *   npm run --silent figure -- FILE.json [--what diagram|sweep] [--format svg|pdf|png] [--theme light|dark]
  *     [--width PX] [--ratio 1|2|4] [--caption|--no-caption] [--legend|--no-legend] [--ground solid|transparent]
- *     [--lettering embedded|outlines] [--vary recombination-time|hold-time|lab-distance] [--from Q] [--to Q]
+ *     [--lettering embedded|outlines] [--vary recombination-time|hold-time|lab-distance|gas-pressure|surroundings-temperature|surface-distance] [--from Q] [--to Q]
  *     [--points N] > out.svg
  * The same code as the browser's Export menu (canvas/export/render-figure.ts), with resvg drawing the PNG. Bad input
  * is refused with "path: message" lines (an InputRefusal: exit code 2 from the command), as the compute command.
@@ -18,7 +18,7 @@ import { DEFAULT_SWEEP_FIGURE_SIZE, SWEEP_PARAMETER_WORDS, sweepDrawing } from "
 import { BackgroundInputError } from "../physics/backgrounds";
 import { ScenarioInputError } from "../physics/scenario/input-error";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { MAX_SWEEP_POINTS, sweepScenario, type SweepParameter } from "../physics/sweeps";
+import { MAX_SWEEP_POINTS, parameterDimension, sweepScenario, type SweepParameter } from "../physics/sweeps";
 import { parseQuantity } from "../physics/units";
 import { InputRefusal, readInputJson, refuse, refuseIssues, type InputIssue } from "./scenario-input";
 import { nodeFigureToolkit } from "./figure-toolkit";
@@ -27,7 +27,7 @@ import type { FigureToolkit } from "../canvas/export/render-figure";
 const USAGE = [
   "usage: npm run --silent figure -- FILE.json [--what diagram|sweep] [--format svg|pdf|png] [--theme light|dark] [--width PX]",
   "         [--ratio 1|2|4] [--caption|--no-caption] [--legend|--no-legend] [--ground solid|transparent] [--lettering embedded|outlines]",
-  "         [--vary recombination-time|hold-time|lab-distance] [--from QUANTITY] [--to QUANTITY] [--points N]   (FILE - reads standard input)",
+  "         [--vary recombination-time|hold-time|lab-distance|gas-pressure|surroundings-temperature|surface-distance] [--from QUANTITY] [--to QUANTITY] [--points N]   (FILE - reads standard input)",
 ];
 
 /** The Sweep panel's number of points. */
@@ -120,7 +120,7 @@ export async function figureCommand(argv: string[], given?: FigureToolkit): Prom
   function sweep(doc: ScenarioDocument) {
     const parameter = oneOf("vary", args.values.vary ?? (doc.protocol.kind === "segments" ? "recombination-time" : "lab-distance"), Object.keys(SWEEP_PARAMETER_WORDS) as SweepParameter[]);
     const range = defaultSweepRange(doc, parameter);
-    const dimension = parameter === "lab-distance" ? "length" : "time";
+    const dimension = parameterDimension(parameter);
     const bound = (name: "from" | "to", fallback: number | undefined): number => {
       const text = args.values[name];
       if (text === undefined) {

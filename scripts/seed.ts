@@ -1,6 +1,8 @@
 /**
  * Demo data, all invented: an owner and a viewer account, and a project of a fictitious research group with
- * three scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab), and, when the
+ * five scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab, and two with the
+ * lab's environment: a charged silica sphere above a gold-coated chip in a cryostat, a neutral diamond held long in
+ * a room-temperature vacuum — scripts/demo-environment.ts), and, when the
  * object store is up (scripts/services.sh starts the fake one), a sequencer run kept with the flat-space scenario.
  * Idempotent: a second run finds the demo account and changes nothing. Run with the react-server condition
  * (npm run db:seed) so that the data access layer's server-only marker resolves.
@@ -18,6 +20,7 @@ import { sendInvitationMail } from "../lib/invitation-mail";
 import { shareUrl } from "../lib/links";
 import { createObjectStore } from "../lib/storage";
 import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
+import { neutralDiamondLongHold, silicaAboveGoldChip } from "./demo-environment";
 
 export const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner", name: "Demo Owner (group lead)" };
 export const DEMO_VIEWER = { email: "referee@lindenbrook.example", password: "lindenbrook-demo-viewer", name: "Demo Viewer (referee)" };
@@ -83,7 +86,9 @@ async function seed(): Promise<void> {
     const flat = await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
     const hovering = await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
     await createScenario(db, actor, project.id, { title: "Accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
-    console.log("[seed] created the demo project with three scenarios");
+    await createScenario(db, actor, project.id, { title: "Charged silica sphere 40 µm above a gold-coated chip, 4 K", document: silicaAboveGoldChip() });
+    await createScenario(db, actor, project.id, { title: "Neutral diamond, 10 s hold in a room-temperature vacuum", document: neutralDiamondLongHold() });
+    console.log("[seed] created the demo project with five scenarios");
     const link = await createShareLink(db, actor, project.id, hovering.id, { label: "for the seminar slides", expiresInDays: 30 });
     console.log(`[seed] a read-only share link of the black-hole scenario: ${shareUrl(link.token)}`);
     try {

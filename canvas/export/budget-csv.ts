@@ -1,17 +1,21 @@
 /**
  * The Budget as a CSV file (RFC 4180: comma-separated, CRLF line ends, fields quoted where they hold a comma, a
- * quote or a line break, quotes doubled), in three parts: the scenario's inputs, one "# key: value unit" comment
+ * quote or a line break, quotes doubled), in parts: the scenario's inputs, one "# key: value unit" comment
  * line each (so the numbers can be reproduced from the file alone); one row per number the Budget shows, with its
- * unit as the result spells it ("1" for a count) and the formula it comes from; then, after an empty line, every
- * validity flag once, with its status and words.
+ * unit as the result spells it ("1" for a count) and the formula it comes from — the field channels, then with an
+ * environment each environmental channel, every channel's share of the whole (the dominant one named so) and the
+ * whole budget's total; then, with an environment, after an empty line, the margin of each environmental channel;
+ * then, after an empty line, every validity flag once, with its status and words.
  */
 import Papa from "papaparse";
+import { channelTable, ENVIRONMENT_CHANNEL_WORDS } from "@/canvas/kernels/budget/channel-table";
 import { sources, type SourceKey } from "@/physics/estimators/sources";
 import type { ChannelResult, Quantity, ScenarioResult } from "@/physics/result";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 
 export const BUDGET_CSV_HEADER = ["quantity", "value", "unit", "source"] as const;
 export const FLAGS_CSV_HEADER = ["flag", "status", "message"] as const;
+export const MARGINS_CSV_HEADER = ["channel", "parameter", "now", "unit", "equals the field channels at", "outcome"] as const;
 
 const CSV_OPTIONS = { newline: "\r\n", quotes: false } as const;
 
@@ -57,7 +61,11 @@ function sourceText(key: SourceKey): string {
 const UNIT_SUFFIXES: [RegExp, string][] = [
   [/MetresPerSecondSquared$/, "m s^-2"],
   [/PerSecond$/, "s^-1"],
+  [/OhmMetres$/, "ohm m"],
   [/Metres$/, "m"],
+  [/Pascals$/, "Pa"],
+  [/Kelvin$/, "K"],
+  [/Hertz$/, "Hz"],
   [/Seconds$/, "s"],
   [/Kg$/, "kg"],
   [/Coulombs$/, "C"],
@@ -111,10 +119,36 @@ export function budgetCsvRows(result: ScenarioResult): string[][] {
   rows.push(row("Total quanta <N> (both channels)", result.combined.totalQuanta));
   rows.push(row("Decoherence D (both channels)", result.combined.decoherence));
   rows.push(row("Decoherence time (both channels)", result.combined.decoherenceTime));
+  if (result.environment) {
+    for (const channel of result.environment.channels) {
+      const name = ENVIRONMENT_CHANNEL_WORDS[channel.channel].toLowerCase();
+      rows.push(row(`Quanta <N> (${name})`, channel.totalQuanta));
+      rows.push(row(`Rate at full separation (${name})`, channel.holdRate));
+      rows.push(row(`Decoherence time (${name})`, channel.decoherenceTime));
+    }
+    const table = channelTable(result);
+    for (const r of table.rows) {
+      if (r.share !== null) rows.push([`Share of the total (${r.words}${r.dominant ? ", dominant" : ""})`, String(r.share), "1", sourceText("environment-budget-total")]);
+    }
+    rows.push(row("Total quanta <N> (every channel)", result.environment.total.totalQuanta));
+    rows.push(row("Decoherence D (every channel)", result.environment.total.decoherence));
+    rows.push(row("Decoherence time (every channel)", result.environment.total.decoherenceTime));
+  }
   return rows.filter((r): r is string[] => r !== null);
+}
+
+/** The margin of each environmental channel: its parameter now, and where it would equal the field channels. */
+export function budgetMarginRows(result: ScenarioResult): string[][] {
+  return channelTable(result).margins.map((m) => {
+    const { outcome } = m;
+    const at = outcome.kind === "crossing" ? csvValue(outcome.value) : "";
+    const words = outcome.kind === "crossing" ? "crossing" : outcome.kind === "already-below" ? "already below" : `not reachable: ${oneLine(outcome.reason)}`;
+    return [m.channelWords.toLowerCase(), m.parameterWords, csvValue(m.current), m.current.unit, at, words];
+  });
 }
 
 export function budgetCsv(result: ScenarioResult, document: ScenarioDocument): string {
   const inputs = budgetInputLines(document).map((line) => `${line}\r\n`).join("");
-  return `${inputs}${csvText([[...BUDGET_CSV_HEADER], ...budgetCsvRows(result)])}\r\n${csvText([[...FLAGS_CSV_HEADER], ...budgetFlagRows(result)])}`;
+  const margins = result.environment ? `${csvText([[...MARGINS_CSV_HEADER], ...budgetMarginRows(result)])}\r\n` : "";
+  return `${inputs}${csvText([[...BUDGET_CSV_HEADER], ...budgetCsvRows(result)])}\r\n${margins}${csvText([[...FLAGS_CSV_HEADER], ...budgetFlagRows(result)])}`;
 }

@@ -17,6 +17,12 @@ export function currentSweepValue(document: ScenarioDocument, parameter: SweepPa
       return protocol.kind === "segments" ? protocol.hold.durationSeconds : null;
     case "lab-distance":
       return labDistanceMetres(document.background, document.lab);
+    case "gas-pressure":
+      return document.environment?.gas?.pressurePascals ?? null;
+    case "surroundings-temperature":
+      return document.environment?.radiation?.surroundingsTemperatureKelvin ?? null;
+    case "surface-distance":
+      return document.environment?.surface?.distanceMetres ?? null;
   }
 }
 
@@ -29,8 +35,21 @@ export function labDistanceMetres(background: ScenarioDocument["background"], la
 
 const DECADES = 100;
 
+/** A temperature sweep runs up to room temperature (or today's value, if hotter). */
+const HOTTEST_SURROUNDINGS_KELVIN = 300;
+
 export function defaultSweepRange(document: ScenarioDocument, parameter: SweepParameter): { from: number; to: number } | null {
   const current = currentSweepValue(document, parameter);
+  if (parameter === "gas-pressure" || parameter === "surroundings-temperature" || parameter === "surface-distance") {
+    if (current === null) return null;
+    // A surroundings at 0 K (allowed) has no decade around it: start the sweep at 10 mK.
+    const value = current > 0 ? current : 0.01;
+    if (parameter === "surroundings-temperature") return { from: Math.min(value, HOTTEST_SURROUNDINGS_KELVIN) / DECADES, to: Math.max(value, HOTTEST_SURROUNDINGS_KELVIN) };
+    // Pressures: four decades down (a better pump), two up (a leak).
+    if (parameter === "gas-pressure") return { from: value / 1e4, to: value * DECADES };
+    // Distances: from a tenth of today's (closer to the chip) to a hundred times.
+    return { from: value / 10, to: value * DECADES };
+  }
   if (parameter !== "lab-distance") {
     const value = current && current > 0 ? current : 0.01;
     return { from: value / DECADES, to: value * DECADES };

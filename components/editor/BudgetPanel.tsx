@@ -1,21 +1,24 @@
 "use client";
 
 /**
- * The Budget: quanta to null infinity ℐ⁺, quanta into the horizon, the ramp/hold split, the total, decoherence and
- * decoherence time, for each channel and both together, each number linked to its formula on the Methods page.
- * Numbers for an older revision of the scenario stay on screen, visibly marked, until the new ones arrive.
+ * The Budget: first the channel table — one row per channel (the body's own fields: quanta to null infinity ℐ⁺ and
+ * into the horizon; the lab's environment: gas, thermal scattering, absorption, emission, a nearby surface) with its
+ * ⟨N⟩ and share, the dominant channel named in words, and the whole budget's total, decoherence and decoherence time;
+ * then the body's own fields by field (electromagnetic, gravitational, both) with the ramp/hold split; then the
+ * margin of each environmental channel. Each number links to its formula on the Methods page. Numbers for an older
+ * revision of the scenario stay on screen, visibly marked, until the new ones arrive.
  */
 import { memo } from "react";
-import Link from "next/link";
 import { useEditor } from "@/canvas/EditorProvider";
 import { bothChannels } from "@/canvas/kernels/budget/both-channels";
+import { channelTable } from "@/canvas/kernels/budget/channel-table";
 import { budgetIsStale } from "@/canvas/store/selectors";
 import { BudgetPictureMenu } from "@/components/export/BudgetPictureMenu";
 import type { BudgetState } from "@/canvas/store/state";
 import type { ChannelResult, Quantity, ScenarioResult, ValidityFlag } from "@/physics/result";
 import { EstimateComparison } from "./EstimateComparison";
 import { FlagIcon } from "./FlagIcon";
-import { quantityText } from "./quantity-text";
+import { ChannelTableView, MarginList, QuantityLink } from "./BudgetChannels";
 import { usePanelValue } from "./usePacedDuringDrag";
 
 /** A Budget row: its number per channel and for both together (the physics' own where it has one, else the counts summed). */
@@ -38,18 +41,10 @@ const ROWS: Row[] = [
 ];
 
 function Cell({ quantity, testId, label }: { quantity: Quantity | null; testId: string; label: string }) {
-  if (!quantity) return <td className="px-2 py-1.5 text-right text-ink-faint" data-testid={testId}>—</td>;
+  if (!quantity) return <td className="px-1 py-1.5 text-right text-ink-faint sm:px-2" data-testid={testId}>—</td>;
   return (
-    <td className="px-2 py-1.5 text-right">
-      <Link
-        href={`/methods#${quantity.sourceKey}`}
-        className="tabular text-ink underline decoration-rule-strong underline-offset-4 hover:decoration-ink"
-        data-testid={testId}
-        data-value={quantity.value ?? ""}
-        aria-label={`${label}: ${quantityText(quantity)} (formula on the Methods page)`}
-      >
-        {quantityText(quantity)}
-      </Link>
+    <td className="whitespace-nowrap px-1 py-1.5 text-right sm:px-2">
+      <QuantityLink quantity={quantity} testId={testId} label={label} />
     </td>
   );
 }
@@ -93,6 +88,7 @@ const BudgetView = memo(function BudgetView({ budget, stale, title }: { budget: 
   const failedNow = budget.status === "failed";
   const channels = result ? [result.electromagnetic, result.gravitational] : [];
   const sameQuanta = result && (result.background.kind === "rindler" || result.background.kind === "de-sitter");
+  const table = result ? channelTable(result) : null;
   return (
     <section aria-labelledby="budget-heading" data-testid="budget" data-state={stale ? "stale" : failedNow ? "failed" : "current"}>
       <div className="mb-2 flex items-baseline justify-between">
@@ -119,19 +115,25 @@ const BudgetView = memo(function BudgetView({ budget, stale, title }: { budget: 
         <p className="text-sm text-ink-faint">{failedNow ? "" : "Computing…"}</p>
       ) : (
         <div className={stale || failedNow ? "opacity-55 transition-opacity" : "transition-opacity"}>
-          <table className="w-full border-collapse text-sm">
+          <ChannelTableView table={table!} />
+          <h3 className="mb-1 mt-4 text-xs font-semibold text-ink-soft">The body&apos;s own fields, by field</h3>
+          <table className="w-full border-collapse text-xs sm:text-sm" data-testid="budget-fields">
             <thead>
               <tr className="border-b border-ink/60 text-xs text-ink-soft">
                 <th className="px-2 py-1 text-left font-semibold" />
-                <th className="px-2 py-1 text-right font-semibold">Electromagnetic</th>
-                <th className="px-2 py-1 text-right font-semibold">Gravitational</th>
-                <th className="px-2 py-1 text-right font-semibold">Both</th>
+                <th className="px-1 py-1 text-right font-semibold sm:px-2">
+                  Electro&shy;magnetic
+                </th>
+                <th className="px-1 py-1 text-right font-semibold sm:px-2">
+                  Gravi&shy;tational
+                </th>
+                <th className="px-1 py-1 text-right font-semibold sm:px-2">Both</th>
               </tr>
             </thead>
             <tbody>
               {ROWS.map((row) => (
                 <tr key={row.key} className={`border-b border-rule ${row.key === "total" ? "border-t border-t-ink/40" : ""}`}>
-                  <th scope="row" className={`px-2 py-1.5 text-left font-normal ${row.key === "ramp" || row.key === "hold" ? "pl-5 text-ink-soft" : ""}`}>
+                  <th scope="row" className={`px-1 py-1.5 text-left font-normal sm:px-2 ${row.key === "ramp" || row.key === "hold" ? "pl-3 text-ink-soft sm:pl-5" : ""}`}>
                     {row.words}
                   </th>
                   {channels.map((c) => (
@@ -155,6 +157,7 @@ const BudgetView = memo(function BudgetView({ budget, stale, title }: { budget: 
                 {c.channel === "electromagnetic" ? "Electromagnetic" : "Gravitational"}: exactly zero — {c.exactZeroReason}.
               </p>
             ))}
+          <MarginList margins={table!.margins} />
           <EstimateComparison channels={channels} />
           <Flags flags={result.flags} />
         </div>

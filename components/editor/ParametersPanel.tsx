@@ -1,6 +1,6 @@
 "use client";
 
-/** Parameters: the background and its parameter, where the lab is, the source, and how the branches separate. */
+/** Parameters: the background and its parameter, where the lab is, the source, how the branches separate, and the lab's environment. */
 import { useMemo, type ReactNode } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
@@ -8,6 +8,7 @@ import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-
 import { elementaryCharge } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
 import { formatQuantity, parseQuantity } from "@/physics/units";
+import { EnvironmentFields } from "./EnvironmentFields";
 import { DraftField, QuantityField, type ParseResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
 
@@ -263,6 +264,7 @@ export function ParametersPanel() {
   const source = useEditor((s) => s.document.source);
   const separation = useEditor((s) => s.document.separation);
   const document = useMemo(() => ({ background, lab, source, separation }), [background, lab, source, separation]);
+  const environment = useEditor((s) => s.document.environment);
   const readOnly = useEditor((s) => s.readOnly);
   return (
     <section aria-labelledby="parameters-heading" className="space-y-4">
@@ -272,6 +274,7 @@ export function ParametersPanel() {
       <BackgroundFields document={document} readOnly={readOnly} />
       <LabFields document={document} readOnly={readOnly} />
       <SourceFields document={document} readOnly={readOnly} />
+      <EnvironmentFields environment={environment} readOnly={readOnly} />
     </section>
   );
 }

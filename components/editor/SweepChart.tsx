@@ -16,6 +16,8 @@ import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { memoizeLast } from "@/canvas/kernels/memoize";
 import { currentSweepValue, labDistanceMetres } from "@/canvas/kernels/sweep-range";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
+import { SWEEP_PARAMETER_WORDS as PARAMETER_WORDS } from "@/components/export/sweep-export";
+import { parameterDimension } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 
 export interface SweepPoint {
@@ -23,13 +25,9 @@ export interface SweepPoint {
   decoherence: number;
 }
 
-export const PARAMETER_WORDS: Record<SweepParameter, string> = {
-  "recombination-time": "recombination time",
-  "hold-time": "hold time",
-  "lab-distance": "lab distance",
-};
+export { SWEEP_PARAMETER_WORDS as PARAMETER_WORDS } from "@/components/export/sweep-export";
 
-export const dimensionOf = (parameter: SweepParameter) => (parameter === "lab-distance" ? "length" : "time");
+export const dimensionOf = parameterDimension;
 
 const NOW_COLOUR = "#E69F00";
 
@@ -41,7 +39,7 @@ function sweptValueNow(document: ScenarioDocument, parameter: SweepParameter): n
 }
 
 /** A vertical rule at the scenario's current value of the swept parameter, where it falls inside the sweep. */
-function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: number; to: number }) {
+export function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: number; to: number }) {
   const current = useEditor((s) => sweptValueNow(s.document, parameter));
   const scale = useXAxisScale();
   const plot = usePlotArea();
@@ -59,7 +57,7 @@ function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: n
 }
 
 /** Short unlabelled ticks at the log axes' minor values (2…9 × 10ⁿ), drawn inward from each axis line. */
-function MinorTicks({ x, y }: { x: number[]; y: number[] }) {
+export function MinorTicks({ x, y }: { x: number[]; y: number[] }) {
   const xScale = useXAxisScale();
   const yScale = useYAxisScale();
   const plot = usePlotArea();
@@ -83,13 +81,13 @@ function MinorTicks({ x, y }: { x: number[]; y: number[] }) {
   );
 }
 
-const AXIS_COLOUR = "#5b6168";
+export const AXIS_COLOUR = "#5b6168";
 const MINOR_TICK_PX = 4;
 /** Tick labels at a size that survives a slide or a printed column. */
-const TICK_FONT_PX = 13;
+export const TICK_FONT_PX = 13;
 
 /** What both log axes share: our own decade ticks and labels (axis-scale.ts), drawn in the chart's colours. */
-function logAxisProps(axis: NonNullable<ReturnType<typeof logAxis>>) {
+export function logAxisProps(axis: NonNullable<ReturnType<typeof logAxis>>) {
   return {
     type: "number" as const,
     scale: "log" as const,
@@ -104,7 +102,7 @@ function logAxisProps(axis: NonNullable<ReturnType<typeof logAxis>>) {
 }
 
 /** One log axis over the positive values given: its ticks, unit and labels (kernels/diagram/axis-scale.ts). */
-function logAxis(values: number[], dimension: "length" | "time" | "number") {
+export function logAxis(values: number[], dimension: ReturnType<typeof parameterDimension> | "number") {
   const positive = values.filter((v) => v > 0 && Number.isFinite(v));
   if (positive.length === 0) return null;
   const [from, to] = [Math.min(...positive), Math.max(...positive)];

@@ -2,8 +2,10 @@
 
 /**
  * The Sweep: decoherence against the recombination time, the hold time or the lab's distance, on log–log axes,
- * computed on a worker of its own. The current value and the sweep's smallest decoherence are marked; clicking a
- * point sets the scenario to it (one undo step). A progress bar shows when a sweep takes more than a moment.
+ * computed on a worker of its own; with an environment, also against the gas pressure, the surroundings'
+ * temperature or the surface distance, drawn as ⟨N⟩ of every channel and the total. The current value and the
+ * sweep's smallest decoherence are marked; clicking a point sets the scenario to it (one undo step). A progress bar
+ * shows when a sweep takes more than a moment.
  */
 import { memo, useCallback, useEffect, useMemo, useState } from "react";
 import type { SweepParameter } from "@/canvas/compute-client";
@@ -13,15 +15,18 @@ import { withRecombinationAndHold } from "@/canvas/kernels/document-edits";
 import { defaultSweepRange } from "@/canvas/kernels/sweep-range";
 import { buttonStyles } from "@/components/ui/styles";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import { withParameter } from "@/physics/sweeps";
+import { sweepCurves } from "@/canvas/kernels/sweep-channels";
+import { canVary, withParameter } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
 import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
+import { SweepChannelsChart } from "./SweepChannelsChart";
 import { useEdit } from "./useEdit";
 import { usePanelValue } from "./usePacedDuringDrag";
 
 const POINTS = 41;
+const SWEEP_ORDER: SweepParameter[] = ["recombination-time", "hold-time", "lab-distance", "gas-pressure", "surroundings-temperature", "surface-distance"];
 /** A sweep quicker than this shows no progress bar. */
 const PROGRESS_AFTER_MS = 400;
 
@@ -48,10 +53,7 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
   const edit = useEdit();
   const readOnly = useEditor((s) => s.readOnly);
   const sweep = useEditor((s) => s.sweep);
-  const available: SweepParameter[] = [
-    ...(document.protocol.kind === "segments" ? (["recombination-time", "hold-time"] as const) : []),
-    ...(document.background.kind === "minkowski" ? [] : (["lab-distance"] as const)),
-  ];
+  const available = SWEEP_ORDER.filter((p) => canVary(document, p));
   const parameter = available.includes(sweep.parameter) ? sweep.parameter : (available[0] ?? sweep.parameter);
   const dimension = dimensionOf(parameter);
   const [range, setRange] = useState<{ from: number; to: number } | null>(null);
@@ -96,6 +98,8 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         .filter((p): p is SweepPoint => p.decoherence !== null && p.decoherence > 0),
     [sweep.result],
   );
+  const curves = useMemo(() => sweepCurves(sweep.result?.points ?? []), [sweep.result]);
+  const xs = useMemo(() => (sweep.result?.points ?? []).map((p) => p.x), [sweep.result]);
   const best = useMemo(() => data.reduce<SweepPoint | null>((b, p) => (!b || p.decoherence < b.decoherence ? p : b), null), [data]);
   const stale = sweep.result !== null && sweep.requestRevision !== revision;
   const setTo = useCallback((x: number) => edit(`Set ${PARAMETER_WORDS[parameter]} from the sweep`, (d) => withParameter(d, parameter, x)), [edit, parameter]);
@@ -116,10 +120,10 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         Sweep
       </h2>
       <div className="flex flex-wrap items-end gap-3">
-        <label className="block text-xs font-semibold text-ink-soft">
+        <label className="block min-w-0 max-w-full text-xs font-semibold text-ink-soft">
           Decoherence against
           <select
-            className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
+            className="mt-1 block max-w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
             value={parameter}
             onChange={(e) => {
               setRange(null);
@@ -185,7 +189,20 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
           <FlagIcon kind="invalid" /> The sweep failed: {sweep.issues.map((i) => i.message).join("; ")}
         </p>
       )}
-      {data.length > 0 && (
+      {curves.length > 0 && sweep.result && (
+        <div className={stale ? "opacity-60" : undefined}>
+          {stale && (
+            <p className="mt-2 flex items-start gap-1.5 text-xs text-caution">
+              <FlagIcon kind="caution" /> Computed for an earlier version of the scenario: run the sweep again.
+            </p>
+          )}
+          <div className="mt-3 h-80 w-full" data-testid="sweep-chart">
+            <SweepChannelsChart xs={xs} curves={curves} parameter={sweep.result.parameter} readOnly={readOnly} onPick={setTo} />
+          </div>
+          {!readOnly && <p className="mt-1 text-xs text-ink-soft">Click a point to set the scenario to it.</p>}
+        </div>
+      )}
+      {curves.length === 0 && data.length > 0 && (
         <div className={stale ? "opacity-60" : undefined}>
           {stale && (
             <p className="mt-2 flex items-start gap-1.5 text-xs text-caution">

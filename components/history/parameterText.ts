@@ -1,14 +1,20 @@
 /**
  * A scenario document's leaves in words, for comparing two revisions: "protocol.hold.durationSeconds" reads as
  * "Protocol › hold › duration", and its value as "100 ms". The unit comes from the field's name, which the
- * scenario schema spells out in SI (…Metres, …Seconds, …Kg, …Coulombs, …MetresPerSecondSquared, …PerSecond).
+ * scenario schema spells out in SI (…Metres, …Seconds, …Kg, …Coulombs, …MetresPerSecondSquared, …PerSecond; the
+ * environment's …Pascals, …Kelvin, …OhmMetres, …Hertz).
  */
 import { formatAcceleration, formatCharge, formatDuration, formatLength, formatMass, formatRate } from "@/components/format/quantities";
+import { formatQuantity } from "@/physics/units";
 
 const unitSuffixes: [suffix: string, format: (value: number) => string][] = [
   ["MetresPerSecondSquared", formatAcceleration],
   ["PerSecond", formatRate],
+  ["OhmMetres", (v) => formatQuantity(v, "resistivity")],
   ["Metres", formatLength],
+  ["Pascals", (v) => formatQuantity(v, "pressure")],
+  ["Kelvin", (v) => formatQuantity(v, "temperature")],
+  ["Hertz", (v) => formatQuantity(v, "rate")],
   ["Seconds", formatDuration],
   ["Kg", formatMass],
   ["Coulombs", formatCharge],

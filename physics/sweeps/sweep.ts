@@ -1,12 +1,15 @@
 /**
- * Sweeps: ⟨N⟩ and 𝒟 against the recombination time, the hold time or the lab's distance, at points evenly spaced
- * in the logarithm between two values, reporting progress through an optional callback after each point.
+ * Sweeps: ⟨N⟩ and 𝒟 against the recombination time, the hold time, the lab's distance or an environmental control
+ * parameter (gas pressure, surroundings temperature, surface distance), at points evenly spaced in the logarithm
+ * between two values, reporting progress through an optional callback after each point. Each point carries every
+ * channel's ⟨N⟩ (the field channels and the environment's) and the whole budget's, so a chart draws one curve each.
  */
 import { computeScenario, type ComputeOptions } from "../compute";
 import type { Quantity } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
-import { parameterUnit, withParameter, type SweepParameter } from "./vary";
+import type { EnvironmentChannel } from "../environment/types";
+import { parameterUnit, withParameter, type SweepParameter, type SweepUnit } from "./vary";
 
 export interface SweepRequest {
   parameter: SweepParameter;
@@ -16,17 +19,24 @@ export interface SweepRequest {
 }
 
 export interface SweepPoint {
-  /** The parameter's value, SI (s or m). */
+  /** The parameter's value, SI (s, m, Pa or K). */
   x: number;
+  /** The body's own field channels together (electromagnetic and gravitational). */
   totalQuanta: Quantity;
   decoherence: Quantity;
   electromagneticQuanta: Quantity;
   gravitationalQuanta: Quantity;
+  /** ⟨N⟩ of each environmental channel the scenario switches on (empty for an isolated body). */
+  environmentQuanta: { channel: EnvironmentChannel; quanta: Quantity }[];
+  /** Every channel together, the environment's included; the field channels' total for an isolated body. */
+  budgetTotalQuanta: Quantity;
+  /** The whole budget's decoherence. */
+  budgetDecoherence: Quantity;
 }
 
 export interface SweepResult {
   parameter: SweepParameter;
-  unit: "s" | "m";
+  unit: SweepUnit;
   spacing: "log";
   points: SweepPoint[];
 }
@@ -65,6 +75,9 @@ export function sweepScenario(document: ScenarioDocument, request: SweepRequest,
       decoherence: result.combined.decoherence,
       electromagneticQuanta: result.electromagnetic.totalQuanta,
       gravitationalQuanta: result.gravitational.totalQuanta,
+      environmentQuanta: (result.environment?.channels ?? []).map((ch) => ({ channel: ch.channel, quanta: ch.totalQuanta })),
+      budgetTotalQuanta: (result.environment?.total ?? result.combined).totalQuanta,
+      budgetDecoherence: (result.environment?.total ?? result.combined).decoherence,
     };
   });
   return { parameter: request.parameter, unit: parameterUnit(request.parameter), spacing: "log", points };

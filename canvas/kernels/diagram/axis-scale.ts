@@ -76,6 +76,9 @@ const PREFIXES: Record<"length" | "time", AxisUnit[]> = {
  * exceed it, so the largest label reads between 1 and 1000 of it (beyond the table's ends, its first or last unit).
  */
 export function axisUnit(largestMagnitude: number, dimension: QuantityDimension | "number"): AxisUnit {
+  // Pressures and temperatures span many decades on a sweep: their axes keep the bare SI unit, labels in powers of ten.
+  if (dimension === "pressure") return { symbol: "Pa", siPerUnit: 1 };
+  if (dimension === "temperature") return { symbol: "K", siPerUnit: 1 };
   if (dimension !== "length" && dimension !== "time") return { symbol: "", siPerUnit: 1 };
   const units = PREFIXES[dimension];
   let chosen = units[0];

@@ -1,6 +1,7 @@
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { budgetCsv, budgetCsvRows, budgetFlagRows, budgetInputLines, csvField, csvText, csvValue } from "@/canvas/export/budget-csv";
+import { budgetCsv, budgetCsvRows, budgetFlagRows, budgetInputLines, budgetMarginRows, csvField, csvText, csvValue } from "@/canvas/export/budget-csv";
 import { embedOptions, embedPath, embedSnippet } from "@/components/export/embed-options";
 import { budgetFileName, budgetPictureFileName, diagramFileName, scenarioFileNameFor, sweepFileName } from "@/canvas/export/file-names";
 import { computeScenario } from "@/physics/compute";
@@ -123,5 +124,33 @@ describe("embed options", () => {
     const snippet = embedSnippet("https://branchline.example", "tok", { largeType: true, scrub: true });
     expect(snippet).toContain('src="https://branchline.example/embed/tok?type=large&amp;scrub=1"');
     expect(snippet).toMatch(/^<iframe [^>]*><\/iframe>$/);
+  });
+});
+
+describe("the Budget's CSV with an environment", () => {
+  const parsed = parseScenarioDocument(JSON.parse(readFileSync("examples/environment-cryogenic-chip.json", "utf8")));
+  if (!parsed.ok) throw new Error("the example does not parse");
+  const document = parsed.document;
+  const result = computeScenario(document);
+
+  it("lists each environmental channel's ⟨N⟩, every channel's share (the dominant one named) and the whole budget's total", () => {
+    const rows = budgetCsvRows(result);
+    const gas = rows.find((r) => r[0] === "Quanta <N> (residual gas)")!;
+    expect(Number(gas[1])).toBe(result.environment!.channels.find((c) => c.channel === "gas")!.totalQuanta.value);
+    const shares = rows.filter((r) => r[0].startsWith("Share of the total"));
+    expect(shares.reduce((sum, r) => sum + Number(r[1]), 0)).toBeCloseTo(1, 9);
+    expect(shares.filter((r) => r[0].endsWith(", dominant)"))).toHaveLength(1);
+    const total = rows.find((r) => r[0] === "Total quanta <N> (every channel)")!;
+    expect(Number(total[1])).toBe(result.environment!.total.totalQuanta.value);
+  });
+
+  it("gives the inputs with their units and a margins part, one row per environmental channel", () => {
+    const lines = budgetCsv(result, document).split("\r\n");
+    expect(lines).toContain("# environment.gas.pressurePascals: 1e-10 Pa");
+    expect(lines).toContain("# environment.surface.resistivityOhmMetres: 2.2e-8 ohm m");
+    const header = lines.indexOf("channel,parameter,now,unit,equals the field channels at,outcome");
+    expect(header).toBeGreaterThan(lines.indexOf("quantity,value,unit,source"));
+    expect(lines.slice(header + 1, header + 1 + result.environment!.margins.length).map((l) => l.split(",")[0])).toEqual(budgetMarginRows(result).map((r) => r[0]));
+    expect(budgetMarginRows(result).find((r) => r[0] === "thermal scattering")!.slice(0, 4)).toEqual(["thermal scattering", "surroundings temperature", "4", "K"]);
   });
 });

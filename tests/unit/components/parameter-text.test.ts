@@ -14,6 +14,10 @@ describe("parameter labels and values for comparing revisions", () => {
     expect(parameterValue("separation.distanceMetres", 1e-6)).toBe("1.00 µm");
     expect(parameterValue("background.hubbleRatePerSecond", 2.2e-18)).toBe("2.20 × 10⁻¹⁸ s⁻¹");
     expect(parameterValue("schemaVersion", 1)).toBe("1");
+    expect(parameterValue("environment.gas.pressurePascals", 1e-10)).toBe("1.00 × 10⁻¹⁰ Pa");
+    expect(parameterValue("environment.radiation.surroundingsTemperatureKelvin", 4)).toBe("4.00 K");
+    expect(parameterValue("environment.surface.resistivityOhmMetres", 2.2e-8)).toBe("2.20 × 10⁻⁸ Ω m");
+    expect(parameterLabel("environment.surface.resistivityOhmMetres")).toBe("Environment › surface › resistivity");
     expect(parameterValue("source.labMassKg", null)).toBe("none");
     expect(parameterValue("display.showGrid", true)).toBe("yes");
     expect(parameterValue("protocol.samples", { items: 2000 })).toBe("2,000 items");

@@ -28,6 +28,17 @@ describe("parseQuantity", () => {
     ["1e-14 kg", "mass", 1e-14],
     ["2.2e-18 1/s", "rate", 2.2e-18],
     ["2.2e-18 Hz", "rate", 2.2e-18],
+    // 1 bar = 10⁵ Pa exactly (SI Brochure, 9th ed., Table 8); kelvin and ohm metre are SI units.
+    ["1e-8 mbar", "pressure", 1e-6],
+    ["1e-6 Pa", "pressure", 1e-6],
+    ["4 K", "temperature", 4],
+    ["40 mK", "temperature", 0.04],
+    ["2.2e-8 ohm m", "resistivity", 2.2e-8],
+    ["2.2e-8 Ω m", "resistivity", 2.2e-8],
+    ["2.2 µΩ cm", "resistivity", 2.2e-8],
+    // The form formatQuantity prints, read back.
+    ["2.20 × 10⁻⁸ Ω m", "resistivity", 2.2e-8],
+    ["2.20 × 10⁻¹⁸ s⁻¹", "rate", 2.2e-18],
   ] as const)("reads %s as %s in SI", (text, dimension, expected) => {
     expect(relative(valueOf(text, dimension), expected)).toBeLessThan(1e-15);
   });
@@ -80,6 +91,10 @@ describe("formatQuantity", () => {
     [2e30, "mass", {}, "2.00 × 10³⁰ kg"],
     [1e-3 * solarMassKg, "mass", { solarMasses: true }, "1.99 × 10²⁷ kg"],
     [0, "length", {}, "0 m"],
+    [1e-13, "pressure", {}, "1.00 × 10⁻¹³ Pa"],
+    [295, "temperature", {}, "295 K"],
+    [0.04, "temperature", {}, "40.0 mK"],
+    [2.2e-8, "resistivity", {}, "2.20 × 10⁻⁸ Ω m"],
   ] as const)("prints %d (%s, %o) as %s", (value, dimension, options, expected) => {
     expect(formatQuantity(value, dimension, options)).toBe(expected);
   });

@@ -1,5 +1,5 @@
 /**
- * Colours of the figures (Diagram and Lab view), light and dark: the dark theme swaps ink and paper for
+ * Colours of the figures (Diagram and Offsets), light and dark: the dark theme swaps ink and paper for
  * projection and keeps the branch colours (Okabe–Ito orange and blue), which read on both.
  */
 import type { ScenarioDocument } from "@/physics/scenario/schema";

@@ -66,17 +66,29 @@ export interface FigureOptions {
   paperBackground?: boolean;
   /** Show the protocol only up to this instant of lab time (the embed's scrubber); null or absent: all of it. */
   cursor?: TimeCursor | null;
+  /** Room at the stage's right and bottom edges kept clear of the figure and its labels (the embed's controls lie there). */
+  inset?: FigureInset;
 }
 
-export function diagramPadding(scene: DiagramBackdrop, labelScale = 1): Padding {
+export interface FigureInset {
+  right: number;
+  bottom: number;
+}
+
+export const NO_INSET: FigureInset = { right: 0, bottom: 0 };
+
+export function diagramPadding(scene: DiagramBackdrop, labelScale = 1, inset: FigureInset = NO_INSET): Padding {
   const base = scene.chart.background.kind === "de-sitter" ? DE_SITTER_PADDING : PADDING;
   const grow = (v: number) => Math.round(v * (1 + (labelScale - 1) * 0.6));
-  return { left: grow(base.left), right: grow(base.right), top: grow(base.top), bottom: grow(base.bottom) };
+  return { left: grow(base.left), right: grow(base.right) + inset.right, top: grow(base.top), bottom: grow(base.bottom) + inset.bottom };
 }
 
-export function diagramViewport(scene: DiagramBackdrop, size: { width: number; height: number }, labelScale = 1): DiagramViewport {
-  return fitDiagramViewport(scene.bounds, size, diagramPadding(scene, labelScale));
+export function diagramViewport(scene: DiagramBackdrop, size: { width: number; height: number }, labelScale = 1, inset: FigureInset = NO_INSET): DiagramViewport {
+  return fitDiagramViewport(scene.bounds, size, diagramPadding(scene, labelScale, inset));
 }
+
+/** Where labels may go: the stage less its insets. */
+const labelStage = (width: number, height: number, inset: FigureInset) => ({ width: width - inset.right, height: height - inset.bottom });
 
 const line = (points: number[], stroke: string, width: number, dash: number[] = [], round = false): FigureShape => ({ kind: "line", points, stroke, width, dash, round });
 
@@ -135,12 +147,12 @@ interface BackdropGroups {
   tone: Record<PlacedLabel["tone"], string>;
 }
 
-function backdropGroups(scene: DiagramBackdrop, width: number, height: number, palette: FigurePalette, labelScale: number, paper: boolean): BackdropGroups {
+function backdropGroups(scene: DiagramBackdrop, width: number, height: number, palette: FigurePalette, labelScale: number, paper: boolean, inset: FigureInset): BackdropGroups {
   const size = { width, height };
-  const viewport = diagramViewport(scene, size, labelScale);
+  const viewport = diagramViewport(scene, size, labelScale, inset);
   const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
   const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
-  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), size, { obstacles: diagramLabelObstacles(scene, viewport) });
+  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), labelStage(width, height, inset), { obstacles: diagramLabelObstacles(scene, viewport) });
   return {
     viewport,
     under: [
@@ -180,14 +192,19 @@ const rememberedBackdrop = memoizeLast(
     palette: FigurePalette,
     labelScale: number,
     paper: boolean,
-  ) => backdropGroups({ chart, outline, labRegion, bounds, boundaries, grid, labWorldline: worldline }, width, height, palette, labelScale, paper),
+    insetRight: number,
+    insetBottom: number,
+  ) => backdropGroups({ chart, outline, labRegion, bounds, boundaries, grid, labWorldline: worldline }, width, height, palette, labelScale, paper, { right: insetRight, bottom: insetBottom }),
 );
 
 export function diagramFigure(scene: DiagramScene, size: { width: number; height: number }, palette: FigurePalette, options: FigureOptions = {}): DiagramFigure {
   const { width, height } = size;
   const labelScale = options.labelScale ?? 1;
   const paper = options.paperBackground ?? true;
-  const backdrop = rememberedBackdrop(scene.chart, scene.outline, scene.labRegion, scene.bounds, scene.boundaries, scene.grid, scene.labWorldline, width, height, palette, labelScale, paper);
+  const inset = options.inset ?? NO_INSET;
+  const backdrop = rememberedBackdrop(
+    scene.chart, scene.outline, scene.labRegion, scene.bounds, scene.boundaries, scene.grid, scene.labWorldline, width, height, palette, labelScale, paper, inset.right, inset.bottom,
+  );
   const { viewport } = backdrop;
   const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
   const protocol = scene.protocol && options.cursor ? cutAtCursor(scene, options.cursor) : scene.protocol;
@@ -219,7 +236,7 @@ export function diagramFigure(scene: DiagramScene, size: { width: number; height
         }),
       ],
     });
-    sliceLabels = layoutLabels(scaled(sliceLabelCandidates(protocol, viewport), labelScale), size, {
+    sliceLabels = layoutLabels(scaled(sliceLabelCandidates(protocol, viewport), labelScale), labelStage(width, height, inset), {
       obstacles: sliceLabelObstacles(scene, protocol, viewport),
       placed: backdrop.placed,
     });

@@ -5,12 +5,15 @@
  * smallest decoherence marked. Drawn from the sweep's numbers, not from the chart on screen, so the file is vector
  * and independent of the charting library. Pure: data in, shapes out.
  *
- * The tick rule here is this file's own (a small 1–2–5/decade rule); a shared tick kernel can replace it.
+ * The ticks, units and tick labels are the shared axis kernel's (canvas/kernels/diagram/axis-scale.ts), as on the
+ * chart on screen.
  */
-import { superscript } from "@/physics/superscript";
+import { axisTickLabels, axisTitle, axisUnit as unitFor, logTicks, tickLabel as unitTickLabel, type AxisTicks, type AxisUnit } from "../kernels/diagram/axis-scale";
 import { DASHES, type FigurePalette } from "../theme";
 import type { FigureShape } from "./diagram-figure";
 import type { ExportDrawing, NamedGroup } from "./standalone-figure";
+
+export { logTicks };
 
 export interface SweepChartPoint {
   /** The parameter's value, SI. */
@@ -41,55 +44,24 @@ export interface SweepChartData {
   curves?: SweepFigureCurve[];
 }
 
-export interface LogTicks {
-  major: number[];
-  minor: number[];
-}
+export type LogTicks = AxisTicks;
 
-const clean = (v: number) => Number(v.toPrecision(12));
+/** A pure number's axis (decoherence): no unit. */
+const NUMBER_UNIT: AxisUnit = { symbol: "", siPerUnit: 1 };
 
-/**
- * Ticks for a log axis over [from, to] (0 < from < to): majors at the decades inside; where fewer than two decades
- * fall inside, majors at 1, 2 and 5 × each decade; minors at the other integer multiples of each decade.
- */
-export function logTicks(from: number, to: number): LogTicks {
-  const first = Math.floor(Math.log10(from));
-  const last = Math.ceil(Math.log10(to));
-  const inside = (v: number) => v >= from * (1 - 1e-9) && v <= to * (1 + 1e-9);
-  const decades: number[] = [];
-  for (let e = first; e <= last; e++) decades.push(clean(10 ** e));
-  const multiples = (ms: number[]) => decades.flatMap((d) => ms.map((m) => clean(m * d))).filter(inside);
-  const decadeMajors = decades.filter(inside);
-  const major = decadeMajors.length >= 2 ? decadeMajors : multiples([1, 2, 5]);
-  const majorSet = new Set(major);
-  const minor = multiples([1, 2, 3, 4, 5, 6, 7, 8, 9]).filter((v) => !majorSet.has(v));
-  return { major, minor };
-}
+/** Many decades on one axis (pressure, temperature): the bare SI unit, labels in powers of ten. */
+const BARE_UNITS = { pressure: "Pa", temperature: "K" } as const;
 
-const PREFIX: Record<number, string> = { [-18]: "a", [-15]: "f", [-12]: "p", [-9]: "n", [-6]: "µ", [-3]: "m", 0: "", 3: "k", 6: "M", 9: "G" };
-const RANGE: Record<SweepChartData["dimension"], { symbol: string; lowest: number; highest: number }> = {
-  time: { symbol: "s", lowest: -18, highest: 0 },
-  length: { symbol: "m", lowest: -15, highest: 3 },
-  // Many decades on one axis: the bare SI unit, labels in powers of ten.
-  pressure: { symbol: "Pa", lowest: 0, highest: 0 },
-  temperature: { symbol: "K", lowest: 0, highest: 0 },
-};
-
-/** One unit for an axis: the SI prefix of the range's geometric middle (so tick labels stay short). */
+/** One unit for an axis over [from, to]: the kernel's unit for the range's geometric middle (so tick labels stay short). */
 export function axisUnit(dimension: SweepChartData["dimension"], from: number, to: number): { symbol: string; perUnit: number } {
-  const { symbol, lowest, highest } = RANGE[dimension];
-  const middle = Math.sqrt(from * to);
-  const exponent = Math.min(highest, Math.max(lowest, Math.floor(Math.log10(middle) / 3) * 3));
-  return { symbol: `${PREFIX[exponent]}${symbol}`, perUnit: 10 ** exponent };
+  if (dimension === "pressure" || dimension === "temperature") return { symbol: BARE_UNITS[dimension], perUnit: 1 };
+  const unit = unitFor(Math.sqrt(from * to), dimension);
+  return { symbol: unit.symbol, perUnit: unit.siPerUnit };
 }
 
 /** A tick value as printed: plainly between 0.001 and 10⁴, else as a power of ten (a major tick is a decade there). */
 export function tickLabel(value: number): string {
-  const magnitude = Math.abs(value);
-  if (magnitude >= 1e-3 && magnitude < 1e4) return String(clean(value));
-  const exponent = Math.round(Math.log10(magnitude));
-  const mantissa = clean(value / 10 ** exponent);
-  return mantissa === 1 ? `10${superscript(exponent)}` : `${mantissa} × 10${superscript(exponent)}`;
+  return unitTickLabel(value, NUMBER_UNIT);
 }
 
 /** At most this many labelled ticks on an axis: beyond it, every second (third, …) decade is labelled. */
@@ -143,9 +115,14 @@ export function sweepChartDrawing(data: SweepChartData, size: { width: number; h
   const px = (x: number) => plot.left + ((Math.log10(x) - Math.log10(x0)) / (Math.log10(x1) - Math.log10(x0) || 1)) * (plot.right - plot.left);
   const py = (y: number) => plot.bottom - ((Math.log10(y) - Math.log10(y0)) / (Math.log10(y1) - Math.log10(y0) || 1)) * (plot.bottom - plot.top);
 
-  const unit = axisUnit(data.dimension, x0, x1);
+  const { symbol, perUnit } = axisUnit(data.dimension, x0, x1);
+  const unit: AxisUnit = { symbol, siPerUnit: perUnit };
   const xTicks = logTicks(x0, x1);
   const yTicks = logTicks(y0, y1);
+  const labelsOf = (major: number[], axis: AxisUnit) => {
+    const words = new Map(major.map((v, i) => [v, axisTickLabels(major, axis)[i]]));
+    return labelled(major).map((v) => ({ v, words: words.get(v)! }));
+  };
 
   groups.push({
     id: "grid",
@@ -183,9 +160,9 @@ export function sweepChartDrawing(data: SweepChartData, size: { width: number; h
   groups.push({
     id: "labels",
     shapes: [
-      ...labelled(xTicks.major).map((x) => text(tickLabel(x / unit.perUnit), px(x), plot.bottom + 17, "middle", palette.inkSoft)),
-      ...labelled(yTicks.major).map((y) => text(tickLabel(y), plot.left - 9, py(y), "end", palette.inkSoft)),
-      text(`${data.parameterWords} (${unit.symbol})`, (plot.left + plot.right) / 2, height - 14, "middle", palette.ink, TITLE_FONT),
+      ...labelsOf(xTicks.major, unit).map(({ v, words }) => text(words, px(v), plot.bottom + 17, "middle", palette.inkSoft)),
+      ...labelsOf(yTicks.major, NUMBER_UNIT).map(({ v, words }) => text(words, plot.left - 9, py(v), "end", palette.inkSoft)),
+      text(axisTitle(data.parameterWords, unit), (plot.left + plot.right) / 2, height - 14, "middle", palette.ink, TITLE_FONT),
       text(curves.length > 0 ? "quanta ⟨N⟩" : "decoherence", 16, (plot.top + plot.bottom) / 2, "middle", palette.ink, TITLE_FONT, -90),
     ],
   });

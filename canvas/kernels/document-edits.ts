@@ -9,7 +9,7 @@ import { separationHistory } from "@/physics/protocols";
 import { ScenarioInputError } from "@/physics/scenario/input-error";
 import { c, G, solarMass } from "@/physics/constants";
 import { parseScenarioDocument, type LabPlacement, type RampShape, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
-import type { ProtocolPlan } from "./lab-view/drag-plan";
+import type { ProtocolPlan } from "./offsets/drag-plan";
 import type { SegmentName } from "./timeline";
 
 export function withProtocolPlan(document: ScenarioDocument, plan: ProtocolPlan): ScenarioDocument {

@@ -34,7 +34,7 @@ export function totalDurationSeconds(protocol: SegmentsProtocol): number {
 }
 
 /** The segments protocol of a document, or null when the document carries a formula or sampled profile. */
-export function segmentsProtocolOf(document: ScenarioDocument): SegmentsProtocol | null {
+export function segmentsProtocolOf(document: Pick<ScenarioDocument, "protocol">): SegmentsProtocol | null {
   return document.protocol.kind === "segments" ? document.protocol : null;
 }
 

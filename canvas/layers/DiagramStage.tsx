@@ -8,15 +8,15 @@ import { memo } from "react";
 import { Circle, Group, Layer, Line, Stage, Text } from "react-konva";
 import type { KonvaEventObject } from "konva/lib/Node";
 import { useEditor, useEditorStore } from "../EditorProvider";
-import { diagramFigure, diagramViewport } from "../export/diagram-figure";
+import { diagramFigure, diagramViewport, NO_INSET } from "../export/diagram-figure";
 import { konvaShape, type KonvaFonts } from "../export/konva-shapes";
 import type { TimeCursor } from "../export/time-cursor";
-import { compactQuantity } from "../kernels/diagram/labels";
 import { lightConeAt } from "../kernels/diagram/light-cone";
+import { pointerReadout } from "../kernels/diagram/pointer-readout";
 import type { DiagramScene } from "../kernels/diagram/scene";
 import { fromPx, toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 import { FIGURE_PALETTES, type FigurePalette } from "../theme";
-import type { FigureGroup, FigureGroupId, FigureShape } from "../export/diagram-figure";
+import type { FigureGroup, FigureGroupId, FigureInset, FigureShape } from "../export/diagram-figure";
 import { useFigureFonts } from "./useFigureFonts";
 
 const CONE_LENGTH_PX = 34;
@@ -78,14 +78,7 @@ const FigureLayer = memo(
     before.groups.every((g, i) => g.id === after.groups[i].id && sameShapes(g.shapes, after.groups[i].shapes)),
 );
 
-function pointerReadout(scene: DiagramScene, cone: ReturnType<typeof lightConeAt>): string {
-  if (!cone.coordinates) return "outside the lab's static region";
-  const kind = scene.chart.background.kind;
-  const radius = kind === "rindler" ? "ξ" : kind === "minkowski" ? "x" : "r";
-  return `t = ${compactQuantity(cone.coordinates.tSeconds, "time")}   ${radius} = ${compactQuantity(cone.coordinates.rMetres, "length")}`;
-}
-
-function LightConeGizmo({ scene, viewport, palette, font }: { scene: DiagramScene; viewport: DiagramViewport; palette: FigurePalette; font: string }) {
+function LightConeGizmo({ scene, viewport, palette, font, inset }: { scene: DiagramScene; viewport: DiagramViewport; palette: FigurePalette; font: string; inset: FigureInset }) {
   const pointer = useEditor((s) => s.diagramPointer);
   if (!pointer) return null;
   const cone = lightConeAt(scene.chart.background, pointer, scene.chart.nullScaleMetres);
@@ -98,7 +91,7 @@ function LightConeGizmo({ scene, viewport, palette, font }: { scene: DiagramScen
       <Line points={[fi.x, fi.y, at.x, at.y, fo.x, fo.y]} stroke={palette.inkSoft} strokeWidth={1} />
       <Line points={[pi.x, pi.y, at.x, at.y, po.x, po.y]} stroke={palette.inkFaint} strokeWidth={1} dash={[2, 3]} />
       <Circle x={at.x} y={at.y} radius={2} fill={palette.ink} />
-      <Text x={viewport.width - 410} y={viewport.height - 18} width={400} align="right" wrap="none" text={pointerReadout(scene, cone)} fontSize={11} fontFamily={font} fill={palette.inkSoft} />
+      <Text x={viewport.width - inset.right - 510} y={viewport.height - inset.bottom - 18} width={500} align="right" wrap="none" text={pointerReadout(scene, viewport, at, cone.coordinates)} fontSize={11} fontFamily={font} fill={palette.inkSoft} />
     </Group>
   );
 }
@@ -110,13 +103,16 @@ export interface DiagramStageProps {
   labelScale?: number;
   /** Draw the protocol only up to this instant (the embed's scrubber). */
   cursor?: TimeCursor | null;
+  /** Room kept clear at the right and bottom edges (the embed's controls lie over it). */
+  inset?: FigureInset;
 }
+
 
 /**
  * What the stage draws, subscribed to the store from inside the stage: a drag re-renders this component in
  * react-konva's own renderer, not the Stage and the page around it.
  */
-function DiagramLayers({ width, height, labelScale, cursor }: Required<DiagramStageProps>) {
+function DiagramLayers({ width, height, labelScale, cursor, inset }: Required<DiagramStageProps>) {
   const theme = useEditor((s) => s.document.display.theme);
   const outcome = useEditor((s) => s.diagramScene(s.document));
   const palette = FIGURE_PALETTES[theme];
@@ -129,29 +125,29 @@ function DiagramLayers({ width, height, labelScale, cursor }: Required<DiagramSt
     );
   }
   const scene = outcome.scene;
-  const figure = diagramFigure(scene, { width, height }, palette, { labelScale, cursor });
+  const figure = diagramFigure(scene, { width, height }, palette, { labelScale, cursor, inset });
   return (
     <>
       {LAYERS.map((ids) => (
         <FigureLayer key={ids[0]} groups={figure.groups.filter((g) => ids.includes(g.id))} fonts={fonts} />
       ))}
       <Layer listening={false}>
-        <LightConeGizmo scene={scene} viewport={figure.viewport} palette={palette} font={fonts.mono} />
+        <LightConeGizmo scene={scene} viewport={figure.viewport} palette={palette} font={fonts.mono} inset={inset} />
       </Layer>
     </>
   );
 }
 
-export default function DiagramStage({ width, height, labelScale = 1, cursor = null }: DiagramStageProps) {
+export default function DiagramStage({ width, height, labelScale = 1, cursor = null, inset = NO_INSET }: DiagramStageProps) {
   const store = useEditorStore();
   const onMove = (event: KonvaEventObject<MouseEvent>) => {
     const pos = event.target.getStage()?.getPointerPosition();
     const outcome = store.getState().diagramScene(store.getState().document);
-    if (pos && outcome.ok) store.getState().setDiagramPointer(fromPx(diagramViewport(outcome.scene, { width, height }, labelScale), pos.x, pos.y));
+    if (pos && outcome.ok) store.getState().setDiagramPointer(fromPx(diagramViewport(outcome.scene, { width, height }, labelScale, inset), pos.x, pos.y));
   };
   return (
     <Stage width={width} height={height} onMouseMove={onMove} onMouseLeave={() => store.getState().setDiagramPointer(null)}>
-      <DiagramLayers width={width} height={height} labelScale={labelScale} cursor={cursor} />
+      <DiagramLayers width={width} height={height} labelScale={labelScale} cursor={cursor} inset={inset} />
     </Stage>
   );
 }

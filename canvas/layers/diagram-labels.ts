@@ -69,16 +69,23 @@ export function corridorPx(scene: DiagramBackdrop, viewport: DiagramViewport): n
   return branchCorridor(scene.bounds) * viewport.scale;
 }
 
+const LAB_LABEL_PX = 11;
+
 function labLabel(scene: DiagramBackdrop, viewport: DiagramViewport): LabelCandidate {
   const { background } = scene.chart;
   const worldline = scene.labWorldline.map((p) => toPx(viewport, p));
-  const away = corridorPx(scene, viewport) + LINE_CLEARANCE_PX + 3;
-  const spots = pick(worldline, [0.3, 0.7, 0.22, 0.78, 0.4, 0.6, 0.15, 0.85]).flatMap((p): LabelSpot[] => [
-    { x: p.x + away, y: p.y, align: "left", verticalAlign: "middle", rotation: 0 },
-    { x: p.x - away, y: p.y, align: "right", verticalAlign: "middle", rotation: 0 },
-  ]);
+  const near = corridorPx(scene, viewport) + LINE_CLEARANCE_PX + 3;
+  // Where the worldline leans (toward i± in de Sitter's lab-centred frame) it comes nearer above or below a label
+  // than beside it: then a spot twice as far out, clear of the corridor kept on every side of the label.
+  const points = pick(worldline, [0.3, 0.7, 0.22, 0.78, 0.4, 0.6, 0.15, 0.85]);
+  const spots = [near, 2 * near + LAB_LABEL_PX * 1.2].flatMap((away) =>
+    points.flatMap((p): LabelSpot[] => [
+      { x: p.x + away, y: p.y, align: "left", verticalAlign: "middle", rotation: 0 },
+      { x: p.x - away, y: p.y, align: "right", verticalAlign: "middle", rotation: 0 },
+    ]),
+  );
   return withSpots(
-    { id: "lab-radius", text: labRadiusLabel(background.kind, background.labRadiusMetres, scene.chart.horizonRadiusMetres), fontSize: 11, priority: LABEL_PRIORITY.labRadius, tone: "soft" },
+    { id: "lab-radius", text: labRadiusLabel(background.kind, background.labRadiusMetres, scene.chart.horizonRadiusMetres), fontSize: LAB_LABEL_PX, priority: LABEL_PRIORITY.labRadius, tone: "soft" },
     spots,
   );
 }

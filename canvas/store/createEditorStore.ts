@@ -11,7 +11,7 @@ import { dragHandleTool } from "../tools/drag-handle";
 import type { ToolContext } from "../tools/types";
 import { emptyHistory, recordEntry, redoStep, undoStep } from "./history";
 import { diffValues } from "./patches";
-import { createLabViewSelectors } from "./lab-view-selectors";
+import { createOffsetsSelectors } from "./offsets-selectors";
 import { createSceneBuilder } from "../kernels/diagram/scene";
 import { memoizeLast } from "../kernels/memoize";
 import type { EditorData, EditorState } from "./state";
@@ -34,8 +34,8 @@ function initialData({ document, version, readOnly }: EditorStoreOptions): Edito
     transaction: null,
     selection: null,
     hover: null,
-    labTool: { name: "idle" },
-    labViewSize: { width: 640, height: 300 },
+    offsetsTool: { name: "idle" },
+    offsetsSize: { width: 640, height: 300 },
     diagramPointer: null,
     refused: null,
     save: { baseVersion: version, savedDocument: document, status: "idle", message: null, conflictVersion: null },
@@ -46,13 +46,13 @@ function initialData({ document, version, readOnly }: EditorStoreOptions): Edito
 
 export function createEditorStore(options: EditorStoreOptions): EditorStore {
   return createStore<EditorState>()((set, get) => {
-    const tool: ToolContext = { get, transition: (labTool) => set({ labTool }) };
+    const tool: ToolContext = { get, transition: (offsetsTool) => set({ offsetsTool }) };
     const changeDocument = (document: ScenarioDocument, extra: Partial<EditorData> = {}) =>
       set((s) => (document === s.document ? extra : { ...extra, document, revision: s.revision + 1 }));
 
     return {
       ...initialData(options),
-      labView: createLabViewSelectors(),
+      offsets: createOffsetsSelectors(),
       diagramScene: memoizeLast(createSceneBuilder()),
 
       edit(label, recipe) {
@@ -74,10 +74,10 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
         set({ transaction: { label, mark: state.document } });
       },
 
-      dragTo(recipe, labTool) {
+      dragTo(recipe, offsetsTool) {
         const { transaction } = get();
-        if (!transaction) return set({ labTool });
-        changeDocument(recipe(transaction.mark), { labTool });
+        if (!transaction) return set({ offsetsTool });
+        changeDocument(recipe(transaction.mark), { offsetsTool });
       },
 
       commit() {
@@ -109,22 +109,22 @@ export function createEditorStore(options: EditorStoreOptions): EditorStore {
 
       select: (selection) => set({ selection }),
       setHover: (hover) => set({ hover }),
-      setLabViewSize: (labViewSize) => {
-        const current = get().labViewSize;
-        if (current.width !== labViewSize.width || current.height !== labViewSize.height) set({ labViewSize });
+      setOffsetsSize: (offsetsSize) => {
+        const current = get().offsetsSize;
+        if (current.width !== offsetsSize.width || current.height !== offsetsSize.height) set({ offsetsSize });
       },
       setDiagramPointer: (diagramPointer) => set({ diagramPointer }),
 
-      labPointerDown: (event) => dragHandleTool.pointerDown(tool, event),
-      labPointerMove: (event) => dragHandleTool.pointerMove(tool, event),
-      labPointerUp: (event) => dragHandleTool.pointerUp(tool, event),
-      labCancel: () => dragHandleTool.cancel(tool),
-      labKeyDown: (event) => dragHandleTool.keyDown(tool, event),
+      offsetsPointerDown: (event) => dragHandleTool.pointerDown(tool, event),
+      offsetsPointerMove: (event) => dragHandleTool.pointerMove(tool, event),
+      offsetsPointerUp: (event) => dragHandleTool.pointerUp(tool, event),
+      offsetsCancel: () => dragHandleTool.cancel(tool),
+      offsetsKeyDown: (event) => dragHandleTool.keyDown(tool, event),
 
       loadDocument(document, version) {
-        const { readOnly, labViewSize, sweep, revision } = get();
+        const { readOnly, offsetsSize, sweep, revision } = get();
         const fresh = initialData({ document, version, readOnly });
-        set({ ...fresh, labViewSize, sweep: { ...fresh.sweep, parameter: sweep.parameter }, revision: revision + 1 });
+        set({ ...fresh, offsetsSize, sweep: { ...fresh.sweep, parameter: sweep.parameter }, revision: revision + 1 });
       },
 
       saveStarted: () => set((s) => ({ save: { ...s.save, status: "saving", message: null } })),

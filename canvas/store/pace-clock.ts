@@ -1,6 +1,6 @@
 /**
  * A clock for what follows a drag at a reading pace (the editor's panels, components/editor/usePacedDuringDrag.ts):
- * while a Lab view handle is dragged it ticks at most every `everyMs`, only when the editor changed, and once more
+ * while an Offsets handle is dragged it ticks at most every `everyMs`, only when the editor changed, and once more
  * after the last change (nothing is dropped); outside a drag it is still. No React: it observes an editor store.
  */
 import type { EditorStore } from "./createEditorStore";
@@ -25,7 +25,7 @@ export function createPaceClock(store: EditorStore, everyMs: number): PaceClock 
     listeners.forEach((listener) => listener());
   };
   const stopObserving = store.subscribe((s, prev) => {
-    if (s.labTool.name !== "dragging") {
+    if (s.offsetsTool.name !== "dragging") {
       if (timer !== null) clearTimeout(timer);
       timer = null;
       return;

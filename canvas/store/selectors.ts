@@ -1,6 +1,6 @@
 /**
  * Derived values for components, memoised on the references they come from so `useStore(store, selector)` sees a
- * stable value until something it depends on changes. The Lab view's own are in lab-view-selectors.ts.
+ * stable value until something it depends on changes. The Offsets panel's own are in offsets-selectors.ts.
  */
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { memoizeLast } from "../kernels/memoize";

@@ -2,13 +2,13 @@
 import type { DiagramPoint } from "@/physics/backgrounds";
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepResult } from "../compute-client";
-import type { DragStart, ProtocolPlan } from "../kernels/lab-view/drag-plan";
-import type { HandleId } from "../kernels/lab-view/handles";
-import type { LabKeyEvent, LabPointerEvent, LabToolState } from "../tools/lab-tool";
+import type { DragStart, ProtocolPlan } from "../kernels/offsets/drag-plan";
+import type { HandleId } from "../kernels/offsets/handles";
+import type { OffsetsKeyEvent, OffsetsPointerEvent, OffsetsToolState } from "../tools/offsets-tool";
 import type { History } from "./history";
-import type { LabViewSelectors } from "./lab-view-selectors";
+import type { OffsetsSelectors } from "./offsets-selectors";
 
-export type { LabToolState };
+export type { OffsetsToolState };
 import type { SceneOutcome } from "../kernels/diagram/scene";
 
 
@@ -55,8 +55,8 @@ export interface EditorData {
   transaction: { label: string; mark: ScenarioDocument } | null;
   selection: HandleId | null;
   hover: HandleId | null;
-  labTool: LabToolState;
-  labViewSize: { width: number; height: number };
+  offsetsTool: OffsetsToolState;
+  offsetsSize: { width: number; height: number };
   diagramPointer: DiagramPoint | null;
   /** The last edit the editor refused, with why; cleared by the next accepted edit. */
   refused: { label: string; issues: SchemaIssue[] } | null;
@@ -74,7 +74,7 @@ export interface EditorActions {
   begin(label: string): void;
   /** One frame of a drag: the step of the edit under way (computed from the document at the mark) and the Lab
    *  tool's new state, set together. */
-  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, labTool: LabToolState): void;
+  dragTo(recipe: (mark: ScenarioDocument) => ScenarioDocument, offsetsTool: OffsetsToolState): void;
   /** Finish the edit under way as one undo step. */
   commit(): void;
   /** Abandon the edit under way: the document returns to the mark. */
@@ -83,15 +83,15 @@ export interface EditorActions {
   redo(): void;
   select(handle: HandleId | null): void;
   setHover(handle: HandleId | null): void;
-  setLabViewSize(size: { width: number; height: number }): void;
+  setOffsetsSize(size: { width: number; height: number }): void;
   setDiagramPointer(point: DiagramPoint | null): void;
-  labPointerDown(event: LabPointerEvent): void;
-  labPointerMove(event: LabPointerEvent): void;
-  labPointerUp(event: LabPointerEvent): void;
+  offsetsPointerDown(event: OffsetsPointerEvent): void;
+  offsetsPointerMove(event: OffsetsPointerEvent): void;
+  offsetsPointerUp(event: OffsetsPointerEvent): void;
   /** Escape, or the pointer lost: cancel a drag. */
-  labCancel(): void;
+  offsetsCancel(): void;
   /** Returns true when the key was used (so the caller can prevent its default). */
-  labKeyDown(event: LabKeyEvent): boolean;
+  offsetsKeyDown(event: OffsetsKeyEvent): boolean;
   /** Replace the document with the server's (reload after a conflict): a new base, a fresh history. */
   loadDocument(document: ScenarioDocument, version: number): void;
   saveStarted(): void;
@@ -110,7 +110,7 @@ export interface EditorActions {
 
 /** Memoised derived values of this store (one set per store, so editors never share a cache). */
 export interface EditorDerived {
-  labView: LabViewSelectors;
+  offsets: OffsetsSelectors;
   /** The Diagram's scene for a document (the same document gives the same object; the backdrop survives drags). */
   diagramScene(document: ScenarioDocument): SceneOutcome;
 }

@@ -48,7 +48,7 @@ function Choice<T extends string>({ label, value, options, onChange, disabled, n
   );
 }
 
-/** What the Parameters set: everything but the protocol (so a drag in the Lab view leaves this panel alone). */
+/** What the Parameters set: everything but the protocol (so a drag in the Offsets panel leaves this panel alone). */
 type PhysicalSetup = Pick<ScenarioDocument, "background" | "lab" | "source" | "separation">;
 
 function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {

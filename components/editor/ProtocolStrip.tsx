@@ -2,13 +2,13 @@
 
 /**
  * The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape; for a
- * formula profile, its expression and duration. A sampled profile is shown in the Lab view and not edited here.
+ * formula profile, its expression and duration. A sampled profile is shown in the Offsets panel and not edited here.
  */
 import { memo, useDeferredValue } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { withFormula, withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
-import type { HandleId } from "@/canvas/kernels/lab-view/handles";
-import { segmentShares } from "@/canvas/kernels/lab-view/viewport";
+import type { HandleId } from "@/canvas/kernels/offsets/handles";
+import { segmentShares } from "@/canvas/kernels/offsets/viewport";
 import type { SegmentName } from "@/canvas/kernels/timeline";
 import { rampShapeSchema, type ProtocolSpec, type RampShape } from "@/physics/scenario/schema";
 import { formatQuantity } from "@/physics/units";
@@ -112,7 +112,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
         <StripHeading />
         <p className="rounded border border-rule p-3 text-sm text-ink-soft" data-testid="sampled-profile">
           A sampled profile of {protocol.samples.length.toLocaleString("en")} samples ({protocol.interpolation === "linear" ? "linear" : "cubic-spline"}{" "}
-          interpolation), shown in the Lab view; its samples are not edited here.
+          interpolation), shown in the Offsets panel; its samples are not edited here.
         </p>
       </section>
     );

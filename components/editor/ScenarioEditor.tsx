@@ -2,7 +2,7 @@
 
 /**
  * The scenario editor, Branchline's main screen: loads the scenario and the caller's rights in the project, then
- * mounts one editor store (read-only for a viewer) with the Diagram, Lab view, Protocol strip, Parameters, Budget
+ * mounts one editor store (read-only for a viewer) with the Diagram, Offsets, Protocol strip, Parameters, Budget
  * and Sweep around it.
  */
 import Link from "next/link";
@@ -19,7 +19,7 @@ import { BudgetPanel } from "./BudgetPanel";
 import { ConflictDialog } from "./ConflictDialog";
 import { DiagramPanel } from "./DiagramPanel";
 import { EditorToolbar } from "./EditorToolbar";
-import { LabViewPanel } from "./LabViewPanel";
+import { OffsetsPanel } from "./OffsetsPanel";
 import { NewerVersionBanner } from "./NewerVersionBanner";
 import { ParametersPanel } from "./ParametersPanel";
 import { ProtocolStrip } from "./ProtocolStrip";
@@ -104,7 +104,7 @@ function EditorBody({
       <NewerVersionBanner projectId={project.id} scenarioId={scenario.id} title={scenario.title} editPath={editPath} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <DiagramPanel />
-        <LabViewPanel />
+        <OffsetsPanel />
       </div>
       <div className="space-y-2">
         <ProtocolStrip />

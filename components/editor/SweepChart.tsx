@@ -5,7 +5,7 @@
  * minor ticks between, one unit per axis named in its title, labels at 13 px, and the hover readout above the
  * plot rather than over it. One curve, so no legend (the marker and the dot are explained under the chart). Drawn again only when the sweep, the
  * parameter or the read-only state changes: the "now" marker reads the scenario's current value from the store
- * itself, so a drag in the Lab view moves one SVG line, not the whole chart.
+ * itself, so a drag in the Offsets panel moves one SVG line, not the whole chart.
  */
 import { memo, useMemo, useState } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis, usePlotArea, useXAxisScale, useYAxisScale } from "recharts";

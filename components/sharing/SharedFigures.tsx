@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * The figures of a shared scenario: the editor's Diagram, Lab view, Protocol strip and Budget, mounted on a
+ * The figures of a shared scenario: the editor's Diagram, Offsets, Protocol strip and Budget, mounted on a
  * read-only editor store that never saves (nothing here can write), with the Budget the server computed; and
  * Export, so that the link holder can take the figure, the numbers and the scenario file away.
  */
@@ -9,7 +9,7 @@ import { useEffect } from "react";
 import { EditorProvider, useEditorStore } from "@/canvas/EditorProvider";
 import { BudgetPanel } from "@/components/editor/BudgetPanel";
 import { DiagramPanel } from "@/components/editor/DiagramPanel";
-import { LabViewPanel } from "@/components/editor/LabViewPanel";
+import { OffsetsPanel } from "@/components/editor/OffsetsPanel";
 import { ProtocolStrip } from "@/components/editor/ProtocolStrip";
 import { DiagramSizeProvider } from "@/components/export/diagram-size";
 import { ExportMenu } from "@/components/export/ExportMenu";
@@ -47,7 +47,7 @@ export function SharedFigures({
           </div>
           <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
             <DiagramPanel />
-            <LabViewPanel />
+            <OffsetsPanel />
           </div>
           <ProtocolStrip />
           <div className="max-w-3xl">

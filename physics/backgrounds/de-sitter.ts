@@ -31,6 +31,22 @@ export function deSitterPositionAtProperDistance(properDistanceMetres: number, h
   };
 }
 
+/** How the static patch is scaled on the diagram: the global conformal chart, or with the lab's worldline through its middle. */
+export type DeSitterDiagramFrame = "global" | "lab-centred";
+
+/**
+ * The rate k (s⁻¹) of the diagram's squeeze (2/π) arctan sinh(k w/c) of both null coordinates. "global": k = H, the
+ * global conformal chart. "lab-centred": k = c asinh(1)/r*_lab, so the lab's worldline crosses t = 0 at X = ½, the
+ * middle of the static patch, instead of hugging the pole when the lab is near the centre or the horizons' crossing
+ * when it is near the horizon. Any increasing squeeze of u and v alike keeps light at 45°, the pole r = 0 on X = 0
+ * (u = v there) and the horizons on the diagonals (the squeeze's limits are ±1 whatever k is). A lab at the centre
+ * keeps the global chart.
+ */
+export function deSitterDiagramRatePerSecond(hubbleRatePerSecond: number, labTortoiseMetres: number, frame: DeSitterDiagramFrame): number {
+  if (frame === "global" || !(labTortoiseMetres > 0)) return hubbleRatePerSecond;
+  return (c * Math.asinh(1)) / labTortoiseMetres;
+}
+
 /**
  * A static lab in the de Sitter static patch, ds² = −(1 − H²r²/c²) c²dt² + dr²/(1 − H²r²/c²) + r²dΩ²
  * (e.g. Gibbons & Hawking, Phys. Rev. D 15, 2738 (1977)), t normalised at the centre.
@@ -45,8 +61,11 @@ export function deSitterPositionAtProperDistance(properDistanceMetres: number, h
  *   X = 2χ/π, so the Penrose square is |T| ≤ 1, 0 ≤ X ≤ 2 and the static patch its left quarter X < 1 − |T|, with
  *   H⁺ and H⁻ on the diagonals through (0, 1). From the hyperboloid embedding, η ± χ = 2 arctan e^{H(ct ± r*)/c} − π/2.
  */
-export function makeDeSitter(hubbleRatePerSecond: number, position: StaticLabPosition): Background {
+export function makeDeSitter(hubbleRatePerSecond: number, position: StaticLabPosition, frame: DeSitterDiagramFrame = "global"): Background {
   const horizonRadiusMetres = c / hubbleRatePerSecond;
+  const tortoiseMetres = (rMetres: number) =>
+    rMetres >= 0 && rMetres < horizonRadiusMetres ? horizonRadiusMetres * Math.atanh(rMetres / horizonRadiusMetres) : Number.NaN;
+  const squeezeRate = deSitterDiagramRatePerSecond(hubbleRatePerSecond, tortoiseMetres(position.rMetres), frame);
   const precision = nearHorizonPrecisionFlag(position.lapse, "1 − H²r²/c²");
   return staticLabBackground({
     kind: "de-sitter",
@@ -54,11 +73,10 @@ export function makeDeSitter(hubbleRatePerSecond: number, position: StaticLabPos
     position,
     accelerationMetresPerSecondSquared: (hubbleRatePerSecond ** 2 * position.rMetres) / position.lapse,
     chart: {
-      tortoiseMetres: (rMetres) =>
-        rMetres >= 0 && rMetres < horizonRadiusMetres ? horizonRadiusMetres * Math.atanh(rMetres / horizonRadiusMetres) : Number.NaN,
+      tortoiseMetres,
       radiusFromTortoiseMetres: (rStar) => (rStar >= 0 ? horizonRadiusMetres * Math.tanh(rStar / horizonRadiusMetres) : null),
     },
-    squeezes: { p: gudermannianSqueeze(hubbleRatePerSecond), q: gudermannianSqueeze(hubbleRatePerSecond) },
+    squeezes: { p: gudermannianSqueeze(squeezeRate), q: gudermannianSqueeze(squeezeRate) },
     flags: precision ? [precision] : [],
   });
 }

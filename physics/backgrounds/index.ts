@@ -3,7 +3,7 @@
  */
 import { c } from "../constants";
 import { backgroundSchema, labPlacementSchema, type BackgroundSpec, type LabPlacement } from "../scenario/schema";
-import { deSitterPositionAtProperDistance, deSitterPositionAtRadius, makeDeSitter } from "./de-sitter";
+import { deSitterPositionAtProperDistance, deSitterPositionAtRadius, makeDeSitter, type DeSitterDiagramFrame } from "./de-sitter";
 import { BackgroundInputError } from "./errors";
 import { makeMinkowski } from "./minkowski";
 import { makeRindler } from "./rindler";
@@ -23,12 +23,15 @@ export { blackHoleInteriorToDiagram, singularityCurve } from "./schwarzschild-in
 export { horizonTemperatureKelvin } from "./horizon-temperature";
 export { schwarzschildRadiusMetres } from "./schwarzschild-geometry";
 export type { SchwarzschildDiagramFrame } from "./schwarzschild";
+export { deSitterDiagramRatePerSecond, type DeSitterDiagramFrame } from "./de-sitter";
 
 export interface MakeBackgroundOptions {
   /** Minkowski only: the length L of the diagram's arctan((ct ± r)/L); default one light-second. */
   minkowskiDiagramScaleMetres?: number;
   /** Schwarzschild only: "lab-centred" puts the lab's worldline through the middle of the exterior (schwarzschild.ts). */
   schwarzschildDiagramFrame?: SchwarzschildDiagramFrame;
+  /** de Sitter only: "lab-centred" puts the lab's worldline through the middle of the static patch (de-sitter.ts). */
+  deSitterDiagramFrame?: DeSitterDiagramFrame;
 }
 
 const placementPath = "lab.placement";
@@ -68,7 +71,7 @@ export function makeBackground(background: BackgroundSpec, lab: LabPlacement, op
       return makeSchwarzschild(horizonRadiusMetres, schwarzschildPosition(background, lab, horizonRadiusMetres), options.schwarzschildDiagramFrame);
     }
     case "de-sitter":
-      return makeDeSitter(background.hubbleRatePerSecond, deSitterPosition(background.hubbleRatePerSecond, lab));
+      return makeDeSitter(background.hubbleRatePerSecond, deSitterPosition(background.hubbleRatePerSecond, lab), options.deSitterDiagramFrame);
   }
 }
 

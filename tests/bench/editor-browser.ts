@@ -2,7 +2,7 @@
  * Browser bench for the editor: prints figures, asserts nothing on time. In Debian's Chromium it signs in as the
  * demo owner, opens a copy of a seeded horizon scenario (the first Schwarzschild one with a segment protocol; the copy
  * is deleted afterwards, so the demo's scenarios and their history are left as they were) and drags the
- * recombination handle in the Lab view for two seconds, one mouse move per 60 Hz frame period, back and forth. The page
+ * recombination handle in the Offsets panel for two seconds, one mouse move per 60 Hz frame period, back and forth. The page
  * records every requestAnimationFrame delta and, where the browser reports them, long tasks (PerformanceObserver
  * "longtask"); the editor leaves a performance measure "branchline:budget-roundtrip" for every compute-worker request
  * (sent → answer back on the main thread), which the bench reads afterwards.
@@ -159,7 +159,7 @@ async function stopRecording(page: Page) {
  * on a clock of its own (waiting for each move's answer before the next would let a busy page slow the pointer down).
  */
 async function dragRecombination(page: Page): Promise<number> {
-  const lab = page.getByTestId("lab-view");
+  const lab = page.getByTestId("offsets");
   await lab.scrollIntoViewIfNeeded();
   const handles = JSON.parse((await lab.getAttribute("data-handles")) ?? "[]") as { id: string; x: number }[];
   const handle = handles.find((h) => h.id === "recombination-end");
@@ -266,7 +266,7 @@ async function showSweep(page: Page): Promise<void> {
 /** Both drags on the scenario at `path`, printed. */
 async function benchScenario(page: Page, scenario: { path: string; title: string }, slowdown: number): Promise<void> {
   await page.goto(`${BASE_URL}${scenario.path}`);
-  await page.getByTestId("lab-view").waitFor();
+  await page.getByTestId("offsets").waitFor();
   const cdp = await page.context().newCDPSession(page);
   await cdp.send("Performance.enable");
   if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });

@@ -31,21 +31,21 @@ function scenarios(): Record<string, ScenarioDocument> {
 
 for (const [name, document] of Object.entries(scenarios())) {
   const store = createEditorStore({ document, version: 1, readOnly: false });
-  store.getState().setLabViewSize({ width: 700, height: 300 });
+  store.getState().setOffsetsSize({ width: 700, height: 300 });
   const scene = createSceneBuilder();
   scene(document);
-  const handle = store.getState().labView.handles(store.getState()).find((h) => h.id === "recombination-end")!;
+  const handle = store.getState().offsets.handles(store.getState()).find((h) => h.id === "recombination-end")!;
   const y = 150;
-  store.getState().labPointerDown({ x: handle.x, y, shiftKey: false });
+  store.getState().offsetsPointerDown({ x: handle.x, y, shiftKey: false });
   const frame: number[] = [];
   const drawn: number[] = [];
   const computed: number[] = [];
   for (let i = 1; i <= FRAMES; i++) {
-    frame.push(time(() => store.getState().labPointerMove({ x: handle.x + (i % 120), y, shiftKey: false })));
+    frame.push(time(() => store.getState().offsetsPointerMove({ x: handle.x + (i % 120), y, shiftKey: false })));
     drawn.push(time(() => scene(store.getState().document)));
     if (i % 10 === 0) computed.push(time(() => computeScenario(store.getState().document)));
   }
-  store.getState().labPointerUp({ x: handle.x, y, shiftKey: false });
+  store.getState().offsetsPointerUp({ x: handle.x, y, shiftKey: false });
   const backdrop = median(Array.from({ length: 7 }, () => time(() => buildDiagramBackdrop(document))));
   console.log(
     `${name.padEnd(14)} store frame ${median(frame).toFixed(3)} ms, scene on kept backdrop ${median(drawn).toFixed(2)} ms, ` +

@@ -12,7 +12,7 @@ async function currentBudget(page: Page) {
 }
 
 async function dragHandle(page: Page, handle: string, dx: number) {
-  const lab = page.getByTestId("lab-view");
+  const lab = page.getByTestId("offsets");
   await lab.scrollIntoViewIfNeeded();
   const handles = JSON.parse((await lab.getAttribute("data-handles")) ?? "[]") as { id: string; x: number }[];
   const target = handles.find((h) => h.id === handle);
@@ -39,7 +39,7 @@ test("dragging the recombination handle trades the ramps' quanta for the horizon
   const { stamp, owner, project, scenario } = await ownerWithScenario(browser, "Editor", "Horizon budget", "Hovering lab");
 
   await owner.goto(editorPath(project.id, scenario.id));
-  await expect(owner.getByTestId("lab-view")).toBeVisible();
+  await expect(owner.getByTestId("offsets")).toBeVisible();
   const first = await currentBudget(owner);
   expect(first.ramps).toBeGreaterThan(0);
   expect(first.horizon).toBeGreaterThan(0);
@@ -71,7 +71,7 @@ test("dragging the recombination handle trades the ramps' quanta for the horizon
   expect((await owner.request.post(`/api/projects/${project.id}/members`, { data: { email: viewerEmail, role: "viewer" } })).status()).toBe(201);
   await viewer.goto(editorPath(project.id, scenario.id));
   await expect(viewer.getByTestId("read-only")).toBeVisible();
-  await expect(viewer.getByTestId("lab-view")).toHaveAttribute("data-handles", "[]");
+  await expect(viewer.getByTestId("offsets")).toHaveAttribute("data-handles", "[]");
   await expect(viewer.getByTestId("handle-field-recombination-end")).toBeDisabled();
   await expect(viewer.getByRole("button", { name: /^Undo/ })).toHaveCount(0);
 });
@@ -79,7 +79,7 @@ test("dragging the recombination handle trades the ramps' quanta for the horizon
 test("a save that meets someone else's newer version asks what to do, and keeping mine makes a new scenario without touching theirs", async ({ browser }) => {
   const { owner, project, scenario } = await ownerWithScenario(browser, "Conflict", "Conflicts", "Shared lab");
   await owner.goto(editorPath(project.id, scenario.id));
-  await expect(owner.getByTestId("lab-view")).toBeVisible();
+  await expect(owner.getByTestId("offsets")).toBeVisible();
 
   // Someone else saves first (here, a rename through the API from the same account).
   const elsewhere = await owner.request.put(`/api/projects/${project.id}/scenarios/${scenario.id}`, { data: { version: scenario.version, title: "Shared lab, renamed" } });
@@ -123,11 +123,11 @@ test("a newer version saved elsewhere is announced before any save meets it, and
   await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 1}`);
 });
 
-test("the keyboard walks the Lab view's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
+test("the keyboard walks the Offsets panel's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
   const { owner, project, scenario: segments, scenarioIn } = await ownerWithScenario(browser, "Keyboard", "Keyboard and formulas", "Hovering lab");
 
   await owner.goto(editorPath(project.id, segments.id));
-  const lab = owner.getByTestId("lab-view");
+  const lab = owner.getByTestId("offsets");
   await expect(lab).toBeVisible();
   await lab.focus();
   const walked: string[] = [];
@@ -136,7 +136,7 @@ test("the keyboard walks the Lab view's handles in protocol order, naming each, 
     walked.push((await lab.getAttribute("data-selected")) ?? "");
   }
   expect(walked).toEqual(["separation-start", "separation-end", "separation-size", "hold-end", "recombination-end"]);
-  await expect(owner.getByTestId("lab-view-selection")).toHaveText("End of recombination selected: 1.100 s from the start of the separation.");
+  await expect(owner.getByTestId("offsets-selection")).toHaveText("End of recombination selected: 1.100 s from the start of the separation.");
   await owner.keyboard.press("ArrowRight");
   await expect(owner.getByTestId("handle-field-recombination-end")).not.toHaveValue("1.100 s");
   await owner.keyboard.press("Escape");
@@ -167,7 +167,7 @@ test("the keyboard walks the Lab view's handles in protocol order, naming each, 
 test("a sweep of the recombination time marks the scenario's value, follows a drag without re-running, and a click on a point sets it in one undo step", async ({ browser }) => {
   const { owner, project, scenario } = await ownerWithScenario(browser, "Sweep", "Sweeps", "Swept lab");
   await owner.goto(editorPath(project.id, scenario.id));
-  await expect(owner.getByTestId("lab-view")).toBeVisible();
+  await expect(owner.getByTestId("offsets")).toBeVisible();
   await currentBudget(owner);
 
   await owner.getByTestId("run-sweep").click();

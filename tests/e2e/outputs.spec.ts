@@ -2,6 +2,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { readFile } from "node:fs/promises";
 import { createServer } from "node:http";
 import type { AddressInfo } from "node:net";
+import { FIGURE_PALETTES } from "@/canvas/theme";
 import { blackHoleScenario, signedInAs } from "./helpers";
 
 // The machine running these is small and shared: every wait is generous.
@@ -128,6 +129,20 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   await expect(frameCanvas).toBeVisible(slow);
   await expect.poll(() => frameCanvas.evaluate(inkedPixels), slow).toBeGreaterThan(2000);
   await expect(frame.getByRole("banner")).toHaveCount(0);
+
+  // Dark, with large labels: the Diagram's canvas is the frame's size (the controls lie over its edge, the figure
+  // keeps clear of them), and the key's swatches and words are the dark figure palette's.
+  const fit = await frameCanvas.evaluate((canvas) => ({ width: canvas.clientWidth, height: canvas.clientHeight, frameWidth: innerWidth, frameHeight: innerHeight }));
+  expect(Math.abs(fit.width - fit.frameWidth)).toBeLessThanOrEqual(2);
+  expect(Math.abs(fit.height - fit.frameHeight)).toBeLessThanOrEqual(2);
+  const key = frame.getByTestId("diagram-legend");
+  const swatches = await key.locator("[data-swatch]").evaluateAll((nodes) => nodes.map((n) => n.getAttribute("data-swatch")));
+  const dark = FIGURE_PALETTES.dark;
+  expect(swatches.slice(0, 2)).toEqual([dark.branchA, dark.branchB]);
+  expect(swatches).toContain(dark.horizonTint);
+  expect(swatches).not.toContain(FIGURE_PALETTES.light.branchB);
+  const inkOf = (hex: string) => `rgb(${[1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)).join(", ")})`;
+  await expect(key).toHaveCSS("color", inkOf(dark.inkSoft));
 
   // Scrubbing back to the middle of the hold: the ramps' quanta and the hold's into H⁺, fewer than at the end.
   const slider = frame.getByLabel("Lab time");

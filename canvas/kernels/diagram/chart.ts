@@ -3,14 +3,14 @@
  * tortoise coordinate and time over which curves are sampled so that they reach the corners of the diagram.
  */
 import { c } from "@/physics/constants";
-import { BackgroundInputError, makeBackground, type Background } from "@/physics/backgrounds";
+import { BackgroundInputError, deSitterDiagramRatePerSecond, makeBackground, type Background } from "@/physics/backgrounds";
 import { protocolDurationSeconds as protocolLengthSeconds } from "@/physics/scenario/ranges";
 import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import { ladderStepAtLeast } from "../round-numbers";
 
 export interface DiagramChart {
   background: Background;
-  /** Length over which the diagram's squeeze changes by order one: L for Minkowski, c/κ with a horizon (metres). */
+  /** Length over which the diagram's squeeze changes by order one: L for Minkowski, c/κ with a horizon, c/k of the de Sitter frame (metres). */
   nullScaleMetres: number;
   /** Tortoise coordinates of the lab's static region to sample, metres (cut where the diagram has converged). */
   tortoiseRange: [number, number];
@@ -69,13 +69,21 @@ export function makeDiagramChart(document: ScenarioDocument): ChartOutcome {
       minkowskiDiagramScaleMetres: minkowskiScale,
       // The lab's worldline through the middle of the exterior, whatever its radius (schwarzschild.ts).
       schwarzschildDiagramFrame: "lab-centred",
+      // The same for the lab in the de Sitter static patch (de-sitter.ts).
+      deSitterDiagramFrame: "lab-centred",
     });
   } catch (error) {
     if (error instanceof BackgroundInputError) return { ok: false, issue: { path: error.path, message: error.message } };
     throw error;
   }
-  const scale = background.horizon ? c / background.horizon.surfaceGravityPerSecond : minkowskiScale;
   const labTortoiseMetres = background.tortoiseMetres(background.labRadiusMetres);
+  // The length over which the diagram's squeeze converges: c/κ, or in de Sitter the lab-centred frame's own scale.
+  const scale =
+    background.kind === "de-sitter" && background.horizon
+      ? c / deSitterDiagramRatePerSecond(background.horizon.surfaceGravityPerSecond, labTortoiseMetres, "lab-centred")
+      : background.horizon
+        ? c / background.horizon.surfaceGravityPerSecond
+        : minkowskiScale;
   const reach = REACH * scale;
   // The arctan squeeze of Minkowski converges slowly (as 1/x), so its ranges reach further.
   const stretch = background.kind === "minkowski" ? 40 : 1;

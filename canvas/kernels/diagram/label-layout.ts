@@ -1,5 +1,5 @@
 /**
- * The one label layout of the Diagram and the Lab view (its time axis: kernels/lab-view/axis-ticks.ts). Each label offers candidate spots (its preferred one first);
+ * The one label layout of the Diagram and the Offsets panel (its time axis: kernels/offsets/axis-ticks.ts). Each label offers candidate spots (its preferred one first);
  * in priority order, each takes the first spot where its box stays on the stage, clear of every label already
  * placed and of every obstacle (worldlines, horizons: polylines in stage pixels, each with a clearance). A label
  * with no such spot is dropped, never drawn over another label or a worldline.

@@ -45,7 +45,7 @@ export function labRadiusLabel(kind: "minkowski" | "schwarzschild" | "rindler" |
 }
 
 /**
- * Labels of the protocol's events: the lab's proper time from the start of the separation, as the Lab view counts
+ * Labels of the protocol's events: the lab's proper time from the start of the separation, as the Offsets panel counts
  * it, with as many digits as it takes to tell neighbours apart (10 s and 10.01 s, not "10 s" twice).
  */
 export function labTimeLabels(tauSeconds: number[]): string[] {

@@ -13,7 +13,7 @@
  * the radius it reaches whichever way it moves (both branches of a symmetric split fall on one curve there).
  *
  * The picture is centred on the protocol (drawn Killing time 0 is its middle; a time translation is a symmetry of
- * every background here), while times are labelled from the start of the separation, as in the Lab view. Near a horizon a protocol of many e-folding times 1/κ would crowd into i⁻ and
+ * every background here), while times are labelled from the start of the separation, as in the Offsets panel. Near a horizon a protocol of many e-folding times 1/κ would crowd into i⁻ and
  * i⁺, and one much shorter than 1/κ would shrink to a point, so there the time along the branches is drawn
  * compressed or stretched until it spans a readable stretch of the worldline, and the diagram says so; Minkowski
  * needs neither (its scale L is chosen from the protocol's duration, see chart.ts).
@@ -40,7 +40,7 @@ const DRAWN_REACH = 0.6;
 const MIN_PIECE_SHARE = 0.2;
 
 /**
- * A piecewise-linear schedule of lab time, as the Lab view's axis has: each stretch between two of the protocol's
+ * A piecewise-linear schedule of lab time, as the Offsets panel's axis has: each stretch between two of the protocol's
  * events (ramps, hold) is drawn at least MIN_PIECE_SHARE of the whole, so a 10 ms ramp beside a 1000 s hold is not
  * a point on the worldline (and the branch has the room to move apart while staying timelike). The branches are then
  * the worldlines of a protocol with those drawn durations; the slices' labels give the true times.
@@ -68,16 +68,27 @@ function timeWarp(events: number[], totalSeconds: number): TimeWarp | undefined 
   return { events, drawnEvents };
 }
 
+/**
+ * x through the piecewise-linear map taking each of `from` to the matching one of `to` (both start at 0 and end at the
+ * protocol's length); unchanged before and after the protocol.
+ */
+function alongPieces(from: number[], to: number[], x: number): number {
+  const last = from.length - 1;
+  if (x <= 0 || x >= from[last]) return x;
+  let i = 0;
+  while (i < last - 1 && x > from[i + 1]) i++;
+  const s = (x - from[i]) / (from[i + 1] - from[i]);
+  return to[i] + s * (to[i + 1] - to[i]);
+}
+
 /** Lab time as drawn: through the warp inside the protocol, unchanged before and after it. */
 function warpedTime(warp: TimeWarp | undefined, tauSeconds: number): number {
-  if (!warp) return tauSeconds;
-  const { events, drawnEvents } = warp;
-  const last = events.length - 1;
-  if (tauSeconds <= 0 || tauSeconds >= events[last]) return tauSeconds;
-  let i = 0;
-  while (i < last - 1 && tauSeconds > events[i + 1]) i++;
-  const s = (tauSeconds - events[i]) / (events[i + 1] - events[i]);
-  return drawnEvents[i] + s * (drawnEvents[i + 1] - drawnEvents[i]);
+  return warp ? alongPieces(warp.events, warp.drawnEvents, tauSeconds) : tauSeconds;
+}
+
+/** The inverse of warpedTime: the lab time drawn at a warped instant. */
+function unwarpedTime(warp: TimeWarp | undefined, drawnSeconds: number): number {
+  return warp ? alongPieces(warp.drawnEvents, warp.events, drawnSeconds) : drawnSeconds;
 }
 
 /** Drawn offset of the branches at full separation, as a fraction of the diagram's larger span (before the cap by c). */
@@ -122,6 +133,8 @@ export interface RadiationStrip {
 
 export interface ProtocolOnDiagram {
   timeScale: TimeScale;
+  /** The protocol's length in lab proper time, seconds (drawn centred on Killing time 0). */
+  totalSeconds: number;
   /** Largest distance on the diagram between a branch and the lab's worldline (diagram units); labels keep clear of it. */
   corridor: number;
   /** Start of separation, start of hold, start of recombination, end (for other protocols: each moving window's ends). */
@@ -137,6 +150,16 @@ export interface ProtocolOnDiagram {
 export function drawnTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, tauSeconds: number): number {
   const killing = (warpedTime(scale.warp, tauSeconds) - totalSeconds / 2) / chart.background.labRedshiftFactor;
   return scale.kind === "true" ? killing : killing * (scale.drawnEfolds / scale.protocolEfolds);
+}
+
+/**
+ * The inverse of drawnTime: the lab's proper time τ (seconds from the start of the separation) at the drawn Killing
+ * time t of the lab's worldline. Where the drawing is true to scale this is dτ = √(−g_tt) dt, the static lab's
+ * redshift factor; a rescaled or warped protocol is undone first, so the readout gives the lab's own clock.
+ */
+export function labProperTime(chart: DiagramChart, scale: TimeScale, totalSeconds: number, killingSeconds: number): number {
+  const killing = scale.kind === "true" ? killingSeconds : killingSeconds * (scale.protocolEfolds / scale.drawnEfolds);
+  return unwarpedTime(scale.warp, killing * chart.background.labRedshiftFactor + totalSeconds / 2);
 }
 
 function timeScaleOf(chart: DiagramChart, totalSeconds: number): TimeScale {
@@ -282,6 +305,7 @@ export function protocolOnDiagram(chart: DiagramChart, document: ScenarioDocumen
   const labels = labTimeLabels(marked);
   return {
     timeScale,
+    totalSeconds: total,
     corridor,
     slices: marked.map((tau, i) => ({ tauSeconds: tau, label: labels[i], labPoint: at(tau), points: timeCurve(chart, drawn(tau), 48) })),
     branches,

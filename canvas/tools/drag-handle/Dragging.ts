@@ -1,16 +1,16 @@
 /**
  * Drag-handle tool, dragging: every move asks the drag kernel for a plan from the document at pointer-down and
  * shows it with the tool's new state in one store update (subscribers never see one without the other); release commits the whole drag as one undo step; Escape (or a lost pointer) rolls back to the mark.
- * Tab is held back while dragging, so focus stays in the Lab view.
+ * Tab is held back while dragging, so focus stays in the Offsets panel.
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
-import { planHandleDrag } from "../../kernels/lab-view/drag-plan";
-import type { LabToolState } from "../../store/state";
-import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
+import { planHandleDrag } from "../../kernels/offsets/drag-plan";
+import type { OffsetsToolState } from "../../store/state";
+import type { OffsetsPointerEvent, ToolContext, ToolStateHandlers } from "../types";
 
-type Dragging = Extract<LabToolState, { name: "dragging" }>;
+type Dragging = Extract<OffsetsToolState, { name: "dragging" }>;
 
-function follow(ctx: ToolContext, state: Dragging, event: LabPointerEvent): void {
+function follow(ctx: ToolContext, state: Dragging, event: OffsetsPointerEvent): void {
   const plan = planHandleDrag(state.start, event, { snap: event.shiftKey });
   ctx.get().dragTo((mark) => withProtocolPlan(mark, plan), { ...state, plan });
 }

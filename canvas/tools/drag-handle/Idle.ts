@@ -1,25 +1,25 @@
 /**
  * Drag-handle tool, idle: hovering shows which handle is under the pointer; pressing on one starts a drag. From the
  * keyboard, Tab and Shift+Tab walk the handles in protocol order (past either end the selection is let go, and focus
- * leaves the Lab view), arrows nudge the selected one, Escape lets it go.
+ * leaves the Offsets panel), arrows nudge the selected one, Escape lets it go.
  */
 import { withProtocolPlan } from "../../kernels/document-edits";
-import { NUDGE_LARGE_PX, NUDGE_PX, planHandleDrag } from "../../kernels/lab-view/drag-plan";
-import { cycleHandle, HANDLE_WORDS, type HandleId, type HandlePlacement } from "../../kernels/lab-view/handles";
-import { hitTestLabView } from "../../kernels/lab-view/hit-test";
+import { NUDGE_LARGE_PX, NUDGE_PX, planHandleDrag } from "../../kernels/offsets/drag-plan";
+import { cycleHandle, HANDLE_WORDS, type HandleId, type HandlePlacement } from "../../kernels/offsets/handles";
+import { hitTestOffsets } from "../../kernels/offsets/hit-test";
 import { segmentTimes, segmentsProtocolOf } from "../../kernels/timeline";
-import type { EditorState, LabToolState } from "../../store/state";
-import type { LabPointerEvent, ToolContext, ToolStateHandlers } from "../types";
+import type { EditorState, OffsetsToolState } from "../../store/state";
+import type { OffsetsPointerEvent, ToolContext, ToolStateHandlers } from "../types";
 
 /** How far from a handle, in pixels, a press still takes it. */
 export const HIT_TOLERANCE_PX = 8;
 
-function handleUnder(state: EditorState, event: LabPointerEvent): HandlePlacement | null {
-  const selectors = state.labView;
+function handleUnder(state: EditorState, event: OffsetsPointerEvent): HandlePlacement | null {
+  const selectors = state.offsets;
   const viewport = selectors.viewport(state);
   const protocol = segmentsProtocolOf(state.document);
   if (!viewport || !protocol) return null;
-  const hit = hitTestLabView(selectors.handles(state), viewport, segmentTimes(protocol), event, HIT_TOLERANCE_PX);
+  const hit = hitTestOffsets(selectors.handles(state), viewport, segmentTimes(protocol), event, HIT_TOLERANCE_PX);
   return hit.kind === "handle" ? (selectors.handles(state).find((h) => h.id === hit.handle) ?? null) : null;
 }
 
@@ -32,7 +32,7 @@ const ARROWS: Record<string, { dx: number; dy: number }> = {
 
 /** An arrow key moves the selected handle as a pointer moved by a pixel (ten with Shift) would: one undo step each. */
 function nudge(state: EditorState, handle: HandleId, direction: { dx: number; dy: number }, large: boolean): boolean {
-  const selectors = state.labView;
+  const selectors = state.offsets;
   const viewport = selectors.viewport(state);
   const protocol = segmentsProtocolOf(state.document);
   const placement = selectors.handles(state).find((h) => h.id === handle);
@@ -46,7 +46,7 @@ function nudge(state: EditorState, handle: HandleId, direction: { dx: number; dy
   return true;
 }
 
-type Idle = Extract<LabToolState, { name: "idle" }>;
+type Idle = Extract<OffsetsToolState, { name: "idle" }>;
 
 export const Idle: ToolStateHandlers<Idle> = {
   onPointerMove(ctx: ToolContext, _state, event) {
@@ -60,7 +60,7 @@ export const Idle: ToolStateHandlers<Idle> = {
     const placement = handleUnder(state, event);
     state.select(placement?.id ?? null);
     const protocol = segmentsProtocolOf(state.document);
-    const viewport = state.labView.viewport(state);
+    const viewport = state.offsets.viewport(state);
     if (!placement || state.readOnly || !protocol || !viewport) return;
     const handle = placement.id;
     const grab = { pointer: { x: event.x, y: event.y }, handle: { x: placement.x, y: placement.axis === "distance" ? placement.y : event.y } };
@@ -75,7 +75,7 @@ export const Idle: ToolStateHandlers<Idle> = {
       return true;
     }
     if (event.key === "Tab") {
-      const onScreen = state.labView.handles(state).map((h) => h.id);
+      const onScreen = state.offsets.handles(state).map((h) => h.id);
       const next = cycleHandle(state.selection, onScreen, event.shiftKey);
       state.select(next);
       return next !== null;

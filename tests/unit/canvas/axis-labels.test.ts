@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { boxesOverlap } from "@/canvas/kernels/diagram/label-layout";
-import { TIME_LABEL_ROWS_PX, timeAxisLabels } from "@/canvas/kernels/lab-view/axis-ticks";
+import { TIME_LABEL_ROWS_PX, timeAxisLabels } from "@/canvas/kernels/offsets/axis-ticks";
 
 const layout = (ticks: { px: number; text: string }[], width = 640) =>
   timeAxisLabels({
@@ -14,7 +14,7 @@ const layout = (ticks: { px: number; text: string }[], width = 640) =>
   });
 const rowOf = (label: { box: { top: number; height: number } }) => (label.box.top + label.box.height / 2 < 200 + (TIME_LABEL_ROWS_PX[0] + TIME_LABEL_ROWS_PX[1]) / 2 + 6.6 ? 0 : 1);
 
-describe("labels under the Lab view's time axis (the Diagram's label layout)", () => {
+describe("labels under the Offsets panel's time axis (the Diagram's label layout)", () => {
   it("keep to one row while they stay clear of each other, the title at the right end of the second", () => {
     const placed = layout([{ px: 100, text: "0 s" }, { px: 200, text: "10 ms" }, { px: 500, text: "1.01 s" }]);
     expect(placed.filter((l) => l.id.startsWith("time-") && l.id !== "time-title").map(rowOf)).toEqual([0, 0, 0]);

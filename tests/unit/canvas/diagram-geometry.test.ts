@@ -144,6 +144,27 @@ describe("framing", () => {
     );
   }, 120_000);
 
+  it("puts a de Sitter lab's worldline through the middle of the static patch at t = 0, the pole on X = 0 and the horizons on the diagonals", () => {
+    fc.assert(
+      fc.property(backgrounds["de Sitter"], (document) => {
+        const scene = sceneOf(document);
+        const background = scene.chart.background;
+        const H = (document.background as { hubbleRatePerSecond: number }).hubbleRatePerSecond;
+        const pole = background.conformal.toDiagram(1e3 / H, 0);
+        // The static patch is the triangle X ≤ 1 − |T| of the Penrose square; its centre line r = 0 is X = 0.
+        expect(pole.X).toBeCloseTo(0, 12);
+        // Light along u = ct − r* = const, out to the horizon r → c/H, ends on H⁺: T + X = 1.
+        const nearHorizon = background.conformal.toDiagram(40 / H, (c / H) * (1 - 1e-12));
+        expect(nearHorizon.T + nearHorizon.X).toBeGreaterThan(1 - 1e-3);
+        if (document.lab.placement === "inertial") return;
+        const middle = background.conformal.toDiagram(0, background.labRadiusMetres);
+        expect(middle.T).toBeCloseTo(0, 12);
+        expect(middle.X).toBeCloseTo(0.5, 9);
+      }),
+      { numRuns: 60 },
+    );
+  }, 120_000);
+
   it("draws the time slices through the protocol's own events, labelled in lab time from the start of the separation", () => {
     const document = withProtocol(base, { separation: 1e-3, hold: 5e-3, recombination: 2e-3, shape: "cosine", split: "symmetric", axis: "radial" });
     const slices = sceneOf(document).protocol!.slices;

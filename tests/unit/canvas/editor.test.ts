@@ -57,25 +57,25 @@ describe("the editor object", () => {
     editor = createEditor({ document: defaultScenarioDocument(), version: 1, readOnly: false, spawnWorker: workers.spawn });
     const before = await settled(editor);
     const h = createHarness({ store: editor.store });
-    h.store.getState().setLabViewSize({ width: 800, height: 320 });
+    h.store.getState().setOffsetsSize({ width: 800, height: 320 });
 
     // Every store notification in which the drag's document or the tool's state moved; the Budget's own updates
     // (computing, ready) are not the drag's.
     let dragUpdates = 0;
     let sawDocumentWithoutPlan = false;
     const stop = h.store.subscribe((s, prev) => {
-      if (s.document !== prev.document || s.labTool !== prev.labTool) dragUpdates++;
-      if (s.document !== prev.document && s.labTool === prev.labTool) sawDocumentWithoutPlan = true;
+      if (s.document !== prev.document || s.offsetsTool !== prev.offsetsTool) dragUpdates++;
+      if (s.document !== prev.document && s.offsetsTool === prev.offsetsTool) sawDocumentWithoutPlan = true;
     });
     let { x, y } = h.grip("recombination-end");
-    h.store.getState().labPointerDown({ x, y, shiftKey: false });
+    h.store.getState().offsetsPointerDown({ x, y, shiftKey: false });
     for (let frame = 0; frame < 6; frame++) {
       x += 15;
       const before = dragUpdates;
-      h.store.getState().labPointerMove({ x, y, shiftKey: false });
+      h.store.getState().offsetsPointerMove({ x, y, shiftKey: false });
       expect(dragUpdates - before).toBe(1);
     }
-    h.store.getState().labPointerUp({ x, y, shiftKey: false });
+    h.store.getState().offsetsPointerUp({ x, y, shiftKey: false });
     stop();
     expect(sawDocumentWithoutPlan).toBe(false);
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { cycleHandle, PROTOCOL_ORDER } from "@/canvas/kernels/lab-view/handles";
+import { cycleHandle, PROTOCOL_ORDER } from "@/canvas/kernels/offsets/handles";
 import type { SegmentsProtocol } from "@/canvas/kernels/timeline";
 import { createHarness, framesOf, schwarzschildDocument } from "./harness";
 
@@ -12,7 +12,7 @@ const walk = (h: ReturnType<typeof createHarness>, shiftKey: boolean) => {
   return seen;
 };
 
-describe("walking the Lab view's handles with Tab", () => {
+describe("walking the Offsets panel's handles with Tab", () => {
   it("selects the handles in the order the protocol meets them, the plateau's height between the end of separation and the end of the hold", () => {
     const h = createHarness();
     expect(walk(h, false)).toEqual(["separation-start", "separation-end", "separation-size", "hold-end", "recombination-end"]);
@@ -29,7 +29,7 @@ describe("walking the Lab view's handles with Tab", () => {
     expect(walk(h, true)).toEqual(["recombination-end", "hold-end", "separation-size", "separation-end", "separation-start"]);
   });
 
-  it("lets the selection go past either end and leaves the key unused, so focus can leave the Lab view", () => {
+  it("lets the selection go past either end and leaves the key unused, so focus can leave the Offsets panel", () => {
     const h = createHarness();
     walk(h, false);
     expect(h.key("Tab")).toBe(false);
@@ -66,7 +66,7 @@ describe("walking the Lab view's handles with Tab", () => {
     h.drag("separation-end", framesOf(20, 0, 4), { release: false });
     expect(h.key("Tab")).toBe(true);
     expect(h.store.getState().selection).toBe("separation-end");
-    expect(h.store.getState().labTool.name).toBe("dragging");
+    expect(h.store.getState().offsetsTool.name).toBe("dragging");
   });
 
   it("finds nothing to walk for a viewer, and leaves the key to the browser", () => {

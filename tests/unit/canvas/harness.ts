@@ -1,9 +1,9 @@
 /**
- * A headless editor: a store with no DOM and no Konva, driven by the same pointer and key events the Lab view
+ * A headless editor: a store with no DOM and no Konva, driven by the same pointer and key events the Offsets panel
  * sends, with helpers that find a handle's position the way a person's eye would (from the store's own layout).
  */
 import { createEditorStore, type EditorStore } from "@/canvas/store/createEditorStore";
-import type { HandleId, HandlePlacement } from "@/canvas/kernels/lab-view/handles";
+import type { HandleId, HandlePlacement } from "@/canvas/kernels/offsets/handles";
 import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 
 export interface Harness {
@@ -19,17 +19,17 @@ export interface Harness {
 /** A harness around a new store, or around the store of an editor object (`store`). */
 export function createHarness(options: { document?: ScenarioDocument; readOnly?: boolean; store?: EditorStore } = {}): Harness {
   const store = options.store ?? createEditorStore({ document: options.document ?? defaultScenarioDocument(), version: 1, readOnly: options.readOnly ?? false });
-  store.getState().setLabViewSize({ width: 800, height: 320 });
+  store.getState().setOffsetsSize({ width: 800, height: 320 });
   const state = () => store.getState();
   const placement = (handle: HandleId) => {
-    const found = state().labView.handles(state()).find((h) => h.id === handle);
+    const found = state().offsets.handles(state()).find((h) => h.id === handle);
     if (!found) throw new Error(`no ${handle} handle on screen`);
     return found;
   };
   const grip = (handle: HandleId) => {
     const p = placement(handle);
     if (p.axis === "distance") return { x: p.x, y: p.y };
-    const plot = state().labView.viewport(state())!.plot;
+    const plot = state().offsets.viewport(state())!.plot;
     return { x: p.x, y: plot.top + plot.height / 2 };
   };
   return {
@@ -39,17 +39,17 @@ export function createHarness(options: { document?: ScenarioDocument; readOnly?:
     grip,
     drag(handle, frames, { shiftKey = false, release = true } = {}) {
       const at = grip(handle);
-      state().labPointerDown({ ...at, shiftKey });
+      state().offsetsPointerDown({ ...at, shiftKey });
       let x = at.x;
       let y = at.y;
       for (const frame of frames) {
         x += frame.dx;
         y += frame.dy;
-        state().labPointerMove({ x, y, shiftKey });
+        state().offsetsPointerMove({ x, y, shiftKey });
       }
-      if (release) state().labPointerUp({ x, y, shiftKey });
+      if (release) state().offsetsPointerUp({ x, y, shiftKey });
     },
-    key: (key, shiftKey = false) => state().labKeyDown({ key, shiftKey }),
+    key: (key, shiftKey = false) => state().offsetsKeyDown({ key, shiftKey }),
   };
 }
 

@@ -1,10 +1,10 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { planHandleDrag } from "@/canvas/kernels/lab-view/drag-plan";
-import { handlePlacements } from "@/canvas/kernels/lab-view/handles";
-import { broadPhase, hitTestLabView } from "@/canvas/kernels/lab-view/hit-test";
-import { planHandleValue } from "@/canvas/kernels/lab-view/typed-plan";
-import { fitLabViewport, MIN_SEGMENT_SHARE, pxToMetres, pxToTime, timeToPx } from "@/canvas/kernels/lab-view/viewport";
+import { planHandleDrag } from "@/canvas/kernels/offsets/drag-plan";
+import { handlePlacements } from "@/canvas/kernels/offsets/handles";
+import { broadPhase, hitTestOffsets } from "@/canvas/kernels/offsets/hit-test";
+import { planHandleValue } from "@/canvas/kernels/offsets/typed-plan";
+import { fitOffsetsViewport, MIN_SEGMENT_SHARE, pxToMetres, pxToTime, timeToPx } from "@/canvas/kernels/offsets/viewport";
 import { ladderStepAtLeast, ladderStepAtMost, roundTicks, snapToRoundValue } from "@/canvas/kernels/round-numbers";
 import { segmentTimes, type SegmentsProtocol } from "@/canvas/kernels/timeline";
 import { applyPatches, diffValues } from "@/canvas/store/patches";
@@ -12,23 +12,23 @@ import { defaultScenarioDocument } from "@/physics/scenario/schema";
 
 const document = defaultScenarioDocument();
 const protocol = document.protocol as SegmentsProtocol;
-const viewport = fitLabViewport(segmentTimes(protocol), document.separation, { width: 800, height: 320 });
+const viewport = fitOffsetsViewport(segmentTimes(protocol), document.separation, { width: 800, height: 320 });
 const handles = handlePlacements(viewport, protocol, document.separation);
 const at = (id: string) => handles.find((h) => h.id === id)!;
 const midPlot = viewport.plot.top + viewport.plot.height / 2;
 
-describe("Lab view hit testing", () => {
+describe("Offsets hit testing", () => {
   it("picks the handle nearest the pointer when two are within tolerance", () => {
     const end = at("recombination-end").x;
     const hold = at("hold-end").x;
     const between = hold + (end - hold) * 0.4;
-    const hit = hitTestLabView(handles, viewport, segmentTimes(protocol), { x: between, y: midPlot }, Math.abs(end - hold));
+    const hit = hitTestOffsets(handles, viewport, segmentTimes(protocol), { x: between, y: midPlot }, Math.abs(end - hold));
     expect(hit).toMatchObject({ kind: "handle", handle: "hold-end" });
   });
 
   it("misses a handle just beyond the tolerance and reports the segment under the pointer instead", () => {
     const hold = at("hold-end").x;
-    const hit = hitTestLabView(handles, viewport, segmentTimes(protocol), { x: hold - 9, y: midPlot }, 8);
+    const hit = hitTestOffsets(handles, viewport, segmentTimes(protocol), { x: hold - 9, y: midPlot }, 8);
     expect(hit).toEqual({ kind: "segment", segment: "hold" });
   });
 
@@ -36,19 +36,19 @@ describe("Lab view hit testing", () => {
     const size = at("separation-size");
     expect(size.axis).toBe("distance");
     if (size.axis !== "distance") return;
-    expect(hitTestLabView(handles, viewport, segmentTimes(protocol), { x: size.x + 3, y: size.y - 3 }, 8)).toMatchObject({ handle: "separation-size" });
+    expect(hitTestOffsets(handles, viewport, segmentTimes(protocol), { x: size.x + 3, y: size.y - 3 }, 8)).toMatchObject({ handle: "separation-size" });
     const farBelow = { x: size.x, y: size.y + 40 };
     expect(broadPhase(handles, viewport, farBelow, 8).map((h) => h.id)).not.toContain("separation-size");
     const end = at("separation-end").x;
-    expect(hitTestLabView(handles, viewport, segmentTimes(protocol), { x: end + 2, y: viewport.plot.top + 4 }, 8)).toMatchObject({ handle: "separation-end" });
+    expect(hitTestOffsets(handles, viewport, segmentTimes(protocol), { x: end + 2, y: viewport.plot.top + 4 }, 8)).toMatchObject({ handle: "separation-end" });
   });
 
   it("answers a miss outside the plot", () => {
-    expect(hitTestLabView(handles, viewport, segmentTimes(protocol), { x: 2, y: 2 }, 8)).toEqual({ kind: "miss" });
+    expect(hitTestOffsets(handles, viewport, segmentTimes(protocol), { x: 2, y: 2 }, 8)).toEqual({ kind: "miss" });
   });
 });
 
-describe("Lab view axes", () => {
+describe("Offsets axes", () => {
   it("map time to pixels and back on every piece of the axis", () => {
     fc.assert(
       fc.property(fc.double({ min: -0.05, max: 0.2, noNaN: true }), (t) => {
@@ -59,7 +59,7 @@ describe("Lab view axes", () => {
 
   it("give a short ramp beside a long hold at least its minimum share of the width", () => {
     const lopsided: SegmentsProtocol = { ...protocol, hold: { durationSeconds: 1000 } };
-    const vp = fitLabViewport(segmentTimes(lopsided), document.separation, { width: 800, height: 320 });
+    const vp = fitOffsetsViewport(segmentTimes(lopsided), document.separation, { width: 800, height: 320 });
     const t = segmentTimes(lopsided);
     expect(timeToPx(vp, t.separationEnd) - timeToPx(vp, t.separationStart)).toBeGreaterThanOrEqual(vp.plot.width * MIN_SEGMENT_SHARE * 0.88 - 1e-9);
   });

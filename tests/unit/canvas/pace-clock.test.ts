@@ -9,10 +9,10 @@ function pressedEditor(everyMs = 100) {
   const ticks: number[] = [];
   clock.subscribe(() => ticks.push(performance.now()));
   const at = h.grip("recombination-end");
-  h.store.getState().labPointerDown({ ...at, shiftKey: false });
+  h.store.getState().offsetsPointerDown({ ...at, shiftKey: false });
   let x = at.x;
-  const move = (dx: number) => h.store.getState().labPointerMove({ x: (x += dx), y: at.y, shiftKey: false });
-  const release = () => h.store.getState().labPointerUp({ x, y: at.y, shiftKey: false });
+  const move = (dx: number) => h.store.getState().offsetsPointerMove({ x: (x += dx), y: at.y, shiftKey: false });
+  const release = () => h.store.getState().offsetsPointerUp({ x, y: at.y, shiftKey: false });
   return { h, clock, ticks, move, release };
 }
 
@@ -55,9 +55,9 @@ describe("the pace clock the editor's panels follow a drag by", () => {
     vi.advanceTimersByTime(500);
     const afterRelease = ticks.length;
     h.drag("hold-end", framesOf(0, 0, 1), { release: true });
-    h.store.getState().labKeyDown({ key: "ArrowRight", shiftKey: false });
+    h.store.getState().offsetsKeyDown({ key: "ArrowRight", shiftKey: false });
     vi.advanceTimersByTime(500);
     expect(ticks.length).toBe(afterRelease);
-    expect(h.store.getState().labTool.name).not.toBe("dragging");
+    expect(h.store.getState().offsetsTool.name).not.toBe("dragging");
   });
 });

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { segmentTimes, type SegmentsProtocol } from "@/canvas/kernels/timeline";
-import { HANDLE_IDS } from "@/canvas/kernels/lab-view/handles";
+import { HANDLE_IDS } from "@/canvas/kernels/offsets/handles";
 import { hasUnsavedChanges } from "@/canvas/store/selectors";
 import { createHarness, framesOf, schwarzschildDocument } from "./harness";
 
@@ -47,7 +47,7 @@ describe("the editor store", () => {
     expect(h.key("Escape")).toBe(true);
     expect(h.document()).toBe(before);
     expect(h.store.getState().history.past).toHaveLength(0);
-    expect(h.store.getState().labTool.name).toBe("idle");
+    expect(h.store.getState().offsetsTool.name).toBe("idle");
   });
 
   it("records nothing for a press on a handle that does not move it", () => {
@@ -95,11 +95,11 @@ describe("the editor store", () => {
 
   it("shows a viewer no handles and ignores presses, drags and undo", () => {
     const h = createHarness({ readOnly: true });
-    expect(h.store.getState().labView.handles(h.store.getState())).toEqual([]);
+    expect(h.store.getState().offsets.handles(h.store.getState())).toEqual([]);
     const before = h.document();
-    h.store.getState().labPointerDown({ x: 400, y: 150, shiftKey: false });
-    h.store.getState().labPointerMove({ x: 500, y: 150, shiftKey: false });
-    h.store.getState().labPointerUp({ x: 500, y: 150, shiftKey: false });
+    h.store.getState().offsetsPointerDown({ x: 400, y: 150, shiftKey: false });
+    h.store.getState().offsetsPointerMove({ x: 500, y: 150, shiftKey: false });
+    h.store.getState().offsetsPointerUp({ x: 500, y: 150, shiftKey: false });
     expect(h.document()).toBe(before);
     expect(h.store.getState().edit("Anything", (d) => ({ ...d, separation: { ...d.separation, distanceMetres: 1 } })).ok).toBe(false);
   });
@@ -171,7 +171,7 @@ describe("saving state in the store", () => {
   });
 });
 
-describe("the Lab view of a profile that is not made of segments", () => {
+describe("the Offsets panel of a profile that is not made of segments", () => {
   it("gets axes over the whole profile but no handles, so a press changes nothing", () => {
     const sampled = {
       ...schwarzschildDocument(),
@@ -187,14 +187,14 @@ describe("the Lab view of a profile that is not made of segments", () => {
     };
     const h = createHarness({ document: sampled });
     const s = h.store.getState();
-    const viewport = s.labView.viewport(s)!;
+    const viewport = s.offsets.viewport(s)!;
     expect(viewport.pieces[1].fromSeconds).toBe(0);
     expect(viewport.pieces[viewport.pieces.length - 2].toSeconds).toBe(1);
-    expect(s.labView.handles(s)).toEqual([]);
-    expect(s.labView.handles(s)).toBe(s.labView.handles(s));
-    expect(s.labView.viewport(s)).toBe(s.labView.viewport(s));
-    s.labPointerDown({ x: 300, y: 150, shiftKey: false });
-    s.labPointerUp({ x: 400, y: 150, shiftKey: false });
+    expect(s.offsets.handles(s)).toEqual([]);
+    expect(s.offsets.handles(s)).toBe(s.offsets.handles(s));
+    expect(s.offsets.viewport(s)).toBe(s.offsets.viewport(s));
+    s.offsetsPointerDown({ x: 300, y: 150, shiftKey: false });
+    s.offsetsPointerUp({ x: 400, y: 150, shiftKey: false });
     expect(h.document()).toBe(sampled);
   });
 });

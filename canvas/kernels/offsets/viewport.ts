@@ -1,5 +1,5 @@
 /**
- * The Lab view's axes: lab proper time across, offset along the separation axis up.
+ * The Offsets panel's axes: lab proper time across, offset along the separation axis up.
  *
  * The time axis is piecewise linear, one piece per segment plus a short lead-in and run-out, each moving segment
  * given at least MIN_SEGMENT_SHARE of the width: a 10 ms ramp beside a 1000 s hold stays wide enough to see and to
@@ -22,7 +22,7 @@ export interface AxisPiece {
   toPx: number;
 }
 
-export interface LabViewport {
+export interface OffsetsViewport {
   width: number;
   height: number;
   plot: PlotRect;
@@ -32,7 +32,7 @@ export interface LabViewport {
   metresAtBottom: number;
 }
 
-export const LAB_VIEW_MARGINS = { left: 72, right: 20, top: 18, bottom: 46 } as const;
+export const OFFSETS_MARGINS = { left: 72, right: 20, top: 18, bottom: 46 } as const;
 /** Share of the width each non-empty segment gets at least. */
 export const MIN_SEGMENT_SHARE = 0.16;
 /** Share of the width of the lead-in before the separation and the run-out after the recombination. */
@@ -46,43 +46,43 @@ function pieceScale(piece: AxisPiece): number {
   return (piece.toPx - piece.fromPx) / (piece.toSeconds - piece.fromSeconds);
 }
 
-function pieceForTime(viewport: LabViewport, tSeconds: number): AxisPiece {
+function pieceForTime(viewport: OffsetsViewport, tSeconds: number): AxisPiece {
   const { pieces } = viewport;
   return pieces.find((p) => tSeconds <= p.toSeconds) ?? pieces[pieces.length - 1];
 }
 
-function pieceForPx(viewport: LabViewport, x: number): AxisPiece {
+function pieceForPx(viewport: OffsetsViewport, x: number): AxisPiece {
   const { pieces } = viewport;
   return pieces.find((p) => x <= p.toPx) ?? pieces[pieces.length - 1];
 }
 
 /** Lab time → x pixel; outside the axis the first or last piece's scale carries on. */
-export function timeToPx(viewport: LabViewport, tSeconds: number): number {
+export function timeToPx(viewport: OffsetsViewport, tSeconds: number): number {
   const piece = pieceForTime(viewport, tSeconds);
   return piece.fromPx + (tSeconds - piece.fromSeconds) * pieceScale(piece);
 }
 
-export function pxToTime(viewport: LabViewport, x: number): number {
+export function pxToTime(viewport: OffsetsViewport, x: number): number {
   const piece = pieceForPx(viewport, x);
   return piece.fromSeconds + (x - piece.fromPx) / pieceScale(piece);
 }
 
 /** Seconds per pixel at lab time t. */
-export function secondsPerPxAt(viewport: LabViewport, tSeconds: number): number {
+export function secondsPerPxAt(viewport: OffsetsViewport, tSeconds: number): number {
   return 1 / pieceScale(pieceForTime(viewport, tSeconds));
 }
 
-export function metresToPx(viewport: LabViewport, metres: number): number {
+export function metresToPx(viewport: OffsetsViewport, metres: number): number {
   const { plot, metresAtTop, metresAtBottom } = viewport;
   return plot.top + ((metresAtTop - metres) / (metresAtTop - metresAtBottom)) * plot.height;
 }
 
-export function pxToMetres(viewport: LabViewport, y: number): number {
+export function pxToMetres(viewport: OffsetsViewport, y: number): number {
   const { plot, metresAtTop, metresAtBottom } = viewport;
   return metresAtTop - ((y - plot.top) / plot.height) * (metresAtTop - metresAtBottom);
 }
 
-export function metresPerPx(viewport: LabViewport): number {
+export function metresPerPx(viewport: OffsetsViewport): number {
   return (viewport.metresAtTop - viewport.metresAtBottom) / viewport.plot.height;
 }
 
@@ -106,12 +106,12 @@ export function segmentShares(durations: number[]): number[] {
 }
 
 /** The viewport that shows the whole protocol and the full separation with room around both. */
-export function fitLabViewport(
+export function fitOffsetsViewport(
   times: SegmentTimes,
   separation: Pick<SeparationSpec, "split" | "distanceMetres">,
   size: { width: number; height: number },
-): LabViewport {
-  const m = LAB_VIEW_MARGINS;
+): OffsetsViewport {
+  const m = OFFSETS_MARGINS;
   const plot: PlotRect = { left: m.left, top: m.top, width: Math.max(1, size.width - m.left - m.right), height: Math.max(1, size.height - m.top - m.bottom) };
   const boundaries = [times.separationStart, times.separationEnd, times.holdEnd, times.recombinationEnd];
   const durations = [boundaries[1] - boundaries[0], boundaries[2] - boundaries[1], boundaries[3] - boundaries[2]];
@@ -132,7 +132,7 @@ export function fitLabViewport(
 }
 
 /** Pixel positions where the scale changes from one piece to the next (drawn as small breaks on the axis). */
-export function scaleBreaksPx(viewport: LabViewport): number[] {
+export function scaleBreaksPx(viewport: OffsetsViewport): number[] {
   const { pieces } = viewport;
   return pieces.slice(1).filter((p, i) => Math.abs(pieceScale(p) / pieceScale(pieces[i]) - 1) > 0.01).map((p) => p.fromPx);
 }

@@ -1,7 +1,7 @@
-/** The Lab view's handles: which there are, what each one moves, and where each sits on screen. */
+/** The Offsets panel's handles: which there are, what each one moves, and where each sits on screen. */
 import type { SeparationSpec } from "@/physics/scenario/schema";
 import { branchAOffsetPerSeparation, segmentTimes, type SegmentsProtocol, type SegmentTimes } from "../timeline";
-import { metresToPx, timeToPx, type LabViewport } from "./viewport";
+import { metresToPx, timeToPx, type OffsetsViewport } from "./viewport";
 
 export type TimeHandleId = "separation-start" | "separation-end" | "hold-end" | "recombination-end";
 export type HandleId = TimeHandleId | "separation-size";
@@ -59,7 +59,7 @@ export type HandlePlacement =
 
 /** Where each handle sits: time handles as vertical rules across the plot, the separation handle on branch A's plateau. */
 export function handlePlacements(
-  viewport: LabViewport,
+  viewport: OffsetsViewport,
   protocol: SegmentsProtocol,
   separation: SeparationSpec,
   originSeconds = 0,

@@ -1,8 +1,8 @@
-/** Ticks of the Lab view: the segment boundaries on the time axis (and their labels), round offsets on the vertical axis. */
+/** Ticks of the Offsets panel: the segment boundaries on the time axis (and their labels), round offsets on the vertical axis. */
 import { roundTicks } from "../round-numbers";
 import type { SegmentTimes } from "../timeline";
 import { layoutLabels, type LabelCandidate, type PlacedLabel } from "../diagram/label-layout";
-import { metresToPx, timeToPx, type LabViewport } from "./viewport";
+import { metresToPx, timeToPx, type OffsetsViewport } from "./viewport";
 
 export interface Tick {
   px: number;
@@ -10,18 +10,18 @@ export interface Tick {
 }
 
 /** The four instants of the protocol, on the time axis. */
-export function boundaryTicks(viewport: LabViewport, times: SegmentTimes): Tick[] {
+export function boundaryTicks(viewport: OffsetsViewport, times: SegmentTimes): Tick[] {
   return [times.separationStart, times.separationEnd, times.holdEnd, times.recombinationEnd].map((t) => ({ px: timeToPx(viewport, t), valueSI: t }));
 }
 
-export function offsetTicks(viewport: LabViewport, count = 5): Tick[] {
+export function offsetTicks(viewport: OffsetsViewport, count = 5): Tick[] {
   return roundTicks(viewport.metresAtBottom, viewport.metresAtTop, count).map((m) => ({ px: metresToPx(viewport, m), valueSI: m }));
 }
 
 /** Rows under the time axis: the first for the instants, the second for a crowded one and the axis title. */
 export const TIME_LABEL_ROWS_PX = [8, 26] as const;
-/** Room kept between two labels, pixels. */
-const LABEL_GAP_PX = 4;
+/** Room kept between two labels of the Offsets figure, pixels. */
+export const OFFSETS_LABEL_GAP_PX = 4;
 
 export interface TimeAxisLabelsInput {
   /** The instants' ticks and their texts, in order along the axis. */
@@ -36,11 +36,11 @@ export interface TimeAxisLabelsInput {
 }
 
 /**
- * The labels under the Lab view's time axis, laid out by the one label layout the Diagram uses: each instant
- * centred under its tick on the first row, or the second when a neighbour takes the first; the axis title at the
- * right end of the second row, else at its left end, else dropped. The instants rank first, the earlier first.
+ * The labels under the Offsets panel's time axis, as candidates for the one label layout the Diagram uses: each
+ * instant centred under its tick on the first row, or the second when a neighbour takes the first; the axis title at
+ * the right end of the second row, else at its left end, else dropped. The instants rank first, the earlier first.
  */
-export function timeAxisLabels(input: TimeAxisLabelsInput): PlacedLabel[] {
+export function timeAxisLabelCandidates(input: TimeAxisLabelsInput): LabelCandidate[] {
   const { plot, fontSize } = input;
   const rowY = (row: 0 | 1) => plot.bottom + TIME_LABEL_ROWS_PX[row] + (fontSize * 1.2) / 2;
   const instants = input.ticks.map(
@@ -73,5 +73,10 @@ export function timeAxisLabels(input: TimeAxisLabelsInput): PlacedLabel[] {
     rotation: 0,
     alternatives: [{ x: plot.left, y: rowY(1), align: "left", verticalAlign: "middle", rotation: 0 }],
   };
-  return layoutLabels([...instants, title], input.stage, { gapPx: LABEL_GAP_PX });
+  return [...instants, title];
+}
+
+/** The time axis' labels laid out on their own (the Offsets scene lays them out with its other labels). */
+export function timeAxisLabels(input: TimeAxisLabelsInput): PlacedLabel[] {
+  return layoutLabels(timeAxisLabelCandidates(input), input.stage, { gapPx: OFFSETS_LABEL_GAP_PX });
 }

@@ -1,5 +1,5 @@
 /**
- * What dragging (or nudging) a Lab view handle does to the protocol: a plan of new durations and separation, with
+ * What dragging (or nudging) an Offsets handle does to the protocol: a plan of new durations and separation, with
  * the constraints applied. Each time handle moves one instant and keeps the others where they are on the lab's
  * clock, so the neighbouring segments trade time: dragging the end of the hold lengthens the hold and shortens the
  * recombination, and the end of the recombination stays put.
@@ -8,7 +8,7 @@ import type { SeparationSpec } from "@/physics/scenario/schema";
 import { snapToRoundValue } from "../round-numbers";
 import { branchAOffsetPerSeparation, segmentTimes, type SegmentsProtocol } from "../timeline";
 import type { HandleId } from "./handles";
-import { metresPerPx, pxToMetres, pxToTime, secondsPerPxAt, type LabViewport } from "./viewport";
+import { metresPerPx, pxToMetres, pxToTime, secondsPerPxAt, type OffsetsViewport } from "./viewport";
 import type { Pointer } from "./hit-test";
 
 export interface ProtocolPlan {
@@ -27,7 +27,7 @@ export interface DragStart {
   protocol: SegmentsProtocol;
   separation: SeparationSpec;
   /** The axes as they were at pointer-down; they stay fixed for the whole drag so the handle follows the pointer. */
-  viewport: LabViewport;
+  viewport: OffsetsViewport;
   /**
    * Where the pointer went down and where the handle then was: the handle moves by the pointer's travel, so
    * taking it a few pixels off-centre does not make it jump. Absent for a move computed from the handle itself.

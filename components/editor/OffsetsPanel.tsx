@@ -4,9 +4,9 @@ import dynamic from "next/dynamic";
 import { memo, useDeferredValue, useEffect } from "react";
 import { useEditor, useEditorStore } from "@/canvas/EditorProvider";
 import { withProtocolPlan } from "@/canvas/kernels/document-edits";
-import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId } from "@/canvas/kernels/lab-view/handles";
+import { HANDLE_IDS, HANDLE_WORDS, handleValueSI, isTimeHandle, type HandleId } from "@/canvas/kernels/offsets/handles";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import { planHandleValue } from "@/canvas/kernels/lab-view/typed-plan";
+import { planHandleValue } from "@/canvas/kernels/offsets/typed-plan";
 import { formatQuantity } from "@/physics/units";
 import { BranchLegend } from "./BranchLegend";
 import { QuantityField } from "./QuantityField";
@@ -14,9 +14,9 @@ import { useEdit } from "./useEdit";
 import { useElementSize } from "./useElementSize";
 import { usePanelValue } from "./usePacedDuringDrag";
 
-const LabViewStage = dynamic(() => import("@/canvas/layers/LabViewStage"), {
+const OffsetsStage = dynamic(() => import("@/canvas/layers/OffsetsStage"), {
   ssr: false,
-  loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the Lab view…</p>,
+  loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the Offsets…</p>,
 });
 
 const HEIGHT = 300;
@@ -61,19 +61,19 @@ const HandleFieldsView = memo(function HandleFieldsView({ document, readOnly, se
   );
 });
 
-export function LabViewPanel() {
+export function OffsetsPanel() {
   const store = useEditorStore();
   const readOnly = useEditor((s) => s.readOnly);
   const editable = useEditor((s) => !s.readOnly && s.document.protocol.kind === "segments");
   const [ref, size] = useElementSize<HTMLDivElement>({ width: 600, height: HEIGHT });
   useEffect(() => {
-    if (size.width > 0) store.getState().setLabViewSize({ width: size.width, height: HEIGHT });
+    if (size.width > 0) store.getState().setOffsetsSize({ width: size.width, height: HEIGHT });
   }, [store, size.width]);
   return (
-    <section aria-labelledby="lab-view-heading" className="min-w-0">
+    <section aria-labelledby="offsets-heading" className="min-w-0">
       <div className="mb-2 flex items-baseline justify-between gap-4">
-        <h2 id="lab-view-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
-          Lab view
+        <h2 id="offsets-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+          Offsets
         </h2>
         <p className="text-xs text-ink-faint">
           {editable
@@ -84,7 +84,7 @@ export function LabViewPanel() {
         </p>
       </div>
       <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height: HEIGHT }}>
-        {size.width > 0 && <LabViewStage width={size.width} height={HEIGHT} />}
+        {size.width > 0 && <OffsetsStage width={size.width} height={HEIGHT} />}
       </div>
       <div className="mt-2">
         <BranchLegend />

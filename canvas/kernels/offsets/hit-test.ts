@@ -1,13 +1,13 @@
 /**
- * Hit testing in the Lab view: a broad phase on each handle's bounds, a narrow phase measuring the distance to the
+ * Hit testing in the Offsets panel: a broad phase on each handle's bounds, a narrow phase measuring the distance to the
  * handle itself, then a ranking. Time handles are vertical rules (grabbed anywhere along their height); the
  * separation handle is a point.
  */
 import type { SegmentName, SegmentTimes } from "../timeline";
 import type { HandleId, HandlePlacement } from "./handles";
-import { pxToTime, type LabViewport } from "./viewport";
+import { pxToTime, type OffsetsViewport } from "./viewport";
 
-export type LabViewHit =
+export type OffsetsHit =
   | { kind: "handle"; handle: HandleId; distancePx: number }
   | { kind: "segment"; segment: SegmentName }
   | { kind: "miss" };
@@ -27,7 +27,7 @@ interface Bounds {
 /** When two handles are equally near (e.g. a zero hold puts two rules on one line), the earlier one wins. */
 const PRIORITY: readonly HandleId[] = ["separation-size", "hold-end", "recombination-end", "separation-end", "separation-start"];
 
-function boundsOf(handle: HandlePlacement, viewport: LabViewport, tolerancePx: number): Bounds {
+function boundsOf(handle: HandlePlacement, viewport: OffsetsViewport, tolerancePx: number): Bounds {
   if (handle.axis === "distance") {
     return { minX: handle.x - tolerancePx, maxX: handle.x + tolerancePx, minY: handle.y - tolerancePx, maxY: handle.y + tolerancePx };
   }
@@ -41,7 +41,7 @@ function distanceTo(handle: HandlePlacement, pointer: Pointer): number {
   return handle.axis === "time" ? Math.abs(pointer.x - handle.x) : Math.hypot(pointer.x - handle.x, pointer.y - handle.y);
 }
 
-export function broadPhase(handles: HandlePlacement[], viewport: LabViewport, pointer: Pointer, tolerancePx: number): HandlePlacement[] {
+export function broadPhase(handles: HandlePlacement[], viewport: OffsetsViewport, pointer: Pointer, tolerancePx: number): HandlePlacement[] {
   return handles.filter((h) => contains(boundsOf(h, viewport, tolerancePx), pointer));
 }
 
@@ -61,13 +61,13 @@ function segmentAt(times: SegmentTimes, tSeconds: number): SegmentName | null {
   return "recombination";
 }
 
-export function hitTestLabView(
+export function hitTestOffsets(
   handles: HandlePlacement[],
-  viewport: LabViewport,
+  viewport: OffsetsViewport,
   times: SegmentTimes,
   pointer: Pointer,
   tolerancePx: number,
-): LabViewHit {
+): OffsetsHit {
   const best = rank(narrowPhase(broadPhase(handles, viewport, pointer, tolerancePx), pointer, tolerancePx));
   if (best) return { kind: "handle", ...best };
   const { plot } = viewport;

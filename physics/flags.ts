@@ -12,6 +12,7 @@ import { CONVERGENCE_TARGET } from "./estimators/ramp-quanta";
 import { isOutsideDoubleRange } from "./estimators/quantity";
 import type { ChannelResult, FlagStatus, ValidityFlag } from "./result";
 import type { ScenarioDocument } from "./scenario/schema";
+import { formatNumber, formatQuantity } from "./units";
 
 const OK_RATIO = 0.01;
 const CAUTION_RATIO = 0.1;
@@ -94,6 +95,47 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
           message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or teleport): the counts omit the jump, which would make them diverge`,
         },
   ];
+}
+
+const PROFILE_PROBES = 4097;
+const PROFILE_TOLERANCE = 1e-9;
+
+/**
+ * σ(t) is the separation as a fraction of d: 0 together, 1 fully apart. Ramps stay in [0, 1] by construction and a
+ * measured profile is measured in units of its own peak; a formula may leave the range, and then d no longer says
+ * how far apart the branches are (σ > 1), or the branches change sides (σ < 0). Probed on a uniform grid.
+ */
+export function profileRange(history: SeparationHistory): ValidityFlag {
+  const code = "profile-range";
+  if (history.protocolKind !== "formula") {
+    return {
+      code,
+      status: "not-applicable",
+      message: history.protocolKind === "segments" ? "ramps run σ(t) from 0 to 1 by construction" : "a measured profile is measured in units of its own peak",
+    };
+  }
+  let lowest = Infinity;
+  let highest = -Infinity;
+  for (const w of history.windows) {
+    for (let i = 0; i < PROFILE_PROBES; i++) {
+      const sigma = w.fraction(i / (PROFILE_PROBES - 1));
+      lowest = Math.min(lowest, sigma);
+      highest = Math.max(highest, sigma);
+    }
+  }
+  const d = history.peakSeparationMetres;
+  const problems: string[] = [];
+  if (highest > 1 + PROFILE_TOLERANCE) {
+    problems.push(`σ(t) reaches ${formatNumber(highest)}: the branches separate by up to ${formatQuantity(highest * d, "length")}, not d = ${formatQuantity(d, "length")}`);
+  }
+  if (lowest < -PROFILE_TOLERANCE) problems.push(`σ(t) falls to ${formatNumber(lowest)}: below 0 the branches change sides`);
+  if (problems.length === 0) return { code, status: "ok", message: "the formula's σ(t) stays within [0, 1]", measure: highest };
+  return {
+    code,
+    status: "invalid",
+    message: `${problems.join("; ")}. Write σ(t) as a fraction of d between 0 and 1, and set d to the peak separation`,
+    measure: Math.max(highest - 1, -lowest),
+  };
 }
 
 function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResult[]): ValidityFlag {
@@ -275,6 +317,7 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
     samplingConverged(channels),
     ...kinkFlags(inputs.history, channels),
+    profileRange(inputs.history),
     holdTimescale(inputs.document, inputs.history, inputs.background),
     schwarzschildRegime(inputs.document, inputs.electromagnetic),
     ...modelChecks(inputs.modelFlags),

@@ -118,6 +118,23 @@ export function formatQuantity(valueSI: number, dimension: QuantityDimension, op
   return `${mantissa} ${PREFIXES[exponent]}${symbol}`;
 }
 
+/**
+ * A plain number with `digits` significant digits (default 3): as it is between 0.01 and 9999, else with its power
+ * of ten written out ("6.8 × 10²⁰", "−7.52 × 10⁻⁵"). The one way Branchline prints a bare number, in fields, flags
+ * and figures alike.
+ */
+export function formatNumber(value: number, digits = 3): string {
+  if (value === 0) return "0";
+  if (!Number.isFinite(value)) return Number.isNaN(value) ? "NaN" : value > 0 ? "∞" : "−∞";
+  const exponent = Math.floor(Math.log10(Math.abs(value)));
+  const sign = value < 0 ? "−" : "";
+  if (exponent >= -2 && exponent <= 3) return sign + String(Number(Math.abs(value).toPrecision(digits)));
+  let mantissa = Number((Math.abs(value) / 10 ** exponent).toPrecision(digits));
+  let shown = exponent;
+  if (mantissa >= 10) [mantissa, shown] = [mantissa / 10, exponent + 1];
+  return `${sign}${mantissa} × 10${superscript(shown)}`;
+}
+
 /** A mass, length, time or charge in geometrized (G = c = 1) and Planck (ħ = G = c = 1, 4πε0 = 1) terms. */
 export interface GeometrizedReadout {
   /** As a length: GM/c² for a mass, q√(G/(4πε0))/c² for a charge, ct for a time. */

@@ -5,6 +5,7 @@ import { useMemo, type ReactNode } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
+import { withPeakSeparation } from "@/canvas/kernels/protocol-kind";
 import { elementaryCharge } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
 import { formatQuantity, parseQuantity } from "@/physics/units";
@@ -191,7 +192,7 @@ function parseOptionalMass(text: string): ParseResult<number | null> {
   return parsed.valueSI > 0 ? { ok: true, value: parsed.valueSI } : { ok: false, message: "the lab's mass must be positive; leave the field empty for none" };
 }
 
-function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
+function SourceFields({ document, readOnly, measuredProfile }: { document: PhysicalSetup; readOnly: boolean; measuredProfile: boolean }) {
   const edit = useEdit();
   const { source, separation } = document;
   return (
@@ -248,9 +249,11 @@ function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnl
         <QuantityField
           label="Full separation d"
           dimension="length"
+          hint={measuredProfile ? "The measured profile's peak: a new value rescales the profile's samples." : undefined}
           shown={formatQuantity(separation.distanceMetres, "length", { digits: 4 })}
           disabled={readOnly}
-          onCommit={(m) => edit("Set separation", (d) => ({ ...d, separation: { ...d.separation, distanceMetres: m } }))}
+          testId="separation-distance"
+          onCommit={(m) => edit("Set separation", (d) => withPeakSeparation(d, m))}
         />
       </Group>
     </>
@@ -264,6 +267,7 @@ export function ParametersPanel() {
   const separation = useEditor((s) => s.document.separation);
   const document = useMemo(() => ({ background, lab, source, separation }), [background, lab, source, separation]);
   const readOnly = useEditor((s) => s.readOnly);
+  const measuredProfile = useEditor((s) => s.document.protocol.kind === "sampled");
   return (
     <section aria-labelledby="parameters-heading" className="space-y-4">
       <h2 id="parameters-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
@@ -271,7 +275,7 @@ export function ParametersPanel() {
       </h2>
       <BackgroundFields document={document} readOnly={readOnly} />
       <LabFields document={document} readOnly={readOnly} />
-      <SourceFields document={document} readOnly={readOnly} />
+      <SourceFields document={document} readOnly={readOnly} measuredProfile={measuredProfile} />
     </section>
   );
 }

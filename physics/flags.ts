@@ -39,7 +39,7 @@ function slowMotion(speed: number): ValidityFlag {
   return {
     code: "slow-motion",
     status: ratioStatus(ratio),
-    message: `peak branch speed is ${ratio.toExponential(2)} c; the dipole and quadrupole formulas assume speeds ≪ c`,
+    message: `peak branch speed is ${formatNumber(ratio)} c; the dipole and quadrupole formulas assume speeds ≪ c`,
     measure: ratio,
   };
 }
@@ -51,7 +51,7 @@ function separationVsHorizon(d: number, background: Background): ValidityFlag {
   return {
     code: "separation-vs-horizon",
     status: ratioStatus(ratio),
-    message: `separation is ${ratio.toExponential(2)} of the proper distance to the horizon; the estimates sample the field on one worldline and need ≪ 1`,
+    message: `separation is ${formatNumber(ratio)} of the proper distance to the horizon; the estimates sample the field on one worldline and need ≪ 1`,
     measure: ratio,
   };
 }
@@ -65,8 +65,8 @@ function samplingConverged(channels: ChannelResult[]): ValidityFlag {
     code: "sampling-converged",
     status: converged ? "ok" : "caution",
     message: converged
-      ? `ramp-driven counts changed by at most ${worst.toExponential(2)} at the last doubling of the samples (target ${CONVERGENCE_TARGET})`
-      : `ramp-driven counts still changed by ${worst.toExponential(2)} at the last doubling of the samples: not converged to ${CONVERGENCE_TARGET}`,
+      ? `ramp-driven counts changed by at most ${formatNumber(worst)} at the last doubling of the samples (target ${formatNumber(CONVERGENCE_TARGET)})`
+      : `ramp-driven counts still changed by ${formatNumber(worst)} at the last doubling of the samples: not converged to ${formatNumber(CONVERGENCE_TARGET)}`,
     measure: worst,
   };
 }
@@ -75,7 +75,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
   const kinks = history.kinks.filter((k) => k.kind === "kink");
   const jumps = history.kinks.filter((k) => k.kind === "jump");
   const step = Math.min(...channels.map((ch) => (ch.convergence.timeStepSeconds > 0 ? ch.convergence.timeStepSeconds : Infinity)));
-  const at = (list: typeof kinks) => list.slice(0, 5).map((k) => `${k.timeSeconds.toPrecision(4)} s`).join(", ") + (list.length > 5 ? ", …" : "");
+  const at = (list: typeof kinks) => list.slice(0, 5).map((k) => formatQuantity(k.timeSeconds, "time", { digits: 4 })).join(", ") + (list.length > 5 ? ", …" : "");
   return [
     kinks.length === 0
       ? { code: "kink", status: "ok", message: "the branch velocity is continuous" }
@@ -84,7 +84,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
           status: "caution",
           message:
             `the branch velocity jumps at ${at(kinks)}: the far-field count grows without bound as the time resolution shrinks; ` +
-            `reported at a time step of ${Number.isFinite(step) ? step.toPrecision(3) : "?"} s. Use smooth ramps (minimum-jerk) for a resolution-free number`,
+            `reported at a time step of ${Number.isFinite(step) ? formatQuantity(step, "time") : "an unknown step"}. Use smooth ramps (minimum-jerk) for a resolution-free number`,
         },
     accelerationJumpFlag(history, channels),
     jumps.length === 0
@@ -149,7 +149,7 @@ function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResul
     status: "caution",
     message:
       "the branch acceleration jumps (smoothstep or cosine ramps): the gravitational far-field count grows like the logarithm " +
-      `of the bandwidth and is reported at a time step of ${gravity.convergence.timeStepSeconds.toPrecision(3)} s; use minimum-jerk ramps for a resolution-free number`,
+      `of the bandwidth and is reported at a time step of ${formatQuantity(gravity.convergence.timeStepSeconds, "time")}; use minimum-jerk ramps for a resolution-free number`,
   };
 }
 
@@ -221,8 +221,8 @@ function bodyOffsetNote(document: ScenarioDocument): ValidityFlag {
     code,
     status: "note",
     message: symmetric
-      ? `body offset x₀ = ${offset.toPrecision(3)} m: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${ratio.toPrecision(3)})`
-      : `body offset x₀ = ${offset.toPrecision(3)} m: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${ratio.toPrecision(3)})`,
+      ? `body offset x₀ = ${formatQuantity(offset, "length")}: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${formatNumber(ratio)})`
+      : `body offset x₀ = ${formatQuantity(offset, "length")}: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${formatNumber(ratio)})`,
     measure: ratio,
   };
 }
@@ -275,7 +275,7 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
   if (kind === "minkowski") return { code, status: "not-applicable", message: "no horizon: no hold rate" };
   const apart = squaredProfileIntegralSeconds(history, electromagneticChannel);
   if (!(apart > 0)) return { code, status: "not-applicable", message: "the branches are never apart" };
-  const apartText = `the time spent apart, ∫σ²dτ = ${apart.toPrecision(3)} s of lab proper time`;
+  const apartText = `the time spent apart, ∫σ²dτ = ${formatQuantity(apart, "time")} of lab proper time`;
   if (kind === "schwarzschild") {
     const massTime = (G * document.background.massKg) / c ** 3;
     const lightTime = background.labRadiusMetres / c;
@@ -286,7 +286,7 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
       status: ratioStatus(ratio),
       message:
         `the Schwarzschild hold rates are zero-frequency limits: they need ${apartText}, long against the hole's response ` +
-        `time, GM/c³ = ${massTime.toPrecision(3)} s and b/c = ${lightTime.toPrecision(3)} s of Killing time (${response.toPrecision(3)} s of lab time); ratio ${ratio.toExponential(2)}`,
+        `time, GM/c³ = ${formatQuantity(massTime, "time")} and b/c = ${formatQuantity(lightTime, "time")} of Killing time (${formatQuantity(response, "time")} of lab time); ratio ${formatNumber(ratio)}`,
       measure: ratio,
     };
   }
@@ -297,8 +297,8 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
     code,
     status: status === "invalid" ? "caution" : status,
     message:
-      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${correlation.toPrecision(3)} s; ` +
-      `ratio ${ratio.toExponential(2)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
+      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${formatQuantity(correlation, "time")}; ` +
+      `ratio ${formatNumber(ratio)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
     measure: ratio,
   };
 }

@@ -131,7 +131,7 @@ describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
       expect(gw.holdRate.sourceKey).toBe("schwarzschild-exact-gw-far-zone");
       expect(gw.comparison!.estimateRegime).toBe("far");
       expect(valueOf(gw.comparison!.ratioExactToEstimate)).toBeCloseTo(valueOf(gw.holdRate) / valueOf(gw.comparison!.estimateHoldRate), 12);
-      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/relative corrections of order GM\/\(c²b\) = 0.0010/) });
+      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/relative corrections of order GM\/\(c²b\) = 1 × 10⁻³ \(b = 1000 GM\/c²\)/) });
     }
   });
 
@@ -145,7 +145,7 @@ describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
     const result = at(20);
     expect(result.gravitational.regime).toBe("far-zone");
     expect(result.gravitational.comparison!.estimateRegime).toBe("far");
-    expect(flag(result, "schwarzschild-gravity-model")).toMatchObject({ status: "caution", message: expect.stringMatching(/= 0.050/) });
+    expect(flag(result, "schwarzschild-gravity-model")).toMatchObject({ status: "caution", message: expect.stringMatching(/= 0.05 \(b = 20 GM\/c²\)/) });
     expect(flag(result, "schwarzschild-gravity-model")!.measure!).toBeCloseTo(0.05, 9);
     expect(flag(at(5), "schwarzschild-gravity-model")).toMatchObject({ status: "invalid", message: expect.stringMatching(/order one/) });
   });

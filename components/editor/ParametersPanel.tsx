@@ -6,9 +6,9 @@ import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
 import { withPeakSeparation } from "@/canvas/kernels/protocol-kind";
-import { elementaryCharge } from "@/physics/constants";
+import { c, elementaryCharge, G } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
-import { formatQuantity, parseQuantity } from "@/physics/units";
+import { formatQuantity, namedLengthsText, parseQuantity, type LengthScales } from "@/physics/units";
 import { DraftField, QuantityField, type ParseResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
 
@@ -77,6 +77,7 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
           label="Black-hole mass"
           dimension="mass"
           hint="In kg or solar masses, e.g. 10 Msun"
+          valueSI={bg.massKg}
           shown={formatQuantity(bg.massKg, "mass", { solarMasses: true, digits: 4 })}
           disabled={readOnly}
           onCommit={(massKg) => edit("Set black-hole mass", (d) => ({ ...d, background: { kind: "schwarzschild", massKg } }))}
@@ -135,15 +136,30 @@ function LabSummary() {
   );
 }
 
+/** The background's own lengths: r_s = 2GM/c² (and GM/c²) around a black hole, c/H in de Sitter. */
+function lengthScalesOf(background: ScenarioDocument["background"]): LengthScales {
+  if (background.kind === "schwarzschild") return { schwarzschildRadiusMetres: (2 * G * background.massKg) / c ** 2 };
+  if (background.kind === "de-sitter") return { hubbleRadiusMetres: c / background.hubbleRatePerSecond };
+  return {};
+}
+
+/** "e.g. 3 rs or 6 GM/c^2" for the lengths a background has, so a reader knows they are accepted. */
+function lengthHint(metres: number, scales: LengthScales): string | undefined {
+  const readout = namedLengthsText(metres, scales);
+  if (!readout) return undefined;
+  return `${readout}; type e.g. ${scales.schwarzschildRadiusMetres !== undefined ? "3 rs or 6 GM/c^2" : "0.5 c/H"}, or in metres`;
+}
+
 function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const placements = PLACEMENT_WORDS[document.background.kind];
   const lab = document.lab;
+  const scales = lengthScalesOf(document.background);
   return (
     <Group title="Lab">
       {Object.keys(placements).length > 1 ? (
         <label className="block text-sm font-semibold text-ink">
-          Position given as
+          Place the lab by
           <select
             className={selectClass}
             value={lab.placement}
@@ -164,6 +180,9 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
         <QuantityField
           label="Areal radius"
           dimension="length"
+          lengthScales={scales}
+          valueSI={lab.arealRadiusMetres}
+          hint={lengthHint(lab.arealRadiusMetres, scales)}
           shown={formatQuantity(lab.arealRadiusMetres, "length", { digits: 5 })}
           disabled={readOnly}
           testId="lab-areal-radius"
@@ -174,6 +193,9 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
         <QuantityField
           label={document.background.kind === "de-sitter" ? "Proper distance inward from the horizon" : "Proper distance above the horizon"}
           dimension="length"
+          lengthScales={scales}
+          valueSI={lab.properDistanceMetres}
+          hint={lengthHint(lab.properDistanceMetres, scales)}
           shown={formatQuantity(lab.properDistanceMetres, "length", { digits: 5 })}
           disabled={readOnly}
           onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: l } }))}
@@ -182,6 +204,11 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
       <LabSummary />
     </Group>
   );
+}
+
+/** A charge that is a whole number of elementary charges (up to a million), shown in e rather than in coulombs. */
+function isWholeMultiple(inE: number): boolean {
+  return inE !== 0 && Math.abs(inE) <= 1e6 && Math.abs(inE - Math.round(inE)) < 1e-6;
 }
 
 /** A mass, or nothing at all (empty text): the lab's mass is optional. */
@@ -201,7 +228,9 @@ function SourceFields({ document, readOnly, measuredProfile }: { document: Physi
         <QuantityField
           label="Charge"
           dimension="charge"
-          hint={`= ${compactNumber(source.chargeCoulombs / elementaryCharge.value)} e; type e.g. 100 e or 1.6e-17 C`}
+          hint={`= ${compactNumber(source.chargeCoulombs / elementaryCharge.value, 4)} e = ${formatQuantity(source.chargeCoulombs, "charge", { digits: 4 })}; type e.g. 100 e or 1.6e-17 C`}
+          valueSI={source.chargeCoulombs}
+          initialUnit={isWholeMultiple(source.chargeCoulombs / elementaryCharge.value) ? "e" : undefined}
           shown={formatQuantity(source.chargeCoulombs, "charge", { digits: 4 })}
           disabled={readOnly}
           onCommit={(q) => edit("Set charge", (d) => ({ ...d, source: { ...d.source, chargeCoulombs: q } }))}
@@ -209,6 +238,7 @@ function SourceFields({ document, readOnly, measuredProfile }: { document: Physi
         <QuantityField
           label="Mass"
           dimension="mass"
+          valueSI={source.massKg}
           shown={formatQuantity(source.massKg, "mass", { digits: 4 })}
           disabled={readOnly}
           onCommit={(m) => edit("Set source mass", (d) => ({ ...d, source: { ...d.source, massKg: m } }))}
@@ -249,7 +279,9 @@ function SourceFields({ document, readOnly, measuredProfile }: { document: Physi
         <QuantityField
           label="Full separation d"
           dimension="length"
-          hint={measuredProfile ? "The measured profile's peak: a new value rescales the profile's samples." : undefined}
+          hint={measuredProfile ? "The measured profile's peak: a new value rescales the profile's samples." : lengthHint(separation.distanceMetres, lengthScalesOf(document.background))}
+          lengthScales={lengthScalesOf(document.background)}
+          valueSI={separation.distanceMetres}
           shown={formatQuantity(separation.distanceMetres, "length", { digits: 4 })}
           disabled={readOnly}
           testId="separation-distance"

@@ -34,7 +34,7 @@ const FORMULA_HINT = "σ(t): 0 together, 1 fully apart; t in seconds from 0 to t
 function DurationField({ seconds, testId, onCommit }: { seconds: number; testId: string; onCommit(seconds: number): CommitResult }) {
   const readOnly = useEditor((s) => s.readOnly);
   return (
-    <div className="w-32">
+    <div className="w-40">
       <QuantityField
         compact
         label="Duration"

@@ -92,7 +92,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
       : {
           code: "separation-jump",
           status: "invalid",
-          message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or teleport): the counts omit the jump, which would make them diverge`,
+          message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or the separation changes with no time between): the counts omit the jump, which would make them diverge`,
         },
   ];
 }
@@ -148,7 +148,7 @@ function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResul
     code: "acceleration-jump",
     status: "caution",
     message:
-      "the branch acceleration jumps (smoothstep or cosine ramps): the gravitational far-field count grows like the logarithm " +
+      "the branch acceleration jumps (cubic or cosine ramps): the gravitational far-field count grows like the logarithm " +
       `of the bandwidth and is reported at a time step of ${formatQuantity(gravity.convergence.timeStepSeconds, "time")}; use minimum-jerk ramps for a resolution-free number`,
   };
 }

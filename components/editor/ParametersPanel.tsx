@@ -109,9 +109,9 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
 
 const PLACEMENT_WORDS: Record<BackgroundKind, Partial<Record<LabPlacement["placement"], string>>> = {
   minkowski: { inertial: "at rest (inertial)" },
-  rindler: { inertial: "accelerated, c²/a from the horizon" },
-  schwarzschild: { "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance above the horizon" },
-  "de-sitter": { inertial: "at the centre", "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance inward from the horizon" },
+  rindler: { "uniformly-accelerated": "uniformly accelerated, c²/a from the horizon" },
+  schwarzschild: { "areal-radius": "areal radius", "proper-distance-from-horizon": "proper distance above the horizon" },
+  "de-sitter": { "areal-radius": "areal radius (0: the static geodesic observer at the centre)", "proper-distance-from-horizon": "proper distance inward from the horizon" },
 };
 
 /**
@@ -189,7 +189,7 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
           onCommit={(r) => edit("Set lab radius", (d) => ({ ...d, lab: { placement: "areal-radius", arealRadiusMetres: r } }))}
         />
       )}
-      {lab.placement === "proper-distance-above-horizon" && (
+      {lab.placement === "proper-distance-from-horizon" && (
         <QuantityField
           label={document.background.kind === "de-sitter" ? "Proper distance inward from the horizon" : "Proper distance above the horizon"}
           dimension="length"
@@ -198,7 +198,7 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
           hint={lengthHint(lab.properDistanceMetres, scales)}
           shown={formatQuantity(lab.properDistanceMetres, "length", { digits: 5 })}
           disabled={readOnly}
-          onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: l } }))}
+          onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-from-horizon", properDistanceMetres: l } }))}
         />
       )}
       <LabSummary />

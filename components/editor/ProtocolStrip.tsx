@@ -21,7 +21,7 @@ import { usePanelValue } from "./usePacedDuringDrag";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
   "minimum-jerk": "minimum jerk",
-  smoothstep: "smoothstep",
+  cubic: "cubic (3u² − 2u³)",
   cosine: "cosine",
   linear: "linear (kinked)",
 };

@@ -118,7 +118,7 @@ function CreateLinkForm({ projectId, scenarioId, onCreated }: { projectId: strin
       <div className="flex flex-wrap items-start gap-4">
         <TextField label="Label" placeholder="for the referee" autoComplete="off" className="min-w-64 flex-1" error={errors.label?.message} {...form.register("label")} />
         <SelectField
-          label="Works for"
+          label="Expires after"
           className="w-44"
           error={errors.expiresInDays?.message}
           {...form.register("expiresInDays", { setValueAs: (value: string | number | null) => (value === "" || value === null ? null : Number(value)) })}

@@ -3,7 +3,7 @@
  * ramp (a recombination ramp runs the same shape backwards, 1 − σ(u)), and its rate dσ/du.
  *
  * Smoothness matters for the far-field count: where the velocity jumps (linear), the photon number grows without
- * bound as the time resolution shrinks; where only the acceleration jumps (smoothstep, cosine), |ṽ(ω)|² falls as
+ * bound as the time resolution shrinks; where only the acceleration jumps (cubic 3u² − 2u³, cosine), |ṽ(ω)|² falls as
  * ω⁻⁴; minimum-jerk (position C², acceleration continuous, the jerk jumps at the ends) falls as ω⁻⁶.
  * Minimum-jerk: T. Flash and N. Hogan, J. Neurosci. 5, 1688 (1985), the quintic 10u³ − 15u⁴ + 6u⁵.
  */
@@ -21,7 +21,7 @@ export interface RampShapeDefinition {
 }
 
 export const rampShapes: Readonly<Record<RampShape, RampShapeDefinition>> = {
-  smoothstep: {
+  cubic: {
     fraction: (u) => u * u * (3 - 2 * u),
     rate: (u) => 6 * u * (1 - u),
     peakRate: 1.5,

@@ -389,7 +389,7 @@ describe("history: what changed, and restore", () => {
   beforeAll(async () => {
     f = await projectFixture();
     const second = { ...defaultScenarioDocument(), protocol: { ...defaultScenarioDocument().protocol, hold: { durationSeconds: 0.5 } } };
-    const third = { ...second, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 } };
+    const third = { ...second, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 }, lab: { placement: "uniformly-accelerated" } };
     const v2 = await call(scenarioRoute.PUT, "PUT", "/x", { as: f.users.editor, params: S(), body: { version: 1, title: "Longer hold", document: second } });
     expect(v2.status).toBe(200);
     const v3 = await call(scenarioRoute.PUT, "PUT", "/x", { as: f.users.editor, params: S(), body: { version: 2, document: third } });

@@ -95,7 +95,7 @@ describe("the Schwarzschild electromagnetic hold rate of computeScenario", () =>
     const increments = [1, 2].map((i) => valueOf(counts[i].holdDrivenQuanta) - valueOf(counts[i - 1].holdDrivenQuanta));
     expect(increments[1] / increments[0]).toBeCloseTo((100 - 10) / (10 - 1), 6);
     // The same protocol in the Rindler wedge: its hold-driven part is the same rate × ∫σ²dτ.
-    const rindler = computeScenario({ ...hovering(6, "radial", 10), background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "inertial" } }).electromagnetic;
+    const rindler = computeScenario({ ...hovering(6, "radial", 10), background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "uniformly-accelerated" } }).electromagnetic;
     expect(valueOf(rindler.holdDrivenQuanta) / valueOf(rindler.holdRate)).toBeCloseTo(valueOf(counts[1].holdDrivenQuanta) / valueOf(counts[1].holdRate), 9);
   });
 
@@ -108,7 +108,7 @@ describe("the Schwarzschild electromagnetic hold rate of computeScenario", () =>
 
   it("reports the near-horizon limit for a lab whose areal radius rounds onto the horizon, and says so", () => {
     const rs = 2 * m;
-    const doc = { ...hovering(3, "tangential"), lab: { placement: "proper-distance-above-horizon", properDistanceMetres: 1e-9 * rs } } as ScenarioDocument;
+    const doc = { ...hovering(3, "tangential"), lab: { placement: "proper-distance-from-horizon", properDistanceMetres: 1e-9 * rs } } as ScenarioDocument;
     const result = computeScenario(doc);
     const a = valueOf(result.background.labProperAcceleration);
     const qd = doc.source.chargeCoulombs * doc.separation.distanceMetres;

@@ -28,7 +28,8 @@ const SHAPE_WORDS: Record<RampShape, string> = {
 
 const SEGMENT_WORDS: Record<SegmentName, string> = { separation: "Separation", hold: "Hold", recombination: "Recombination" };
 
-const FORMULA_HINT = "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration; t, pi, e, arithmetic and elementary functions.";
+const FORMULA_HINT =
+  "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration. Numbers, t, pi and e (Euler's number here), + − * / ^, comparisons, a ? b : c, sin cos exp log sqrt and the other elementary functions; no units (docs: file formats).";
 
 /** A duration typed with its unit, read-only for a viewer. */
 function DurationField({ seconds, testId, onCommit }: { seconds: number; testId: string; onCommit(seconds: number): CommitResult }) {

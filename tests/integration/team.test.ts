@@ -406,6 +406,7 @@ describe("history: what changed, and restore", () => {
     expect(res.body.diff.changes).toEqual([
       { path: "background.accelerationMetresPerSecondSquared", kind: "added", after: 1e18 },
       { path: "background.kind", kind: "changed", before: "minkowski", after: "rindler" },
+      { path: "lab.placement", kind: "changed", before: "inertial", after: "uniformly-accelerated" },
       { path: "protocol.hold.durationSeconds", kind: "changed", before: 0.1, after: 0.5 },
     ]);
     const same = await diff("2", { against: "2" });

@@ -10,7 +10,10 @@
  * one scenario it names while it is live, and do nothing else). A dead token of either kind is not found.
  */
 import type { Kysely } from "kysely";
+import type { ProjectAction } from "../contracts/dto";
 import type { Database, ProjectRole, SiteRole } from "./schema";
+
+export type { ProjectAction };
 import { AppError, forbidden, notFound } from "./errors";
 import { isUuid } from "./ids";
 
@@ -19,17 +22,6 @@ export interface Actor {
   siteRole: SiteRole;
 }
 
-export type ProjectAction =
-  | "project:read"
-  | "project:rename"
-  | "project:delete"
-  | "members:read"
-  | "members:manage"
-  | "members:invite"
-  | "members:audit"
-  | "share:manage"
-  | "scenario:read"
-  | "scenario:write";
 
 export type SiteAction = "users:list" | "users:set-role";
 

@@ -6,25 +6,15 @@ import "server-only";
  * the object is removed again if the commit fails.
  */
 import { randomUUID } from "node:crypto";
-import type { Kysely } from "kysely";
-import type { ObjectStore } from "../lib/storage";
+import type { InferResult, Kysely } from "kysely";
 import { type Actor, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { notFound } from "./errors";
 import { isUuid } from "./ids";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
 import { assertScenarioInProject } from "./scenarios";
 import type { Database } from "./schema";
-
-export interface AttachmentDto {
-  id: string;
-  scenarioId: string;
-  fileName: string;
-  mediaType: string;
-  sizeBytes: number;
-  uploadedBy: PersonDto | null;
-  createdAt: string;
-}
+import type { AttachmentDto } from "../contracts/dto";
 
 /** Throws unless the caller may read the scenario's files (404 for a project or scenario they cannot see). */
 export async function assertMayReadScenario(db: Kysely<Database>, actor: Actor, projectId: string, scenarioId: string): Promise<void> {
@@ -50,7 +40,7 @@ function attachmentQuery(db: Kysely<Database>, projectId: string, scenarioId: st
     .where("a.scenarioId", "=", scenarioId);
 }
 
-type AttachmentRow = Awaited<ReturnType<ReturnType<typeof attachmentQuery>["executeTakeFirstOrThrow"]>>;
+type AttachmentRow = InferResult<ReturnType<typeof attachmentQuery>>[number];
 
 function toDto(r: AttachmentRow): AttachmentDto {
   return {
@@ -105,6 +95,17 @@ function auditFile(db: Kysely<Database>, actor: Actor, action: "attachment_added
     role: null,
     previousRole: null,
   });
+}
+
+/**
+ * What this repository needs of an object store (lib/storage.ts's store is one): the port is declared here, by
+ * its user, so the data access layer depends on no server integration of its own.
+ */
+export interface ObjectStore {
+  put(key: string, body: Uint8Array, contentType: string): Promise<void>;
+  delete(key: string): Promise<void>;
+  /** A signed GET link to the object, served as a download with this file name. */
+  downloadUrl(key: string, fileName: string, contentType: string): Promise<{ url: string; expiresAt: Date }>;
 }
 
 /**

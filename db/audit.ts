@@ -2,24 +2,8 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { type Actor, requireProjectAction } from "./access";
 import type { AuditAction, Database, NewProjectAuditEntry, ProjectRole } from "./schema";
-import { person, type PersonDto } from "./people";
-
-/** One change in the project: who did what to whom (a membership change) or to which scenario (a share link, a file), and when. */
-export interface AuditEntryDto {
-  id: string;
-  at: string;
-  action: AuditAction;
-  /** Null when the account that did it has since been deleted. */
-  actor: PersonDto | null;
-  /** The person concerned; null for entries about a scenario. */
-  target: { userId: string | null; name: string | null; email: string } | null;
-  role: ProjectRole | null;
-  previousRole: ProjectRole | null;
-  /** The scenario concerned (title as it is now; null once deleted, or for membership changes). */
-  scenario: { id: string; title: string } | null;
-  /** What was concerned, named at the time: a share link's label, a file's name. */
-  subject: string | null;
-}
+import { person } from "./people";
+import type { AuditEntryDto } from "../contracts/dto";
 
 /** How many entries the members page shows, newest first. */
 export const AUDIT_PAGE_SIZE = 100;

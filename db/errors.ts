@@ -1,24 +1,7 @@
 /** Domain errors raised by the data access layer; route handlers turn them into the one error shape. */
-export type ErrorCode =
-  | "bad_request"
-  | "validation_failed"
-  | "unauthenticated"
-  | "forbidden"
-  | "not_found"
-  | "conflict"
-  | "version_conflict"
-  | "payload_too_large"
-  | "unsupported_media_type"
-  | "unprocessable"
-  | "compute_too_costly"
-  | "compute_over_budget"
-  | "rate_limited"
-  | "service_unavailable";
+import type { ErrorCode, FieldIssue } from "../contracts/errors";
 
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
+export type { ErrorCode, FieldIssue };
 
 export class AppError extends Error {
   constructor(

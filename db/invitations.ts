@@ -1,5 +1,5 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { type Actor, assertInvitationAcceptable, invitationIsOpen, requireProjectAction } from "./access";
 import { recordAudit } from "./audit";
 import { conflict, notFound } from "./errors";
@@ -7,22 +7,11 @@ import { isUuid } from "./ids";
 import { insertMember } from "./members";
 import { hashToken, newToken } from "./tokens";
 import type { Database, InvitedRole, ProjectInvitationUpdate } from "./schema";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
+import type { InvitationDto } from "../contracts/dto";
 
 /** How long an invitation link works. */
 export const INVITATION_DAYS = 7;
-
-export interface InvitationDto {
-  id: string;
-  email: string;
-  role: InvitedRole;
-  /** "expired": still listed, so an owner can send it again or revoke it. */
-  status: "pending" | "expired";
-  invitedBy: PersonDto | null;
-  createdAt: string;
-  sentAt: string;
-  expiresAt: string;
-}
 
 /** What the e-mail needs; the token exists only here and in the e-mail, never in the database. */
 export interface InvitationLetter {
@@ -61,7 +50,7 @@ function invitationQuery(db: Kysely<Database>, projectId: string) {
     .where("i.revokedAt", "is", null);
 }
 
-type InvitationRow = Awaited<ReturnType<ReturnType<typeof invitationQuery>["executeTakeFirstOrThrow"]>>;
+type InvitationRow = InferResult<ReturnType<typeof invitationQuery>>[number];
 
 function toDto(r: InvitationRow, now = new Date()): InvitationDto {
   return {

@@ -5,14 +5,7 @@ import { recordAudit } from "./audit";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
 import type { Database, ProjectRole } from "./schema";
-
-export interface MemberDto {
-  userId: string;
-  email: string;
-  name: string;
-  role: ProjectRole;
-  joinedAt: string;
-}
+import type { MemberDto } from "../contracts/dto";
 
 export async function listMembers(db: Kysely<Database>, actor: Actor, projectId: string): Promise<MemberDto[]> {
   await requireProjectAction(db, actor, projectId, "members:read");

@@ -1,19 +1,8 @@
 import "server-only";
-import { type Kysely, sql } from "kysely";
+import { type InferResult, type Kysely, sql } from "kysely";
 import { type Actor, type ProjectAction, allowedProjectActions, requireProjectAction } from "./access";
 import type { Database, ProjectRole } from "./schema";
-
-export interface ProjectDto {
-  id: string;
-  name: string;
-  description: string;
-  role: ProjectRole;
-  /** What the caller's role allows, so the UI can hide what it cannot do (the server still decides). */
-  can: ProjectAction[];
-  scenarioCount: number;
-  lastChangedAt: string;
-  createdAt: string;
-}
+import type { ProjectDto } from "../contracts/dto";
 
 function projectQuery(db: Kysely<Database>, userId: string) {
   return db
@@ -32,7 +21,7 @@ function projectQuery(db: Kysely<Database>, userId: string) {
     ]);
 }
 
-type ProjectRow = Awaited<ReturnType<ReturnType<typeof projectQuery>["executeTakeFirstOrThrow"]>>;
+type ProjectRow = InferResult<ReturnType<typeof projectQuery>>[number];
 
 function toDto(row: ProjectRow): ProjectDto {
   return {

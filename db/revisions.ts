@@ -1,25 +1,13 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
-import { diffDocuments, type DocumentDiff } from "../lib/document-diff";
+import { diffDocuments, type DocumentDiff } from "../contracts/json-diff";
 import { AppError, notFound } from "./errors";
 import type { Database } from "./schema";
-import { person, type PersonDto } from "./people";
-import { assertScenarioInProject, saveNextVersion, type ScenarioDto } from "./scenarios";
-
-export interface RevisionSummaryDto {
-  version: number;
-  title: string;
-  schemaVersion: number;
-  createdAt: string;
-  createdBy: PersonDto | null;
-}
-
-export interface RevisionDto extends RevisionSummaryDto {
-  document: ScenarioDocument | null;
-  documentIssues: { path: string; message: string }[] | null;
-}
+import { person } from "./people";
+import { assertScenarioInProject, saveNextVersion } from "./scenarios";
+import type { RevisionDiffDto, RevisionDto, RevisionSummaryDto, ScenarioDto } from "../contracts/dto";
 
 /** Revision numbers are PostgreSQL integers. */
 export const MAX_REVISION = 2_147_483_647;
@@ -41,7 +29,7 @@ function revisionQuery(db: Kysely<Database>, projectId: string, scenarioId: stri
     .where("r.scenarioId", "=", scenarioId);
 }
 
-type RevisionRow = Awaited<ReturnType<ReturnType<typeof revisionQuery>["executeTakeFirstOrThrow"]>>;
+type RevisionRow = InferResult<ReturnType<typeof revisionQuery>>[number];
 
 function toSummary(r: RevisionRow): RevisionSummaryDto {
   return {
@@ -80,14 +68,6 @@ export async function getRevision(
     document: parsed.ok ? parsed.document : null,
     documentIssues: parsed.ok ? null : parsed.issues,
   };
-}
-
-export interface RevisionDiffDto extends DocumentDiff {
-  /** The older side (?against=) and the newer side (the revision in the path). */
-  from: RevisionSummaryDto;
-  to: RevisionSummaryDto;
-  /** The title, when it differs; titles live beside the document. */
-  title: { before: string; after: string } | null;
 }
 
 async function storedRevision(db: Kysely<Database>, projectId: string, scenarioId: string, version: number) {

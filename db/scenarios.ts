@@ -1,36 +1,14 @@
 import "server-only";
-import { type Kysely, sql } from "kysely";
+import { type InferResult, type Kysely, sql } from "kysely";
 import { differsOnlyInDisplay } from "../physics/scenario/compare";
-import { rangeIssues } from "../physics/scenario/ranges";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { type Actor, requireProjectAction } from "./access";
 import { AppError, invalid, notFound } from "./errors";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
 import type { Database } from "./schema";
-
-export type { PersonDto };
-
-export interface ScenarioSummaryDto {
-  id: string;
-  projectId: string;
-  title: string;
-  backgroundKind: string;
-  schemaVersion: number;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-  updatedBy: PersonDto | null;
-}
-
-export interface ScenarioDto extends ScenarioSummaryDto {
-  /** The document upgraded to the current schema version; null when it could not be read (see documentIssues). */
-  document: ScenarioDocument | null;
-  /** Why a stored document could not be read, when it could not; the raw document is kept untouched. */
-  documentIssues: { path: string; message: string }[] | null;
-  createdBy: PersonDto | null;
-}
+import type { ScenarioDto, ScenarioPage, ScenarioSummaryDto } from "../contracts/dto";
 
 export type ScenarioSortKey = "title" | "updatedAt" | "createdAt" | "backgroundKind";
 
@@ -44,25 +22,17 @@ export interface ScenarioListQuery {
   backgroundKind?: string;
 }
 
-export interface ScenarioPage {
-  items: ScenarioSummaryDto[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
 /**
- * Validates (and upgrades) a document from a client, and checks every parameter against the range where the
- * computation is defined (physics/scenario/ranges.ts); throws a 400 listing every problem with its field path.
- * `ranges: false` only re-reads a stored document that is kept as it is (a title change).
+ * The stored document, re-read (and upgraded) to be kept as it is when only the title changes; a stored document
+ * that cannot be read refuses the change with its problems. Documents from clients are validated by the request
+ * contract (contracts/requests.ts), not here.
  */
-export function validDocument(input: unknown, options: { ranges?: boolean } = {}): ScenarioDocument {
-  const parsed = parseScenarioDocument(input);
-  const issues = parsed.ok ? (options.ranges === false ? [] : rangeIssues(parsed.document)) : parsed.issues;
-  if (!parsed.ok || issues.length > 0) {
+function storedDocument(stored: unknown): ScenarioDocument {
+  const parsed = parseScenarioDocument(stored);
+  if (!parsed.ok) {
     throw invalid(
-      "the scenario document is not valid",
-      issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })),
+      "the stored scenario document cannot be read",
+      parsed.issues.map((i) => ({ path: i.path ? `document.${i.path}` : "document", message: i.message })),
     );
   }
   return parsed.document;
@@ -89,7 +59,7 @@ function baseQuery(db: Kysely<Database>) {
     ]);
 }
 
-type SummaryRow = Awaited<ReturnType<ReturnType<typeof baseQuery>["executeTakeFirstOrThrow"]>>;
+type SummaryRow = InferResult<ReturnType<typeof baseQuery>>[number];
 
 
 function toSummary(row: SummaryRow): ScenarioSummaryDto {
@@ -242,7 +212,7 @@ export async function updateScenario(
         { currentVersion: current.version },
       );
     }
-    return { title: input.title ?? current.title, document: input.document ?? validDocument(current.document, { ranges: false }) };
+    return { title: input.title ?? current.title, document: input.document ?? storedDocument(current.document) };
   }, { amendDisplay: true });
 }
 

@@ -3,12 +3,13 @@
  * between them). Generated<> marks columns the database fills in.
  */
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from "kysely";
+import type { AuditAction, InvitedRole, ProjectRole, SiteRole } from "../contracts/dto";
+
+export type { AuditAction, InvitedRole, ProjectRole, SiteRole };
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json = ColumnType<unknown, string, string>;
 
-export type SiteRole = "admin" | "member";
-export type ProjectRole = "owner" | "editor" | "viewer";
 
 export interface UsersTable {
   id: Generated<string>;
@@ -96,7 +97,6 @@ export interface ScenarioRevisionsTable {
   createdAt: Generated<Date>;
 }
 
-export type InvitedRole = Exclude<ProjectRole, "owner">;
 
 export interface ProjectInvitationsTable {
   id: Generated<string>;
@@ -130,21 +130,6 @@ export interface ShareLinksTable {
   lastViewedAt: Date | null;
 }
 
-export type AuditAction =
-  | "member_added"
-  | "invited"
-  | "invitation_resent"
-  | "invitation_revoked"
-  | "invitation_accepted"
-  | "role_changed"
-  | "member_removed"
-  | "member_left"
-  | "ownership_transferred"
-  | "share_link_created"
-  | "share_link_revoked"
-  | "attachment_added"
-  | "attachment_deleted"
-  | "scenario_imported";
 
 export interface ProjectAuditTable {
   id: Generated<string>;

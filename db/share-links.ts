@@ -1,38 +1,15 @@
 import "server-only";
-import type { Kysely } from "kysely";
+import type { InferResult, Kysely } from "kysely";
 import { parseScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 import { recordAudit } from "./audit";
 import { type Actor, assertShareLinkAccess, shareLinkIsOpen, requireProjectAction } from "./access";
 import { conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
-import { person, type PersonDto } from "./people";
+import { person } from "./people";
 import { assertScenarioInProject } from "./scenarios";
 import { hashToken, newToken } from "./tokens";
 import type { Database } from "./schema";
-
-export interface ShareLinkDto {
-  id: string;
-  label: string;
-  status: "active" | "expired" | "revoked";
-  createdAt: string;
-  createdBy: PersonDto | null;
-  expiresAt: string | null;
-  revokedAt: string | null;
-  viewCount: number;
-  lastViewedAt: string | null;
-}
-
-/** What a share link's holder sees: the scenario and nothing else of its project (no names, no ids). */
-export interface SharedScenarioDto {
-  title: string;
-  backgroundKind: string;
-  version: number;
-  updatedAt: string;
-  document: ScenarioDocument | null;
-  documentIssues: { path: string; message: string }[] | null;
-  /** When the link stops working, if it does. */
-  linkExpiresAt: string | null;
-}
+import type { ShareLinkDto, SharedScenarioDto } from "../contracts/dto";
 
 function linkQuery(db: Kysely<Database>, projectId: string, scenarioId: string) {
   return db
@@ -43,7 +20,7 @@ function linkQuery(db: Kysely<Database>, projectId: string, scenarioId: string) 
     .where("l.scenarioId", "=", scenarioId);
 }
 
-type LinkRow = Awaited<ReturnType<ReturnType<typeof linkQuery>["executeTakeFirstOrThrow"]>>;
+type LinkRow = InferResult<ReturnType<typeof linkQuery>>[number];
 
 function toDto(r: LinkRow, now = new Date()): ShareLinkDto {
   const status = r.revokedAt ? "revoked" : r.expiresAt && r.expiresAt <= now ? "expired" : "active";

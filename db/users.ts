@@ -6,15 +6,7 @@ import { type Actor, assertSiteAccess } from "./access";
 import { AppError, conflict, notFound } from "./errors";
 import { isUuid } from "./ids";
 import type { Database, SiteRole, User } from "./schema";
-
-export interface UserDto {
-  id: string;
-  email: string;
-  name: string;
-  siteRole: SiteRole;
-  emailVerifiedAt: string | null;
-  createdAt: string;
-}
+import type { UserDto } from "../contracts/dto";
 
 const BCRYPT_ROUNDS = 10;
 

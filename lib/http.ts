@@ -2,27 +2,11 @@ import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
 import type { Actor } from "../db/access";
-import { AppError, type ErrorCode, type FieldIssue } from "../db/errors";
+import { HTTP_STATUS_OF_ERROR } from "../contracts/errors";
+import { AppError, type FieldIssue } from "../db/errors";
 import { firstTextProblem } from "../physics/scenario/text";
 import { readBodyText } from "./request-body";
 import { actorFromRequest } from "./session";
-
-const statusOf: Record<ErrorCode, number> = {
-  bad_request: 400,
-  validation_failed: 400,
-  unauthenticated: 401,
-  forbidden: 403,
-  not_found: 404,
-  conflict: 409,
-  version_conflict: 409,
-  payload_too_large: 413,
-  unsupported_media_type: 415,
-  unprocessable: 422,
-  compute_too_costly: 422,
-  compute_over_budget: 422,
-  rate_limited: 429,
-  service_unavailable: 503,
-};
 
 /** Largest JSON body a route accepts (a sampled protocol of many points fits). */
 export const MAX_JSON_BYTES = 8 * 1024 * 1024;
@@ -32,7 +16,7 @@ export function errorResponse(error: AppError): NextResponse {
   // 429 and 503 say when to come back: details.retryAfterSeconds, in the body and as the standard header.
   const retryAfter = error.details?.retryAfterSeconds;
   const headers = typeof retryAfter === "number" ? { "Retry-After": String(Math.max(1, Math.ceil(retryAfter))) } : undefined;
-  return NextResponse.json(body, { status: statusOf[error.code], headers });
+  return NextResponse.json(body, { status: HTTP_STATUS_OF_ERROR[error.code], headers });
 }
 
 function zodIssues(error: z.ZodError, prefix = ""): FieldIssue[] {

@@ -6,7 +6,7 @@
  */
 import { extendZodWithOpenApi, OpenAPIRegistry, OpenApiGeneratorV31 } from "@asteasolutions/zod-to-openapi";
 import { z } from "zod";
-import * as contracts from "./contracts";
+import * as contracts from "../contracts/requests";
 import { scenarioDocumentSchema } from "../physics/scenario/schema";
 
 // The generator's documented set-up: it adds .openapi() to zod's types, used here only to name the error shape.

@@ -6,7 +6,7 @@ import "server-only";
  * a byte is read. tests/unit/app/body-reading.test.ts fails when a route reads its body any other way.
  */
 import { AppError } from "../db/errors";
-import { fileSize } from "./contracts";
+import { fileSize } from "../contracts/requests";
 
 export const bodyTooLarge = (what: string, maxBytes: number, size?: number) =>
   new AppError("payload_too_large", `${what} is ${size === undefined ? "larger than the limit" : fileSize(size)}; the limit is ${fileSize(maxBytes)}`, undefined, {

@@ -4,7 +4,8 @@ import { getToken } from "next-auth/jwt";
 import type { NextRequest } from "next/server";
 import { getDb } from "../db";
 import type { Actor } from "../db/access";
-import { findUserById, type UserDto, toUserDto } from "../db/users";
+import type { UserDto } from "../contracts/dto";
+import { findUserById, toUserDto } from "../db/users";
 import { authOptions, tokenSessionVersion, useSecureCookies } from "./auth";
 
 /**

@@ -9,7 +9,7 @@
  * - JSON: UTF-8 text that JSON.parse reads (RFC 8259).
  * - CSV: any other UTF-8 text without NUL bytes (RFC 4180 sets no signature).
  */
-import { ATTACHMENT_EXTENSIONS } from "./contracts";
+import { ATTACHMENT_EXTENSIONS } from "../contracts/requests";
 
 export type AttachmentKind = "pdf" | "png" | "svg" | "json" | "csv";
 

@@ -5,7 +5,7 @@
  * "decoherence" entry of physics/estimators/sources.ts.
  */
 import { quantityFromLog10 } from "./estimators/quantity";
-import type { Quantity } from "./result";
+import type { Quantity } from "./result-basics";
 
 const LOG10_TWO = Math.log10(2);
 const LOG10_LARGEST = Math.log10(Number.MAX_VALUE);

@@ -3,23 +3,12 @@
  * key of the `sources` entry (physics/estimators/sources.ts) that says where its formula comes from.
  */
 import type { BackgroundKind } from "./scenario/schema";
-import type { SourceKey } from "./estimators/sources";
-import type { EnvironmentBudget } from "./environment/from-document";
+import type { EnvironmentBudget } from "./environment/types";
+import type { Channel, FlagStatus, KinkReport, Quantity, ValidityFlag } from "./result-basics";
+
+export type { Channel, FlagStatus, KinkReport, Quantity, ValidityFlag };
 
 export const RESULT_FORMAT_VERSION = 1 as const;
-
-/**
- * A reported number. `value` is null when the number lies outside the range of a double (then only `log10`
- * holds it); `log10` is null when the value is exactly zero.
- */
-export interface Quantity {
-  value: number | null;
-  log10: number | null;
-  unit: string;
-  sourceKey: SourceKey;
-}
-
-export type Channel = "electromagnetic" | "gravitational";
 
 /** How the hold rate of a channel was obtained. */
 export type RateRegime =
@@ -84,21 +73,6 @@ export interface ChannelResult {
   /** Hold time at which the hold-driven part reaches one quantum; null where there is no hold-driven part. */
   decoherenceTime: Quantity | null;
   convergence: Convergence;
-}
-
-export type FlagStatus = "ok" | "note" | "caution" | "invalid" | "not-applicable";
-
-export interface ValidityFlag {
-  code: string;
-  status: FlagStatus;
-  message: string;
-  /** The dimensionless measure the status was judged on, when there is one. */
-  measure?: number;
-}
-
-export interface KinkReport {
-  timeSeconds: number;
-  kind: "kink" | "jump";
 }
 
 export interface ProtocolSummary {

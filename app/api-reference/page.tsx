@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { ApiReference } from "@/components/reference/ApiReference";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { linkStyles } from "@/components/ui/styles";
+import { openApiDocument, operations } from "@/lib/openapi";
 
 export const metadata: Metadata = { title: "API reference" };
 
@@ -16,7 +17,7 @@ export default function ApiReferencePage() {
         . Errors always have the shape <code className="font-mono text-sm">{`{ "error": { "code", "message", "fields" } }`}</code>, with each
         field&apos;s document path.
       </PageHeader>
-      <ApiReference />
+      <ApiReference document={openApiDocument()} operations={operations} />
     </>
   );
 }

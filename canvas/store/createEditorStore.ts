@@ -11,7 +11,7 @@ import { dragHandleTool } from "../tools/drag-handle";
 import type { ToolContext } from "../tools/types";
 import { emptyHistory, recordEntry, redoStep, undoStep } from "./history";
 import { diffValues } from "./patches";
-import { createLabViewSelectors } from "./selectors";
+import { createLabViewSelectors } from "./lab-view-selectors";
 import { createSceneBuilder } from "../kernels/diagram/scene";
 import { memoizeLast } from "../kernels/memoize";
 import type { EditorData, EditorState } from "./state";

@@ -3,8 +3,9 @@
  * after, so one list replays forwards (redo) and backwards (undo) exactly. A diff shares nothing mutable: values are
  * taken from immutable documents, and applying a patch copies only the objects along its path.
  */
+import { type PathKey, walkDifferences } from "../../contracts/json-diff";
 
-export type PathKey = string | number;
+export type { PathKey };
 
 export interface Patch {
   path: PathKey[];
@@ -15,16 +16,11 @@ export interface Patch {
 
 const isPlainObject = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
-export function diffValues(before: unknown, after: unknown, path: PathKey[] = []): Patch[] {
-  if (Object.is(before, after)) return [];
-  if (isPlainObject(before) && isPlainObject(after)) {
-    const keys = new Set([...Object.keys(before), ...Object.keys(after)]);
-    return [...keys].flatMap((key) => diffValues(before[key], after[key], [...path, key]));
-  }
-  if (Array.isArray(before) && Array.isArray(after) && before.length === after.length) {
-    return before.flatMap((item, i) => diffValues(item, after[i], [...path, i]));
-  }
-  return [{ path, before, after }];
+/** The patches from `before` to `after`: the one JSON diff walker, arrays of a new length replaced whole. */
+export function diffValues(before: unknown, after: unknown): Patch[] {
+  const patches: Patch[] = [];
+  walkDifferences(before, after, (difference) => void patches.push(difference), { arrays: "whole" });
+  return patches;
 }
 
 function setIn(target: unknown, path: PathKey[], value: unknown): unknown {

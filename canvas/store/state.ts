@@ -4,12 +4,13 @@ import type { ScenarioDocument, SchemaIssue } from "@/physics/scenario/schema";
 import type { ComputeIssue, ComputeOutcome, RecombinationOptimum, ScenarioResult, SweepParameter, SweepResult } from "../compute-client";
 import type { DragStart, ProtocolPlan } from "../kernels/lab-view/drag-plan";
 import type { HandleId } from "../kernels/lab-view/handles";
-import type { LabKeyEvent, LabPointerEvent } from "../tools/types";
+import type { LabKeyEvent, LabPointerEvent, LabToolState } from "../tools/lab-tool";
 import type { History } from "./history";
-import type { LabViewSelectors } from "./selectors";
+import type { LabViewSelectors } from "./lab-view-selectors";
+
+export type { LabToolState };
 import type { SceneOutcome } from "../kernels/diagram/scene";
 
-export type LabToolState = { name: "idle" } | { name: "dragging"; start: DragStart; plan: ProtocolPlan | null };
 
 export interface SaveState {
   /** The server version the document was last loaded at or saved as. */

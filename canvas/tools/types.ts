@@ -1,16 +1,9 @@
 /** Events the Lab view sends to its tool, in stage pixels, and the handlers each tool state may define. */
-import type { EditorState, LabToolState } from "../store/state";
+import type { EditorState } from "../store/state";
+import type { LabKeyEvent, LabPointerEvent, LabToolState } from "./lab-tool";
 
-export interface LabPointerEvent {
-  x: number;
-  y: number;
-  shiftKey: boolean;
-}
+export type { LabKeyEvent, LabPointerEvent, LabToolState };
 
-export interface LabKeyEvent {
-  key: string;
-  shiftKey: boolean;
-}
 
 export interface ToolContext {
   /** The store's state now (fresh on every call). */

@@ -14,7 +14,7 @@ import { Notice } from "@/components/ui/Notice";
 import { QueryView } from "@/components/ui/QueryStates";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
-import { displayNameSchema } from "@/lib/contracts";
+import { displayNameSchema } from "@/contracts/requests";
 
 const nameSchema = z.object({ name: displayNameSchema });
 

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { UserDto } from "@/db/users";
+import type { UserDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { UserDto };
 
@@ -9,14 +10,14 @@ export const accountKeys = { me: ["account"] as const };
 export function useAccount() {
   return useQuery({
     queryKey: accountKeys.me,
-    queryFn: () => apiFetch<{ user: UserDto }>("/api/account").then((r) => r.user),
+    queryFn: () => apiFetch<{ user: UserDto }>(apiPaths.account).then((r) => r.user),
   });
 }
 
 export function useUpdateAccount() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: { name: string }) => apiFetch<{ user: UserDto }>("/api/account", { method: "PATCH", json: input }).then((r) => r.user),
+    mutationFn: (input: { name: string }) => apiFetch<{ user: UserDto }>(apiPaths.account, { method: "PATCH", json: input }).then((r) => r.user),
     onSuccess: (user) => queryClient.setQueryData(accountKeys.me, user),
   });
 }
@@ -24,6 +25,6 @@ export function useUpdateAccount() {
 /** Ends every session of the account (this browser's too); the caller then clears its own cookie. */
 export function useSignOutEverywhere() {
   return useMutation({
-    mutationFn: () => apiFetch<void>("/api/account/sessions", { method: "DELETE" }),
+    mutationFn: () => apiFetch<void>(apiPaths.accountSessions, { method: "DELETE" }),
   });
 }

@@ -3,10 +3,9 @@
  * the server's error shape ({ error: { code, message, fields? } }), so forms and panels handle one kind of error.
  */
 
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
+import type { FieldIssue } from "@/contracts/errors";
+
+export type { FieldIssue };
 
 export class ApiError extends Error {
   constructor(

@@ -1,14 +1,13 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { RevisionDiffDto, RevisionDto } from "@/db/revisions";
-import type { ScenarioDto } from "@/db/scenarios";
+import type { RevisionDiffDto, RevisionDto, ScenarioDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
 import { scenarioKeys } from "./scenarios";
 import { projectKeys } from "./projects";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { RevisionDiffDto, RevisionDto };
 
-const revisionPath = (projectId: string, scenarioId: string, version: number) =>
-  `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}/revisions/${version}`;
+const revisionPath = apiPaths.revision;
 
 /** One stored revision; revisions never change, so it is never fetched twice. */
 export function useRevision(projectId: string, scenarioId: string, version: number | null) {

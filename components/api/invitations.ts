@@ -1,9 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { AuditEntryDto } from "@/db/audit";
-import type { InvitationDto } from "@/db/invitations";
-import type { MemberDto } from "@/db/members";
+import type { AuditEntryDto, InvitationDto, MemberDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
 import { projectKeys } from "./projects";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { AuditEntryDto, InvitationDto };
 export type InvitedRole = InvitationDto["role"];
@@ -13,13 +12,12 @@ export const invitationKeys = {
   audit: (projectId: string) => [...projectKeys.one(projectId), "audit"] as const,
 };
 
-const base = (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}`;
-const one = (projectId: string, invitationId: string) => `${base(projectId)}/invitations/${encodeURIComponent(invitationId)}`;
+const one = apiPaths.invitation;
 
 export function useInvitations(projectId: string, enabled = true) {
   return useQuery({
     queryKey: invitationKeys.all(projectId),
-    queryFn: () => apiFetch<{ invitations: InvitationDto[] }>(`${base(projectId)}/invitations`).then((r) => r.invitations),
+    queryFn: () => apiFetch<{ invitations: InvitationDto[] }>(apiPaths.invitations(projectId)).then((r) => r.invitations),
     enabled,
   });
 }
@@ -27,7 +25,7 @@ export function useInvitations(projectId: string, enabled = true) {
 export function useAudit(projectId: string, enabled = true) {
   return useQuery({
     queryKey: invitationKeys.audit(projectId),
-    queryFn: () => apiFetch<{ entries: AuditEntryDto[] }>(`${base(projectId)}/audit`).then((r) => r.entries),
+    queryFn: () => apiFetch<{ entries: AuditEntryDto[] }>(apiPaths.audit(projectId)).then((r) => r.entries),
     enabled,
   });
 }
@@ -42,7 +40,7 @@ export function useInvite(projectId: string) {
   const invalidate = useInvalidateProject(projectId);
   return useMutation({
     mutationFn: (input: { email: string; role: InvitedRole }) =>
-      apiFetch<{ invitation: InvitationDto }>(`${base(projectId)}/invitations`, { method: "POST", json: input }).then((r) => r.invitation),
+      apiFetch<{ invitation: InvitationDto }>(apiPaths.invitations(projectId), { method: "POST", json: input }).then((r) => r.invitation),
     onSuccess: invalidate,
   });
 }
@@ -68,7 +66,7 @@ export function useTransferOwnership(projectId: string) {
   const invalidate = useInvalidateProject(projectId);
   return useMutation({
     mutationFn: (userId: string) =>
-      apiFetch<{ members: MemberDto[] }>(`${base(projectId)}/ownership`, { method: "POST", json: { userId } }).then((r) => r.members),
+      apiFetch<{ members: MemberDto[] }>(apiPaths.ownership(projectId), { method: "POST", json: { userId } }).then((r) => r.members),
     onSuccess: invalidate,
   });
 }
@@ -76,7 +74,7 @@ export function useTransferOwnership(projectId: string) {
 export function useAcceptInvitation(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiFetch<{ projectId: string }>(`/api/invitations/${encodeURIComponent(token)}/accept`, { method: "POST" }),
+    mutationFn: () => apiFetch<{ projectId: string }>(apiPaths.acceptInvitation(token), { method: "POST" }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.all, exact: true }),
   });
 }

@@ -1,7 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { MemberDto } from "@/db/members";
+import type { MemberDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
 import { projectKeys } from "./projects";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { MemberDto };
 export type ProjectRole = MemberDto["role"];
@@ -10,8 +11,8 @@ export const memberKeys = {
   all: (projectId: string) => [...projectKeys.one(projectId), "members"] as const,
 };
 
-const base = (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/members`;
-const one = (projectId: string, userId: string) => `${base(projectId)}/${encodeURIComponent(userId)}`;
+const base = apiPaths.members;
+const one = apiPaths.member;
 
 export function useMembers(projectId: string) {
   return useQuery({

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { ProjectDto } from "@/db/projects";
+import type { ProjectDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { ProjectDto };
 export type ProjectAction = ProjectDto["can"][number];
@@ -13,14 +14,14 @@ export const projectKeys = {
 export function useProjects() {
   return useQuery({
     queryKey: projectKeys.all,
-    queryFn: () => apiFetch<{ projects: ProjectDto[] }>("/api/projects").then((r) => r.projects),
+    queryFn: () => apiFetch<{ projects: ProjectDto[] }>(apiPaths.projects).then((r) => r.projects),
   });
 }
 
 export function useProject(projectId: string) {
   return useQuery({
     queryKey: projectKeys.one(projectId),
-    queryFn: () => apiFetch<{ project: ProjectDto }>(`/api/projects/${encodeURIComponent(projectId)}`).then((r) => r.project),
+    queryFn: () => apiFetch<{ project: ProjectDto }>(apiPaths.project(projectId)).then((r) => r.project),
   });
 }
 
@@ -28,7 +29,7 @@ export function useCreateProject() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: { name: string; description?: string }) =>
-      apiFetch<{ project: ProjectDto }>("/api/projects", { method: "POST", json: input }).then((r) => r.project),
+      apiFetch<{ project: ProjectDto }>(apiPaths.projects, { method: "POST", json: input }).then((r) => r.project),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.all }),
   });
 }
@@ -37,7 +38,7 @@ export function useUpdateProject(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: { name?: string; description?: string }) =>
-      apiFetch<{ project: ProjectDto }>(`/api/projects/${encodeURIComponent(projectId)}`, { method: "PATCH", json: input }).then((r) => r.project),
+      apiFetch<{ project: ProjectDto }>(apiPaths.project(projectId), { method: "PATCH", json: input }).then((r) => r.project),
     onSuccess: (project) => {
       queryClient.setQueryData(projectKeys.one(projectId), project);
       return queryClient.invalidateQueries({ queryKey: projectKeys.all, exact: true });
@@ -48,7 +49,7 @@ export function useUpdateProject(projectId: string) {
 export function useDeleteProject(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiFetch<void>(`/api/projects/${encodeURIComponent(projectId)}`, { method: "DELETE" }),
+    mutationFn: () => apiFetch<void>(apiPaths.project(projectId), { method: "DELETE" }),
     // The project's own entry is left alone: the page that showed it is navigating away.
     onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.all, exact: true }),
   });

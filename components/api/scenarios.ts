@@ -1,11 +1,11 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { RevisionSummaryDto } from "@/db/revisions";
-import type { ScenarioDto, ScenarioPage, ScenarioSummaryDto } from "@/db/scenarios";
+import type { RevisionSummaryDto, ScenarioDto, ScenarioPage, ScenarioSummaryDto } from "@/contracts/dto";
 import type { z } from "zod";
-import type { scenarioListQuerySchema } from "@/lib/contracts";
+import type { scenarioListQuerySchema } from "@/contracts/requests";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { apiFetch } from "./client";
 import { projectKeys } from "./projects";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { RevisionSummaryDto, ScenarioDto, ScenarioPage, ScenarioSummaryDto };
 
@@ -19,8 +19,8 @@ export const scenarioKeys = {
   revisions: (projectId: string, scenarioId: string) => [...scenarioKeys.one(projectId, scenarioId), "revisions"] as const,
 };
 
-const base = (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/scenarios`;
-const one = (projectId: string, scenarioId: string) => `${base(projectId)}/${encodeURIComponent(scenarioId)}`;
+const base = apiPaths.scenarios;
+const one = apiPaths.scenario;
 
 function listPath(projectId: string, query: ScenarioListQuery): string {
   const params = new URLSearchParams({

@@ -1,7 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { ShareLinkDto } from "@/db/share-links";
+import type { ShareLinkDto } from "@/contracts/dto";
 import { apiFetch } from "./client";
 import { scenarioKeys } from "./scenarios";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { ShareLinkDto };
 
@@ -9,8 +10,7 @@ export const shareLinkKeys = {
   all: (projectId: string, scenarioId: string) => [...scenarioKeys.one(projectId, scenarioId), "share-links"] as const,
 };
 
-const base = (projectId: string, scenarioId: string) =>
-  `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}/share-links`;
+const base = apiPaths.shareLinks;
 
 export function useShareLinks(projectId: string, scenarioId: string) {
   return useQuery({
@@ -32,7 +32,7 @@ export function useCreateShareLink(projectId: string, scenarioId: string) {
 export function useRevokeShareLink(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (linkId: string) => apiFetch<void>(`${base(projectId, scenarioId)}/${encodeURIComponent(linkId)}`, { method: "DELETE" }),
+    mutationFn: (linkId: string) => apiFetch<void>(apiPaths.shareLink(projectId, scenarioId, linkId), { method: "DELETE" }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: shareLinkKeys.all(projectId, scenarioId) }),
   });
 }

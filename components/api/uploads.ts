@@ -4,16 +4,15 @@
  * with the server's error shape, as everywhere else.
  */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { AttachmentDto } from "@/db/attachments";
-import type { ScenarioDto } from "@/db/scenarios";
+import type { AttachmentDto, ScenarioDto } from "@/contracts/dto";
 import type { ProfileFlag, SampledProtocol, SequencerSample, ColumnReading } from "@/physics/protocols/sequencer-csv";
 import { ApiError, apiFetch, errorFromBody } from "./client";
 import { projectKeys } from "./projects";
 import { scenarioKeys } from "./scenarios";
+import { apiPaths } from "@/contracts/api-paths";
 
 export type { AttachmentDto };
 
-const scenarioPath = (projectId: string, scenarioId: string) => `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}`;
 
 function errorOf(status: number, text: string): ApiError {
   let body: unknown;
@@ -60,7 +59,7 @@ const fileForm = (file: File, fields: Record<string, string | undefined> = {}) =
 export function useImportScenario(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (file: File) => postForm<{ scenario: ScenarioDto }>(`/api/projects/${encodeURIComponent(projectId)}/scenarios/import`, fileForm(file)).then((r) => r.scenario),
+    mutationFn: (file: File) => postForm<{ scenario: ScenarioDto }>(apiPaths.scenarioImport(projectId), fileForm(file)).then((r) => r.scenario),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.one(projectId) }),
   });
 }
@@ -84,7 +83,7 @@ export interface SequencerProfileSummary {
 /** Reads a sequencer CSV on the server and answers the profile, storing nothing. */
 export function previewSequencerProfile(projectId: string, scenarioId: string, file: File, settings: SequencerSettings) {
   return postForm<{ profile: SequencerProfileSummary; protocol: SampledProtocol }>(
-    `${scenarioPath(projectId, scenarioId)}/sequencer-profile`,
+    apiPaths.sequencerProfile(projectId, scenarioId),
     fileForm(file, { ...settings, dryRun: "1" }),
   );
 }
@@ -94,7 +93,7 @@ export function useSaveSequencerProfile(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ file, settings, version }: { file: File; settings: SequencerSettings; version: number }) =>
-      postForm<{ scenario: ScenarioDto }>(`${scenarioPath(projectId, scenarioId)}/sequencer-profile`, fileForm(file, { ...settings, version: String(version) })).then((r) => r.scenario),
+      postForm<{ scenario: ScenarioDto }>(apiPaths.sequencerProfile(projectId, scenarioId), fileForm(file, { ...settings, version: String(version) })).then((r) => r.scenario),
     onSuccess: (scenario) => {
       queryClient.setQueryData(scenarioKeys.one(projectId, scenarioId), scenario);
       return queryClient.invalidateQueries({ queryKey: scenarioKeys.one(projectId, scenarioId) });
@@ -109,7 +108,7 @@ export const attachmentKeys = {
 export function useAttachments(projectId: string, scenarioId: string) {
   return useQuery({
     queryKey: attachmentKeys.all(projectId, scenarioId),
-    queryFn: () => apiFetch<{ attachments: AttachmentDto[]; maxBytes: number }>(`${scenarioPath(projectId, scenarioId)}/attachments`),
+    queryFn: () => apiFetch<{ attachments: AttachmentDto[]; maxBytes: number }>(apiPaths.attachments(projectId, scenarioId)),
   });
 }
 
@@ -117,7 +116,7 @@ export function useUploadAttachment(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ file, onProgress }: { file: File; onProgress: (sent: number) => void }) =>
-      postForm<{ attachment: AttachmentDto }>(`${scenarioPath(projectId, scenarioId)}/attachments`, fileForm(file), onProgress).then((r) => r.attachment),
+      postForm<{ attachment: AttachmentDto }>(apiPaths.attachments(projectId, scenarioId), fileForm(file), onProgress).then((r) => r.attachment),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.all(projectId, scenarioId) }),
   });
 }
@@ -125,7 +124,7 @@ export function useUploadAttachment(projectId: string, scenarioId: string) {
 export function useDeleteAttachment(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (attachmentId: string) => apiFetch<void>(`${scenarioPath(projectId, scenarioId)}/attachments/${encodeURIComponent(attachmentId)}`, { method: "DELETE" }),
+    mutationFn: (attachmentId: string) => apiFetch<void>(apiPaths.attachment(projectId, scenarioId, attachmentId), { method: "DELETE" }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.all(projectId, scenarioId) }),
   });
 }

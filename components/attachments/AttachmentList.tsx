@@ -9,8 +9,9 @@ import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { buttonStyles, linkStyles, tableStyles } from "@/components/ui/styles";
-import { fileSize } from "@/lib/contracts";
+import { fileSize } from "@/contracts/requests";
 import { kindName } from "./kindName";
+import { apiPaths } from "@/contracts/api-paths";
 
 const columns = [
   { label: "File" },
@@ -26,7 +27,7 @@ export function AttachmentList({ projectId, scenarioId, canDelete }: { projectId
   const attachments = useAttachments(projectId, scenarioId);
   const remove = useDeleteAttachment(projectId, scenarioId);
   const [doomed, setDoomed] = useState<AttachmentDto | null>(null);
-  const href = (a: AttachmentDto) => `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}/attachments/${encodeURIComponent(a.id)}?redirect=1`;
+  const href = (a: AttachmentDto) => `${apiPaths.attachment(projectId, scenarioId, a.id)}?redirect=1`;
 
   return (
     <>

@@ -5,7 +5,7 @@ import { useUploadAttachment } from "@/components/api/uploads";
 import { ProblemList } from "@/components/uploads/ProblemList";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
-import { ATTACHMENT_EXTENSIONS, ATTACHMENT_MAX_BYTES, fileSize } from "@/lib/contracts";
+import { ATTACHMENT_EXTENSIONS, ATTACHMENT_MAX_BYTES, fileSize } from "@/contracts/requests";
 
 /** Choose a file and send it, with a progress bar; a file over the limit is refused here before it is sent. */
 export function AttachmentUpload({ projectId, scenarioId }: { projectId: string; scenarioId: string }) {

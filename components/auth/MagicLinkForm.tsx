@@ -6,7 +6,7 @@ import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";
-import { passwordResetRequestSchema } from "@/lib/contracts";
+import { passwordResetRequestSchema } from "@/contracts/requests";
 import { signInErrorMessage } from "./callbackUrl";
 
 /** Asks next-auth to e-mail a one-time sign-in link (the body is the same one-field e-mail as a reset request). */

@@ -6,7 +6,7 @@ import { sentence } from "@/components/format/text";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles, linkStyles } from "@/components/ui/styles";
-import { passwordResetConfirmSchema } from "@/lib/contracts";
+import { passwordResetConfirmSchema } from "@/contracts/requests";
 import { NewPasswordField } from "./NewPasswordField";
 
 export function ResetConfirmForm({ token }: { token: string }) {

@@ -7,7 +7,7 @@ import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
-import { passwordResetRequestSchema } from "@/lib/contracts";
+import { passwordResetRequestSchema } from "@/contracts/requests";
 
 /** Asks for a reset link. The answer is the same whether or not the address has an account. */
 export function ResetRequestForm({ defaultEmail }: { defaultEmail?: string }) {

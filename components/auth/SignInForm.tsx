@@ -6,7 +6,7 @@ import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";
-import { emailSchema } from "@/lib/contracts";
+import { emailSchema } from "@/contracts/requests";
 
 const signInSchema = z.object({ email: emailSchema, password: z.string().min(1, "enter your password") });
 

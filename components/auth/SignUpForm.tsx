@@ -6,7 +6,7 @@ import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";
-import { signUpSchema } from "@/lib/contracts";
+import { signUpSchema } from "@/contracts/requests";
 import { NewPasswordField } from "./NewPasswordField";
 
 /** A new account; `email` fills in the address an invitation was sent to. */

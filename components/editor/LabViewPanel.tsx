@@ -35,7 +35,7 @@ const HandleFieldsView = memo(function HandleFieldsView({ document, readOnly, se
   if (document.protocol.kind !== "segments") return null;
   const protocol = document.protocol;
   return (
-    <div className="mt-3 grid grid-cols-5 gap-2" role="group" aria-label="Handle values">
+    <div className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-5" role="group" aria-label="Handle values">
       {HANDLE_IDS.map((handle) => (
         <div key={handle} className={`rounded p-1 ${selection === handle ? "bg-branchB-tint/60" : ""}`}>
           <QuantityField

@@ -6,7 +6,8 @@ import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
 import { withPeakSeparation } from "@/canvas/kernels/protocol-kind";
-import { c, elementaryCharge, G } from "@/physics/constants";
+import { schwarzschildRadiusMetres } from "@/physics/backgrounds";
+import { c, elementaryCharge } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
 import { formatQuantity, namedLengthsText, parseQuantity, type LengthScales } from "@/physics/units";
 import { DraftField, QuantityField, type ParseResult } from "./QuantityField";
@@ -138,7 +139,7 @@ function LabSummary() {
 
 /** The background's own lengths: r_s = 2GM/c² (and GM/c²) around a black hole, c/H in de Sitter. */
 function lengthScalesOf(background: ScenarioDocument["background"]): LengthScales {
-  if (background.kind === "schwarzschild") return { schwarzschildRadiusMetres: (2 * G * background.massKg) / c ** 2 };
+  if (background.kind === "schwarzschild") return { schwarzschildRadiusMetres: schwarzschildRadiusMetres(background.massKg) };
   if (background.kind === "de-sitter") return { hubbleRadiusMetres: c / background.hubbleRatePerSecond };
   return {};
 }

@@ -190,7 +190,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   return (
     <section aria-labelledby="protocol-heading">
       <StripHeading kind="segments" readOnly={readOnly} />
-      <div className="flex gap-1">
+      <div className="flex flex-col gap-1 sm:flex-row">
         {segments.map((segment, i) => {
           const part = protocol[segment];
           const ramp = segment !== "hold" ? protocol[segment as "separation" | "recombination"] : null;

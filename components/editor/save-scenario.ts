@@ -2,9 +2,9 @@
 import { apiFetch } from "@/components/api/client";
 import type { ScenarioDto } from "@/components/api/scenarios";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
+import { apiPaths } from "@/contracts/api-paths";
 
-const scenarioPath = (projectId: string, scenarioId: string) =>
-  `/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}`;
+const scenarioPath = apiPaths.scenario;
 
 export function putScenarioDocument(projectId: string, scenarioId: string, version: number, document: ScenarioDocument) {
   return apiFetch<{ scenario: ScenarioDto }>(scenarioPath(projectId, scenarioId), { method: "PUT", json: { version, document } }).then((r) => r.scenario);

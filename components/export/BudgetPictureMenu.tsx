@@ -11,7 +11,7 @@ import { figureCaption } from "@/canvas/export/figure-caption";
 import type { FigureTheme } from "@/canvas/export/export-figure";
 import { budgetPictureDataUrl } from "./budget-picture";
 import { downloadDataUrl } from "./download";
-import { budgetPictureFileName } from "./file-names";
+import { budgetPictureFileName } from "@/canvas/export/file-names";
 
 const RATIOS = [1, 2, 4] as const;
 

@@ -14,10 +14,10 @@ import { measureWith, renderFigureFile, type FigureFileRequest } from "@/canvas/
 import type { ExportDrawing } from "@/canvas/export/standalone-figure";
 import { SCENARIO_FILE_MEDIA_TYPE, scenarioFileText, toScenarioFile } from "@/physics/scenario/exchange";
 import { browserFigureToolkit } from "./browser-figure-toolkit";
-import { budgetCsv } from "./budget-csv";
+import { budgetCsv } from "@/canvas/export/budget-csv";
 import { useDiagramSize } from "./diagram-size";
 import { downloadBytes, downloadText } from "./download";
-import { budgetFileName, diagramFileName, scenarioFileNameFor, sweepFileName, type FigureFormat } from "./file-names";
+import { budgetFileName, diagramFileName, scenarioFileNameFor, sweepFileName, type FigureFormat } from "@/canvas/export/file-names";
 import { DEFAULT_SWEEP_FIGURE_SIZE, sweepDrawing } from "./sweep-export";
 
 const RATIOS = [1, 2, 4] as const;

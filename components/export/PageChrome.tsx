@@ -13,7 +13,7 @@ export function PageChrome({ header, children }: { header: ReactNode; children: 
   return (
     <>
       {header}
-      <main className="mx-auto w-full max-w-6xl px-6 py-8">{children}</main>
+      <main className="mx-auto w-full max-w-6xl px-4 py-8 sm:px-6">{children}</main>
     </>
   );
 }

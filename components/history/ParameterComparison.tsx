@@ -4,7 +4,7 @@ import { useRevision, useRevisionDiff, type RevisionDto } from "@/components/api
 import { QueryView } from "@/components/ui/QueryStates";
 import { TableHead } from "@/components/ui/TableHead";
 import { tableStyles } from "@/components/ui/styles";
-import { flattenDocument } from "@/lib/document-diff";
+import { flattenDocument } from "@/contracts/json-diff";
 import { parameterLabel, parameterValue } from "./parameterText";
 
 interface ComparisonRow {

@@ -12,7 +12,7 @@ export interface HeaderUser {
 export function SiteHeader({ user }: { user: HeaderUser | null }) {
   return (
     <header className="border-b border-rule bg-paper">
-      <nav className="mx-auto flex max-w-6xl items-center gap-6 px-6 py-3 text-sm" aria-label="Main">
+      <nav className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-4 py-3 text-sm sm:gap-x-6 sm:px-6" aria-label="Main">
         <Link href="/" className="flex items-center gap-2 font-serif text-lg font-semibold tracking-tight">
           <BranchMark />
           Branchline
@@ -36,7 +36,7 @@ export function SiteHeader({ user }: { user: HeaderUser | null }) {
         <span className="flex-1" />
         {user ? (
           <>
-            <Link href="/account" className="text-ink-soft hover:text-ink" title={user.email}>
+            <Link href="/account" className="max-w-40 truncate text-ink-soft hover:text-ink" title={user.email}>
               {user.name}
             </Link>
             <button type="button" onClick={() => signOut({ callbackUrl: "/" })} className="text-ink-soft hover:text-ink">

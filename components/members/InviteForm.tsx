@@ -8,7 +8,7 @@ import { useApiForm } from "@/components/forms/useApiForm";
 import { SelectField, TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
-import { invitationCreateSchema, invitedRoleSchema } from "@/lib/contracts";
+import { invitationCreateSchema, invitedRoleSchema } from "@/contracts/requests";
 
 const invitedRoles = invitedRoleSchema.options;
 

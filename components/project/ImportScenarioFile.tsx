@@ -5,7 +5,7 @@ import { useRef, useState } from "react";
 import { useImportScenario } from "@/components/api/uploads";
 import { ProblemList } from "@/components/uploads/ProblemList";
 import { buttonStyles } from "@/components/ui/styles";
-import { SCENARIO_FILE_MAX_BYTES } from "@/lib/contracts";
+import { SCENARIO_FILE_MAX_BYTES } from "@/contracts/requests";
 
 /**
  * "Import a scenario file": pick a .json scenario file; it becomes a new scenario of the project and the editor

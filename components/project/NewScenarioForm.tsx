@@ -10,7 +10,7 @@ import { newScenarioDocument } from "@/components/scenario/newScenarioDocument";
 import { backgroundSummary, labSummary } from "@/components/scenario/summary";
 import { SelectField, TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";
-import { scenarioTitleSchema } from "@/lib/contracts";
+import { scenarioTitleSchema } from "@/contracts/requests";
 import { parseScenarioDocument, type BackgroundKind } from "@/physics/scenario/schema";
 
 const newScenarioSchema = z.object({

@@ -12,7 +12,7 @@ import { ConfirmDialog } from "@/components/ui/ConfirmDialog";
 import { TextAreaField, TextField } from "@/components/ui/Field";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles } from "@/components/ui/styles";
-import { projectNameSchema } from "@/lib/contracts";
+import { projectNameSchema } from "@/contracts/requests";
 
 // The same rules as the PATCH body, with both fields present (the form always sends both).
 const settingsSchema = z.object({ name: projectNameSchema, description: z.string().max(2000, "use at most 2000 characters") });

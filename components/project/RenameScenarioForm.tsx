@@ -9,7 +9,7 @@ import { sentence } from "@/components/format/text";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { FieldMessage } from "@/components/ui/Field";
 import { buttonStyles, fieldStyles } from "@/components/ui/styles";
-import { scenarioTitleSchema } from "@/lib/contracts";
+import { scenarioTitleSchema } from "@/contracts/requests";
 
 const renameSchema = z.object({ title: scenarioTitleSchema });
 

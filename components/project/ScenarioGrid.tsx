@@ -31,7 +31,7 @@ interface ScenarioGridProps {
 export function ScenarioGrid({ project, scenarios, sort, onSort, actions }: ScenarioGridProps) {
   const [renaming, setRenaming] = useState<string | null>(null);
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className={tableStyles.table}>
         <caption className="sr-only">Scenarios in {project.name}; column headers with buttons sort the table</caption>
         <thead>

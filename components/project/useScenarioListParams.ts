@@ -3,7 +3,7 @@
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useMemo } from "react";
 import type { ScenarioListQuery } from "@/components/api/scenarios";
-import { scenarioListQuerySchema } from "@/lib/contracts";
+import { scenarioListQuerySchema } from "@/contracts/requests";
 
 export const PAGE_SIZE = 25;
 export type SortKey = ScenarioListQuery["sort"];

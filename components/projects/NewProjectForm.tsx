@@ -6,7 +6,7 @@ import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
 import { TextAreaField, TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";
-import { projectCreateSchema } from "@/lib/contracts";
+import { projectCreateSchema } from "@/contracts/requests";
 
 /** Creates a project and opens it. */
 export function NewProjectForm() {

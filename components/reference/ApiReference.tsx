@@ -1,9 +1,19 @@
 /**
  * The API reference, drawn from the OpenAPI document itself (lib/openapi.ts): per group, each operation's method
  * and path, who may call it, its parameters, the fields of its JSON body with their limits, and its answer.
- * A server component: plain HTML, no script.
+ * A server component: plain HTML, no script. The page hands it the document and the operations table, so this
+ * piece of UI depends on their shape only.
  */
-import { openApiDocument, operations } from "@/lib/openapi";
+
+/** One row of the operations table (lib/openapi.ts), as this reference shows it. */
+export interface ReferencedOperation {
+  method: string;
+  path: string;
+  tag: string;
+  summary: string;
+  access: string;
+  success: { status: number; description: string };
+}
 
 type Schema = {
   type?: string | string[];
@@ -61,8 +71,7 @@ function Fields({ schema }: { schema: Schema }) {
   );
 }
 
-export function ApiReference() {
-  const document = openApiDocument();
+export function ApiReference({ document, operations }: { document: { paths?: Record<string, unknown> }; operations: readonly ReferencedOperation[] }) {
   const tags = [...new Set(operations.map((op) => op.tag))];
   return (
     <div className="space-y-12">

@@ -12,7 +12,7 @@ import { TableHead } from "@/components/ui/TableHead";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { embedSnippet, type EmbedOptions } from "@/components/export/embed-options";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
-import { shareLinkCreateSchema } from "@/lib/contracts";
+import { shareLinkCreateSchema } from "@/contracts/requests";
 import { RevokeButton, RevokeDialog, useRevokeConfirmation } from "./RevokeRowAction";
 
 const expiryChoices: { days: number | null; label: string }[] = [

@@ -4,7 +4,7 @@ import { DocumentDetails } from "@/components/scenario/DocumentDetails";
 import { Notice } from "@/components/ui/Notice";
 import { TimeStamp } from "@/components/ui/TimeStamp";
 import { linkStyles } from "@/components/ui/styles";
-import type { SharedScenarioDto } from "@/db/share-links";
+import type { SharedScenarioDto } from "@/contracts/dto";
 import type { ComputeIssue, ScenarioResult } from "@/physics/result";
 import { SharedFigures } from "./SharedFigures";
 

@@ -20,7 +20,8 @@ export const fieldStyles = {
 } as const;
 
 export const tableStyles = {
-  table: "w-full border-collapse text-left text-sm",
+  /** `data-table`: on a phone the table scrolls sideways on its own (app/globals.css), never the page. */
+  table: "data-table w-full border-collapse text-left text-sm",
   head: "border-b border-ink/70 px-3 py-2 align-bottom text-xs font-semibold uppercase tracking-wide text-ink-soft",
   row: "border-b border-rule",
   cell: "px-3 py-3 align-top",

@@ -8,7 +8,7 @@ import { integrateOverProtocolSeconds } from "../estimators/hold-quanta";
 import { quantityFromLog10 } from "../estimators/quantity";
 import type { SourceKey } from "../estimators/sources";
 import { branchPositions } from "../protocols";
-import type { ValidityFlag } from "../result";
+import type { ValidityFlag } from "../result-basics";
 import type { BranchPaths, EnvironmentChannel, EnvironmentChannelResult, EnvironmentRegime } from "./types";
 
 /** F at branch positions x_A, x_B along the separation axis (metres from the rest position), s⁻¹. */

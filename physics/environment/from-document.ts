@@ -10,21 +10,12 @@ import type { ChannelResult, Quantity, ValidityFlag } from "../result";
 import type { EnvironmentSpec } from "../scenario/environment-schema";
 import type { ScenarioDocument } from "../scenario/schema";
 import { environmentChannels, type EnvironmentInputs } from "./budget";
-import { environmentMargins, type ChannelMargin } from "./margin";
+import { environmentMargins } from "./margin";
 import { bodyMaterials } from "./materials";
-import type { BranchPaths, EnvironmentChannelResult } from "./types";
+import type { BranchPaths, EnvironmentBudget } from "./types";
 import { formatNumber } from "../units";
 
-export interface EnvironmentBudget {
-  channels: EnvironmentChannelResult[];
-  /** Every channel together, the body's own fields included: counts add, overlaps multiply. */
-  total: { totalQuanta: Quantity; decoherence: Quantity; visibility: Quantity; decoherenceTime: Quantity | null };
-  /** The channel with the largest ⟨N⟩ ("electromagnetic", "gravitational" or an environmental channel); null when all are zero. */
-  dominantChannel: string | null;
-  margins: ChannelMargin[];
-  /** Checks on the block as a whole (the body's density); each channel carries its own. */
-  flags: ValidityFlag[];
-}
+export type { EnvironmentBudget };
 
 const DEFAULT_MATERIAL = "fused-silica" as const;
 

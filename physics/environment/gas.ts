@@ -25,7 +25,7 @@
  * (L. Hackermüller et al., Appl. Phys. B 77, 781 (2003), quant-ph/0307238).
  */
 import { hbar, kB } from "../constants";
-import type { ValidityFlag } from "../result";
+import type { ValidityFlag } from "../result-basics";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import { gasSpecies, molecularMassKg, type GasSpecies } from "./species";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";

@@ -7,25 +7,14 @@
  * or the field channels are exactly zero (then only an absent environment would equal them).
  */
 import { quantityFromValue } from "../estimators/quantity";
-import type { Quantity } from "../result";
+import type { Quantity } from "../result-basics";
 import { gasChannelOf, surfaceChannelOf, thermalChannelOf, type EnvironmentInputs } from "./budget";
 import type { ThermalChannel } from "./thermal";
 import { brentRoot } from "./root-finding";
-import type { BranchPaths, EnvironmentChannel, EnvironmentChannelResult } from "./types";
+import type { BranchPaths, ChannelMargin, EnvironmentChannel, EnvironmentChannelResult, MarginOutcome, MarginParameter } from "./types";
 
-export type MarginParameter = "gas-pressure" | "surroundings-temperature" | "internal-temperature" | "surface-distance";
+export type { ChannelMargin, MarginOutcome, MarginParameter };
 
-export type MarginOutcome =
-  | { kind: "crossing"; value: Quantity }
-  | { kind: "already-below" }
-  | { kind: "not-reachable"; reason: string };
-
-export interface ChannelMargin {
-  channel: EnvironmentChannel;
-  parameter: MarginParameter;
-  current: Quantity;
-  outcome: MarginOutcome;
-}
 
 /** The furthest each parameter is searched: below any vacuum, any cryostat, beyond any chip (common practice). */
 export const MARGIN_LIMITS: Readonly<Record<MarginParameter, number>> = {

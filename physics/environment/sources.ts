@@ -2,7 +2,7 @@
  * The Methods entries of the environmental channels, merged into physics/estimators/sources.ts. The derivations
  * are on /methods/environment (docs/methods/environment.md).
  */
-import type { SourceEntry } from "../estimators/sources";
+import type { SourceEntry } from "../estimators/source-entry";
 
 const countConvention = "Branchline's ⟨N⟩ with |⟨ψ_A|ψ_B⟩| = e^{−⟨N⟩/2}: the literature's coherence e^{−Ft} gives ⟨N⟩ = 2∫F dt, the ramps' partial separation included";
 

@@ -6,7 +6,9 @@
  * from the U.S. Standard Atmosphere 1976 (NOAA/NASA/USAF), Table 3. Polarisabilities from T. M. Miller,
  * "Atomic and molecular polarizabilities", CRC Handbook of Chemistry and Physics (values recalled from memory):
  * He 0.2050, H₂ 0.8045, N₂ 1.7403, Ar 1.6411 Å³; air as the mole-fraction mean of N₂ (0.781), O₂ (0.210, 1.5812 Å³)
- * and Ar (0.009). The polarisability is carried for the van der Waals cross-section of very small bodies, which
+ * and Ar (0.009). He and Ar agree within 0.3 % with the recommended values of P. Schwerdtfeger & J. K. Nagle,
+ * Mol. Phys. 117, 1200 (2019) (checked in tests/unit/physics/environment/species.test.ts); the molecules' are not
+ * in that table. The polarisability is carried for the van der Waals cross-section of very small bodies, which
  * the hard-sphere estimator does not use (see gas.ts); the mass enters every rate.
  */
 import { atomicMassConstant } from "../constants";

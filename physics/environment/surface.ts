@@ -26,7 +26,7 @@
  */
 import { c, epsilon0, hbar, kB, mu0 } from "../constants";
 import { peakBranchSpeed } from "../protocols";
-import type { FlagStatus, ValidityFlag } from "../result";
+import type { FlagStatus, ValidityFlag } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";

@@ -22,7 +22,7 @@
  * magnetic dipole is left out, as in Joos & Zeh (flagged).
  */
 import { c, hbar, kB } from "../constants";
-import type { FlagStatus, ValidityFlag } from "../result";
+import type { FlagStatus, ValidityFlag } from "../result-basics";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import { clausiusMossotti, type Permittivity } from "./materials";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";

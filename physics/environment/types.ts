@@ -5,7 +5,7 @@
  * ⟨N⟩ = 2∫F(x_A(t), x_B(t)) dt over the whole protocol — the ramps' partial separation counted, not only the hold.
  */
 import type { SeparationHistory } from "../protocols/types";
-import type { Quantity, ValidityFlag } from "../result";
+import type { Quantity, ValidityFlag } from "../result-basics";
 import type { SeparationSpec } from "../scenario/schema";
 import type { SourceKey } from "../estimators/sources";
 
@@ -38,5 +38,31 @@ export interface EnvironmentChannelResult {
   visibility: Quantity;
   /** 1/holdRate; null when the channel is exactly zero. */
   decoherenceTime: Quantity | null;
+  flags: ValidityFlag[];
+}
+
+export type MarginParameter = "gas-pressure" | "surroundings-temperature" | "internal-temperature" | "surface-distance";
+
+export type MarginOutcome =
+  | { kind: "crossing"; value: Quantity }
+  | { kind: "already-below" }
+  | { kind: "not-reachable"; reason: string };
+
+export interface ChannelMargin {
+  channel: EnvironmentChannel;
+  parameter: MarginParameter;
+  current: Quantity;
+  outcome: MarginOutcome;
+}
+
+/** The environment block of a result: every channel, the whole budget with the body's own fields, the margins. */
+export interface EnvironmentBudget {
+  channels: EnvironmentChannelResult[];
+  /** Every channel together, the body's own fields included: counts add, overlaps multiply. */
+  total: { totalQuanta: Quantity; decoherence: Quantity; visibility: Quantity; decoherenceTime: Quantity | null };
+  /** The channel with the largest ⟨N⟩ ("electromagnetic", "gravitational" or an environmental channel); null when all are zero. */
+  dominantChannel: string | null;
+  margins: ChannelMargin[];
+  /** Checks on the block as a whole (the body's density); each channel carries its own. */
   flags: ValidityFlag[];
 }

@@ -3,7 +3,7 @@
  * overflow or underflow a double before the answer is known; and their conversion to reported Quantities.
  * A zero is log10 = −Infinity, internally only: reported Quantities carry null instead.
  */
-import type { Quantity } from "../result";
+import type { Quantity } from "../result-basics";
 import type { SourceKey } from "./sources";
 
 /** Largest and smallest magnitudes reported as plain doubles (with a little headroom below the subnormals). */

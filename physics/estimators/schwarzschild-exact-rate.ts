@@ -23,7 +23,7 @@
  * O(GM/(c²b))); gravity likewise in the logarithm. Flags raised: schwarzschild-multipole-check, schwarzschild-gravity-model, and the module's own
  * cautions as schwarzschild-exact:<code>.
  */
-import type { FlagStatus, ValidityFlag } from "../result";
+import type { FlagStatus, ValidityFlag } from "../result-basics";
 import {
   FAR_ZONE_COEFFICIENT,
   GRAVITY_FAR_ZONE_CORRECTION_CAUTION,

@@ -14,6 +14,7 @@
  * - in between: log Γ interpolated linearly in ln b, and marked "interpolated".
  * Each is an estimate, labelled with its regime; the radial/tangential axis does not enter these estimates.
  */
+import { schwarzschildRadiusMetres } from "../backgrounds/schwarzschild-geometry";
 import { G, c, epsilon0, hbar } from "../constants";
 import type { Channel, EstimateRegime, RateRegime, ValidityFlag } from "../result";
 import { electromagneticChannel, gravitationalChannel, log10HoldRateCoefficient } from "../spectra/channels";
@@ -91,7 +92,7 @@ function nearRate(input: SchwarzschildHorizonRateInput, log10Source: number): nu
 }
 
 function estimateRegime(lab: SchwarzschildRateLab): EstimateRegime {
-  const ratio = (lab.labArealRadiusMetres * c * c) / (2 * G * lab.massKg);
+  const ratio = lab.labArealRadiusMetres / schwarzschildRadiusMetres(lab.massKg);
   return ratio >= FAR_RADIUS_RATIO ? "far" : ratio <= NEAR_HORIZON_RADIUS_RATIO ? "near-horizon" : "interpolated";
 }
 
@@ -111,7 +112,7 @@ export function publishedEstimateRate(input: SchwarzschildHorizonRateInput): Est
   const source = log10SourceAmplitude(input);
   if (regime === "far") return { log10RatePerSecond: farRate(input, source), regime, sourceKey };
   if (regime === "near-horizon") return { log10RatePerSecond: nearRate(input, source), regime, sourceKey };
-  const ratio = (input.labArealRadiusMetres * c * c) / (2 * G * input.massKg);
+  const ratio = input.labArealRadiusMetres / schwarzschildRadiusMetres(input.massKg);
   const w = Math.log(ratio / NEAR_HORIZON_RADIUS_RATIO) / Math.log(FAR_RADIUS_RATIO / NEAR_HORIZON_RADIUS_RATIO);
   return { log10RatePerSecond: (1 - w) * nearRate(input, source) + w * farRate(input, source), regime, sourceKey };
 }

@@ -24,7 +24,7 @@
  * limits, the size of the uncertainty where neither holds. Not a computation between the limits: an interpolation.
  */
 import type { SeparationHistory } from "../protocols/types";
-import type { ValidityFlag } from "../result";
+import type { ValidityFlag } from "../result-basics";
 import type { ChannelDefinition } from "../spectra/channels";
 import { c } from "../constants";
 import { rampQuantaPerSquaredSource, type RampIntegral } from "./ramp-quanta";

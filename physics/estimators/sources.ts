@@ -4,15 +4,9 @@
  */
 
 import { environmentSources } from "../environment/sources";
+import type { SourceEntry } from "./source-entry";
 
-export interface SourceEntry {
-  title: string;
-  citation: string;
-  /** The formula as evaluated, in LaTeX (SI units). */
-  formula: string;
-  assumptions: string[];
-  failureModes: string[];
-}
+export type { SourceEntry };
 
 const farFieldAssumptions = [
   "dipole (resp. quadrupole) approximation: separation much smaller than c times the ramp time",

@@ -7,7 +7,7 @@
  * values by σ'·h, both shrinking with h; at a kink the slope change stays [σ'], at a jump the value change stays
  * [σ]. Each candidate found on the coarse grid is re-sampled sixteen times finer: what does not shrink is real.
  */
-import type { KinkReport } from "../result";
+import type { KinkReport } from "../result-basics";
 
 const COARSE_CELLS = 4096;
 const REFINEMENT = 16;

@@ -8,7 +8,7 @@
  * The profile is measured in units of its largest |separation|. A first or last sample away from zero is a jump:
  * the branches would have to start or end apart.
  */
-import type { KinkReport } from "../result";
+import type { KinkReport } from "../result-basics";
 import type { ProtocolSpec } from "../scenario/schema";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { SeparationHistory } from "./types";

@@ -2,7 +2,7 @@
  * Segments protocol → separation history: a separation ramp from σ = 0 to 1, a hold at σ = 1, a recombination
  * ramp back to 0, each ramp of its own duration and shape (physics/protocols/ramp-shapes.ts).
  */
-import type { KinkReport } from "../result";
+import type { KinkReport } from "../result-basics";
 import type { ProtocolSpec } from "../scenario/schema";
 import { rampShapes } from "./ramp-shapes";
 import type { MotionWindow, SeparationHistory } from "./types";

@@ -2,7 +2,7 @@
  * A protocol turned into the history of the branches' full separation d(t) = d₀ σ(t): moving windows, between
  * which σ stays constant. Only the windows radiate; the plateaus contribute to the hold-driven count alone.
  */
-import type { KinkReport } from "../result";
+import type { KinkReport } from "../result-basics";
 
 export interface MotionWindow {
   startSeconds: number;

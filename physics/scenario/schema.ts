@@ -8,6 +8,7 @@
  * current one; an unknown or malformed document is answered with the list of what is wrong, never a crash.
  */
 import { z } from "zod";
+import { e } from "../constants";
 import { environmentSchema, upgradeVersion1To2 } from "./environment-schema";
 import { keptText } from "./text";
 import { upgradeVersion2To3 } from "./upgrade-v3";
@@ -163,7 +164,7 @@ export function defaultScenarioDocument(): ScenarioDocument {
     schemaVersion: 3,
     background: { kind: "minkowski" },
     lab: { placement: "inertial" },
-    source: { chargeCoulombs: 1.602_176_634e-19 * 100, massKg: 1e-14, labMassKg: null },
+    source: { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null },
     separation: { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 },
     protocol: {
       kind: "segments",

@@ -23,7 +23,7 @@
  * Units: times in a reference scale τ₀ (Ω = ωτ₀, ᾱ = ατ₀), W_rest(ω) = K τ₀^{−p} w̄(Ω, ᾱ) with p = 2·(number of k) − 1.
  */
 import { G, c, epsilon0, hbar } from "../constants";
-import type { Channel } from "../result";
+import type { Channel } from "../result-basics";
 
 export interface ChannelDefinition {
   channel: Channel;

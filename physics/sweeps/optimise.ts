@@ -8,7 +8,7 @@
  * optimum is usually the longest recombination the budget allows (onBoundary: true).
  */
 import { computeScenario, type ComputeOptions } from "../compute";
-import type { Quantity } from "../result";
+import type { Quantity } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
 

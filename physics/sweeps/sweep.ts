@@ -3,7 +3,7 @@
  * in the logarithm between two values, reporting progress through an optional callback after each point.
  */
 import { computeScenario, type ComputeOptions } from "../compute";
-import type { Quantity } from "../result";
+import type { Quantity } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import type { ScenarioDocument } from "../scenario/schema";
 import { parameterUnit, withParameter, type SweepParameter } from "./vary";

@@ -8,7 +8,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as exportRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/export/route";
 import * as sequencerRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/sequencer-profile/route";
 import * as importRoute from "@/app/api/projects/[projectId]/scenarios/import/route";
-import { SCENARIO_FILE_MAX_BYTES } from "@/lib/contracts";
+import { SCENARIO_FILE_MAX_BYTES } from "@/contracts/requests";
 import { computeScenario } from "@/physics/compute";
 import { parseSequencerCsv, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
 import { MAX_STORED_SAMPLES, THIN_TOLERANCE_FRACTION } from "@/physics/protocols/thin-profile";

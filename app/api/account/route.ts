@@ -1,7 +1,7 @@
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
 import { findUserById, toUserDto, updateAccount } from "@/db/users";
-import { accountUpdateSchema } from "@/lib/contracts";
+import { accountUpdateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 export const GET = route(async (req) => {

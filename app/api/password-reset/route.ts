@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { issuePasswordReset } from "@/db/password-reset";
-import { passwordResetRequestSchema } from "@/lib/contracts";
+import { passwordResetRequestSchema } from "@/contracts/requests";
 import { json, readJson, route } from "@/lib/http";
 import { appUrl, sendMailInBackground } from "@/lib/mailer";
 

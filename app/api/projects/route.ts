@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createProject, listProjects } from "@/db/projects";
-import { projectCreateSchema } from "@/lib/contracts";
+import { projectCreateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 export const GET = route(async (req) => {

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createUserIfNew, findUserByEmail } from "@/db/users";
-import { signUpSchema } from "@/lib/contracts";
+import { signUpSchema } from "@/contracts/requests";
 import { json, readJson, route } from "@/lib/http";
 import { appUrl, sendMailInBackground } from "@/lib/mailer";
 

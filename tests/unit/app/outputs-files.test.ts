@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { budgetCsv, budgetCsvRows, budgetFlagRows, budgetInputLines, csvField, csvText, csvValue } from "@/components/export/budget-csv";
+import { budgetCsv, budgetCsvRows, budgetFlagRows, budgetInputLines, csvField, csvText, csvValue } from "@/canvas/export/budget-csv";
 import { embedOptions, embedPath, embedSnippet } from "@/components/export/embed-options";
-import { budgetFileName, budgetPictureFileName, diagramFileName, scenarioFileNameFor, sweepFileName } from "@/components/export/file-names";
+import { budgetFileName, budgetPictureFileName, diagramFileName, scenarioFileNameFor, sweepFileName } from "@/canvas/export/file-names";
 import { computeScenario } from "@/physics/compute";
 import { defaultScenarioDocument, parseScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { schwarzschildDocument } from "../canvas/harness";

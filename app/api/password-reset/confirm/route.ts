@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { completePasswordReset } from "@/db/password-reset";
-import { passwordResetConfirmSchema } from "@/lib/contracts";
+import { passwordResetConfirmSchema } from "@/contracts/requests";
 import { json, readJson, route } from "@/lib/http";
 
 export const POST = route(async (req) => {

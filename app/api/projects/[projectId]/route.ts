@@ -1,7 +1,7 @@
 import { getDb } from "@/db";
 import { attachmentObjectKeys, removeStoredObjects } from "@/db/attachments";
 import { deleteProject, getProject, updateProject } from "@/db/projects";
-import { projectUpdateSchema } from "@/lib/contracts";
+import { projectUpdateSchema } from "@/contracts/requests";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
 import { objectStore } from "@/lib/storage";
 

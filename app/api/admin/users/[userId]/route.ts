@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { setSiteRole } from "@/db/users";
-import { siteRoleUpdateSchema } from "@/lib/contracts";
+import { siteRoleUpdateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 export const PATCH = route<{ userId: string }>(async (req, { userId }) => {

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createInvitation, listInvitations } from "@/db/invitations";
-import { invitationCreateSchema } from "@/lib/contracts";
+import { invitationCreateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 import { sendInvitationMail } from "@/lib/invitation-mail";
 

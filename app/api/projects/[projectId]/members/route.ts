@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { addMemberByEmail, listMembers } from "@/db/members";
-import { memberAddSchema } from "@/lib/contracts";
+import { memberAddSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 type Params = { projectId: string };

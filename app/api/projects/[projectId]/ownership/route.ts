@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { transferOwnership } from "@/db/members";
-import { ownershipTransferSchema } from "@/lib/contracts";
+import { ownershipTransferSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 type Params = { projectId: string };

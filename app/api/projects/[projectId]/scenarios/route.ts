@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
-import { createScenario, listScenarios, validDocument } from "@/db/scenarios";
-import { scenarioCreateSchema, scenarioListQuerySchema } from "@/lib/contracts";
+import { createScenario, listScenarios } from "@/db/scenarios";
+import { scenarioCreateSchema, scenarioListQuerySchema } from "@/contracts/requests";
 import { json, readJson, readQuery, requireActor, route } from "@/lib/http";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 
@@ -23,6 +23,6 @@ export const GET = route<Params>(async (req, { projectId }) => {
 export const POST = route<Params>(async (req, { projectId }) => {
   const actor = await requireActor(req);
   const input = await readJson(req, scenarioCreateSchema);
-  const document = input.document === undefined ? defaultScenarioDocument() : validDocument(input.document);
+  const document = input.document ?? defaultScenarioDocument();
   return json({ scenario: await createScenario(getDb(), actor, projectId, { title: input.title, document }) }, 201);
 });

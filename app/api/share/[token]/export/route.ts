@@ -1,4 +1,4 @@
-import { budgetExport, exportQuerySchema, fileResponse, scenarioExport } from "@/components/export/export-files";
+import { budgetExport, exportQuerySchema, fileResponse, scenarioExport } from "@/lib/export-files";
 import { getDb } from "@/db";
 import { AppError } from "@/db/errors";
 import { openSharedScenarioRecord } from "@/db/share-links";

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { changeMemberRole, removeMember } from "@/db/members";
-import { memberUpdateSchema } from "@/lib/contracts";
+import { memberUpdateSchema } from "@/contracts/requests";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
 
 type Params = { projectId: string; userId: string };

@@ -1,7 +1,7 @@
 import { getDb } from "@/db";
 import { attachmentObjectKeys, removeStoredObjects } from "@/db/attachments";
-import { deleteScenario, getScenario, updateScenario, validDocument } from "@/db/scenarios";
-import { scenarioUpdateSchema } from "@/lib/contracts";
+import { deleteScenario, getScenario, updateScenario } from "@/db/scenarios";
+import { scenarioUpdateSchema } from "@/contracts/requests";
 import { json, noContent, readJson, requireActor, route } from "@/lib/http";
 import { objectStore } from "@/lib/storage";
 
@@ -16,8 +16,7 @@ export const GET = route<Params>(async (req, { projectId, scenarioId }) => {
 export const PUT = route<Params>(async (req, { projectId, scenarioId }) => {
   const actor = await requireActor(req);
   const input = await readJson(req, scenarioUpdateSchema);
-  const document = input.document === undefined ? undefined : validDocument(input.document);
-  return json({ scenario: await updateScenario(getDb(), actor, projectId, scenarioId, { version: input.version, title: input.title, document }) });
+  return json({ scenario: await updateScenario(getDb(), actor, projectId, scenarioId, input) });
 });
 
 export const DELETE = route<Params>(async (req, { projectId, scenarioId }) => {

@@ -2,7 +2,7 @@ import { getDb } from "@/db";
 import { assertMayWriteScenarios } from "@/db/attachments";
 import { AppError } from "@/db/errors";
 import { createScenario } from "@/db/scenarios";
-import { SCENARIO_FILE_MAX_BYTES } from "@/lib/contracts";
+import { SCENARIO_FILE_MAX_BYTES } from "@/contracts/requests";
 import { json, requireActor, route } from "@/lib/http";
 import { readUpload, utf8 } from "@/lib/upload-body";
 import { parseScenarioFileText } from "@/physics/scenario/exchange";

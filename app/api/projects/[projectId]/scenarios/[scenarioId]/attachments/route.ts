@@ -1,7 +1,7 @@
 import { getDb } from "@/db";
 import { assertMayWriteScenarios, listAttachments, uploadAttachment } from "@/db/attachments";
 import { AppError } from "@/db/errors";
-import { ATTACHMENT_MAX_BYTES } from "@/lib/contracts";
+import { ATTACHMENT_MAX_BYTES } from "@/contracts/requests";
 import { json, requireActor, route } from "@/lib/http";
 import { classifyAttachment } from "@/lib/sniff";
 import { svgVerdict } from "@/lib/svg-safety";

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { duplicateScenario } from "@/db/scenarios";
-import { scenarioDuplicateSchema } from "@/lib/contracts";
+import { scenarioDuplicateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 
 type Params = { projectId: string; scenarioId: string };

@@ -2,7 +2,7 @@ import { getDb } from "@/db";
 import { assertMayWriteScenarios, uploadAttachment } from "@/db/attachments";
 import { AppError } from "@/db/errors";
 import { getScenario, updateScenario } from "@/db/scenarios";
-import { sequencerProfileJsonSchema, sequencerProfileOptionsSchema } from "@/lib/contracts";
+import { sequencerProfileJsonSchema, sequencerProfileOptionsSchema } from "@/contracts/requests";
 import { json, requireActor, route } from "@/lib/http";
 import { objectStore } from "@/lib/storage";
 import { readUpload, utf8 } from "@/lib/upload-body";

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { createShareLink, listShareLinks } from "@/db/share-links";
-import { shareLinkCreateSchema } from "@/lib/contracts";
+import { shareLinkCreateSchema } from "@/contracts/requests";
 import { json, readJson, requireActor, route } from "@/lib/http";
 import { shareUrl } from "@/lib/links";
 

@@ -1,6 +1,6 @@
 import { getDb } from "@/db";
 import { diffRevisions, revisionNumber } from "@/db/revisions";
-import { revisionDiffQuerySchema } from "@/lib/contracts";
+import { revisionDiffQuerySchema } from "@/contracts/requests";
 import { json, readQuery, requireActor, route } from "@/lib/http";
 
 type Params = { projectId: string; scenarioId: string; version: string };

@@ -4,12 +4,12 @@
  * the route handlers; the Export menu writes the same files in the browser.
  */
 import type { z } from "zod";
-import { exportQuerySchema } from "@/lib/contracts";
+import { exportQuerySchema } from "@/contracts/requests";
 import type { ScenarioResult } from "@/physics/result";
 import { SCENARIO_FILE_MEDIA_TYPE, scenarioFileText, toScenarioFile } from "@/physics/scenario/exchange";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import { budgetCsv } from "./budget-csv";
-import { budgetFileName, scenarioFileNameFor } from "./file-names";
+import { budgetCsv } from "@/canvas/export/budget-csv";
+import { budgetFileName, scenarioFileNameFor } from "@/canvas/export/file-names";
 
 export { exportQuerySchema };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { diffDocuments, flattenDocument } from "@/lib/document-diff";
+import { diffDocuments, flattenDocument } from "@/contracts/json-diff";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 
 describe("diffDocuments", () => {

@@ -3,6 +3,8 @@
  * (which show the same messages inline). Pure zod: no server code, safe to import in the browser.
  */
 import { z } from "zod";
+import { rangeIssues } from "../physics/scenario/ranges";
+import { parseScenarioDocument } from "../physics/scenario/schema";
 import { keptText } from "../physics/scenario/text";
 
 // Every text a request carries goes through keptText: no NUL and no lone surrogate, refused with the field's path.
@@ -29,13 +31,24 @@ export const memberAddSchema = z.object({ email: emailSchema, role: projectRoleS
 export const memberUpdateSchema = z.object({ role: projectRoleSchema }).strict();
 
 export const scenarioTitleSchema = keptText().trim().min(1, "enter a title").max(200, "use at most 200 characters");
-/** The document itself is checked against the physics schema (with upgrades of older versions) by the server. */
-export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: z.unknown().optional() }).strict();
+/**
+ * A scenario document from a client, validated once, here: the physics schema (older versions upgraded on the way)
+ * and every parameter against the range where the computation is defined (physics/scenario/ranges.ts). Every
+ * problem is reported with its path inside the document.
+ */
+export const scenarioDocumentInput = z.unknown().transform((value, ctx) => {
+  const parsed = parseScenarioDocument(value);
+  const issues = parsed.ok ? rangeIssues(parsed.document) : parsed.issues;
+  for (const issue of issues) ctx.addIssue({ code: "custom", path: issue.path ? issue.path.split(".") : [], message: issue.message });
+  return parsed.ok && issues.length === 0 ? parsed.document : z.NEVER;
+});
+
+export const scenarioCreateSchema = z.object({ title: scenarioTitleSchema, document: scenarioDocumentInput.optional() }).strict();
 export const scenarioUpdateSchema = z
   .object({
     version: z.number({ error: "version is required (the version you edited)" }).int().positive(),
     title: scenarioTitleSchema.optional(),
-    document: z.unknown().optional(),
+    document: scenarioDocumentInput.optional(),
   })
   .strict();
 export const scenarioDuplicateSchema = z.object({ title: scenarioTitleSchema.optional() }).strict();

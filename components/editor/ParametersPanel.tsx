@@ -58,7 +58,7 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
   return (
     <Group title="Background">
       <label className="block text-sm font-semibold text-ink">
-        Spacetime
+        Kind of background
         <select
           className={selectClass}
           value={bg.kind}

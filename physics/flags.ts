@@ -12,6 +12,7 @@ import { CONVERGENCE_TARGET } from "./estimators/ramp-quanta";
 import { isOutsideDoubleRange } from "./estimators/quantity";
 import type { ChannelResult, FlagStatus, ValidityFlag } from "./result";
 import type { ScenarioDocument } from "./scenario/schema";
+import { formatNumber, formatQuantity } from "./units";
 
 const OK_RATIO = 0.01;
 const CAUTION_RATIO = 0.1;
@@ -38,7 +39,7 @@ function slowMotion(speed: number): ValidityFlag {
   return {
     code: "slow-motion",
     status: ratioStatus(ratio),
-    message: `peak branch speed is ${ratio.toExponential(2)} c; the dipole and quadrupole formulas assume speeds ≪ c`,
+    message: `peak branch speed is ${formatNumber(ratio)} c; the dipole and quadrupole formulas assume speeds ≪ c`,
     measure: ratio,
   };
 }
@@ -50,7 +51,7 @@ function separationVsHorizon(d: number, background: Background): ValidityFlag {
   return {
     code: "separation-vs-horizon",
     status: ratioStatus(ratio),
-    message: `separation is ${ratio.toExponential(2)} of the proper distance to the horizon; the estimates sample the field on one worldline and need ≪ 1`,
+    message: `separation is ${formatNumber(ratio)} of the proper distance to the horizon; the estimates sample the field on one worldline and need ≪ 1`,
     measure: ratio,
   };
 }
@@ -64,8 +65,8 @@ function samplingConverged(channels: ChannelResult[]): ValidityFlag {
     code: "sampling-converged",
     status: converged ? "ok" : "caution",
     message: converged
-      ? `ramp-driven counts changed by at most ${worst.toExponential(2)} at the last doubling of the samples (target ${CONVERGENCE_TARGET})`
-      : `ramp-driven counts still changed by ${worst.toExponential(2)} at the last doubling of the samples: not converged to ${CONVERGENCE_TARGET}`,
+      ? `ramp-driven counts changed by at most ${formatNumber(worst)} at the last doubling of the samples (target ${formatNumber(CONVERGENCE_TARGET)})`
+      : `ramp-driven counts still changed by ${formatNumber(worst)} at the last doubling of the samples: not converged to ${formatNumber(CONVERGENCE_TARGET)}`,
     measure: worst,
   };
 }
@@ -74,7 +75,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
   const kinks = history.kinks.filter((k) => k.kind === "kink");
   const jumps = history.kinks.filter((k) => k.kind === "jump");
   const step = Math.min(...channels.map((ch) => (ch.convergence.timeStepSeconds > 0 ? ch.convergence.timeStepSeconds : Infinity)));
-  const at = (list: typeof kinks) => list.slice(0, 5).map((k) => `${k.timeSeconds.toPrecision(4)} s`).join(", ") + (list.length > 5 ? ", …" : "");
+  const at = (list: typeof kinks) => list.slice(0, 5).map((k) => formatQuantity(k.timeSeconds, "time", { digits: 4 })).join(", ") + (list.length > 5 ? ", …" : "");
   return [
     kinks.length === 0
       ? { code: "kink", status: "ok", message: "the branch velocity is continuous" }
@@ -83,7 +84,7 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
           status: "caution",
           message:
             `the branch velocity jumps at ${at(kinks)}: the far-field count grows without bound as the time resolution shrinks; ` +
-            `reported at a time step of ${Number.isFinite(step) ? step.toPrecision(3) : "?"} s. Use smooth ramps (minimum-jerk) for a resolution-free number`,
+            `reported at a time step of ${Number.isFinite(step) ? formatQuantity(step, "time") : "an unknown step"}. Use smooth ramps (minimum-jerk) for a resolution-free number`,
         },
     accelerationJumpFlag(history, channels),
     jumps.length === 0
@@ -91,9 +92,50 @@ function kinkFlags(history: SeparationHistory, channels: ChannelResult[]): Valid
       : {
           code: "separation-jump",
           status: "invalid",
-          message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or teleport): the counts omit the jump, which would make them diverge`,
+          message: `the separation jumps at ${at(jumps)} (the branches start or end apart, or the separation changes with no time between): the counts omit the jump, which would make them diverge`,
         },
   ];
+}
+
+const PROFILE_PROBES = 4097;
+const PROFILE_TOLERANCE = 1e-9;
+
+/**
+ * σ(t) is the separation as a fraction of d: 0 together, 1 fully apart. Ramps stay in [0, 1] by construction and a
+ * measured profile is measured in units of its own peak; a formula may leave the range, and then d no longer says
+ * how far apart the branches are (σ > 1), or the branches change sides (σ < 0). Probed on a uniform grid.
+ */
+export function profileRange(history: SeparationHistory): ValidityFlag {
+  const code = "profile-range";
+  if (history.protocolKind !== "formula") {
+    return {
+      code,
+      status: "not-applicable",
+      message: history.protocolKind === "segments" ? "ramps run σ(t) from 0 to 1 by construction" : "a measured profile is measured in units of its own peak",
+    };
+  }
+  let lowest = Infinity;
+  let highest = -Infinity;
+  for (const w of history.windows) {
+    for (let i = 0; i < PROFILE_PROBES; i++) {
+      const sigma = w.fraction(i / (PROFILE_PROBES - 1));
+      lowest = Math.min(lowest, sigma);
+      highest = Math.max(highest, sigma);
+    }
+  }
+  const d = history.peakSeparationMetres;
+  const problems: string[] = [];
+  if (highest > 1 + PROFILE_TOLERANCE) {
+    problems.push(`σ(t) reaches ${formatNumber(highest)}: the branches separate by up to ${formatQuantity(highest * d, "length")}, not d = ${formatQuantity(d, "length")}`);
+  }
+  if (lowest < -PROFILE_TOLERANCE) problems.push(`σ(t) falls to ${formatNumber(lowest)}: below 0 the branches change sides`);
+  if (problems.length === 0) return { code, status: "ok", message: "the formula's σ(t) stays within [0, 1]", measure: highest };
+  return {
+    code,
+    status: "invalid",
+    message: `${problems.join("; ")}. Write σ(t) as a fraction of d between 0 and 1, and set d to the peak separation`,
+    measure: Math.max(highest - 1, -lowest),
+  };
 }
 
 function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResult[]): ValidityFlag {
@@ -106,8 +148,8 @@ function accelerationJumpFlag(history: SeparationHistory, channels: ChannelResul
     code: "acceleration-jump",
     status: "caution",
     message:
-      "the branch acceleration jumps (smoothstep or cosine ramps): the gravitational far-field count grows like the logarithm " +
-      `of the bandwidth and is reported at a time step of ${gravity.convergence.timeStepSeconds.toPrecision(3)} s; use minimum-jerk ramps for a resolution-free number`,
+      "the branch acceleration jumps (cubic or cosine ramps): the gravitational far-field count grows like the logarithm " +
+      `of the bandwidth and is reported at a time step of ${formatQuantity(gravity.convergence.timeStepSeconds, "time")}; use minimum-jerk ramps for a resolution-free number`,
   };
 }
 
@@ -179,8 +221,8 @@ function bodyOffsetNote(document: ScenarioDocument): ValidityFlag {
     code,
     status: "note",
     message: symmetric
-      ? `body offset x₀ = ${offset.toPrecision(3)} m: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${ratio.toPrecision(3)})`
-      : `body offset x₀ = ${offset.toPrecision(3)} m: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${ratio.toPrecision(3)})`,
+      ? `body offset x₀ = ${formatQuantity(offset, "length")}: the symmetric split's quadrupole difference is 2m_eff·x₀·d (2x₀/d = ${formatNumber(ratio)})`
+      : `body offset x₀ = ${formatQuantity(offset, "length")}: the quadrupole difference is m_eff(2x₀d + d²) (2x₀/d = ${formatNumber(ratio)})`,
     measure: ratio,
   };
 }
@@ -233,7 +275,7 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
   if (kind === "minkowski") return { code, status: "not-applicable", message: "no horizon: no hold rate" };
   const apart = squaredProfileIntegralSeconds(history, electromagneticChannel);
   if (!(apart > 0)) return { code, status: "not-applicable", message: "the branches are never apart" };
-  const apartText = `the time spent apart, ∫σ²dτ = ${apart.toPrecision(3)} s of lab proper time`;
+  const apartText = `the time spent apart, ∫σ²dτ = ${formatQuantity(apart, "time")} of lab proper time`;
   if (kind === "schwarzschild") {
     const massTime = (G * document.background.massKg) / c ** 3;
     const lightTime = background.labRadiusMetres / c;
@@ -244,7 +286,7 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
       status: ratioStatus(ratio),
       message:
         `the Schwarzschild hold rates are zero-frequency limits: they need ${apartText}, long against the hole's response ` +
-        `time, GM/c³ = ${massTime.toPrecision(3)} s and b/c = ${lightTime.toPrecision(3)} s of Killing time (${response.toPrecision(3)} s of lab time); ratio ${ratio.toExponential(2)}`,
+        `time, GM/c³ = ${formatQuantity(massTime, "time")} and b/c = ${formatQuantity(lightTime, "time")} of Killing time (${formatQuantity(response, "time")} of lab time); ratio ${formatNumber(ratio)}`,
       measure: ratio,
     };
   }
@@ -255,8 +297,8 @@ function holdTimescale(document: ScenarioDocument, history: SeparationHistory, b
     code,
     status: status === "invalid" ? "caution" : status,
     message:
-      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${correlation.toPrecision(3)} s; ` +
-      `ratio ${ratio.toExponential(2)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
+      `the hold rate is a steady rate only for ${apartText}, long against the field's thermal time ${kind === "rindler" ? "c/a" : "c/√(a² + c²H²)"} = ${formatQuantity(correlation, "time")}; ` +
+      `ratio ${formatNumber(ratio)}${status === "ok" ? "" : " (the total count is exact for any protocol; only its reading as rate × time fails)"}`,
     measure: ratio,
   };
 }
@@ -275,6 +317,7 @@ export function validityFlags(inputs: FlagInputs): ValidityFlag[] {
     separationVsHorizon(inputs.history.peakSeparationMetres, inputs.background),
     samplingConverged(channels),
     ...kinkFlags(inputs.history, channels),
+    profileRange(inputs.history),
     holdTimescale(inputs.document, inputs.history, inputs.background),
     schwarzschildRegime(inputs.document, inputs.electromagnetic),
     ...modelChecks(inputs.modelFlags),

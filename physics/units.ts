@@ -2,7 +2,9 @@
  * Quantities at the edges (forms, CLI, API): parse text with units into SI numbers and print SI numbers readably.
  * Parsing goes through a private mathjs instance with two extra units: `Msun` (M☉ = GM☉/G, IAU 2015 Resolution B3
  * nominal GM☉ and CODATA 2018 G) and `echarge` (the elementary charge, CODATA 2018). A lone unit token `e` is read
- * as `echarge`, never as Euler's number, so "1e-3 e" is a thousandth of an elementary charge.
+ * as `echarge`, never as Euler's number, so "1e-3 e" is a thousandth of an elementary charge. Given the background's
+ * lengths, a length may also be written in r_s = 2GM/c², GM/c² or c/H ("3 rs"). Numbers print through one formatter,
+ * formatNumber, whose "1.5 × 10⁶" reads back.
  */
 import { all, create, type Unit } from "mathjs";
 import { c, e as elementaryChargeCoulombs, epsilon0, G, hbar, planckLength, planckMass, planckTime, solarMass } from "./constants";
@@ -26,14 +28,15 @@ const DIMENSIONS: Record<QuantityDimension, { siUnit: string; example: string; a
   resistivity: { siUnit: "ohm m", example: "2.2e-8 ohm m", article: "a resistivity" },
 };
 
-export type ParsedQuantity = { ok: true; valueSI: number } | { ok: false; message: string };
+/** `unit`: the named unit the text was written in (e, M☉, r_s, GM/c², c/H), so a field can echo it; absent for others. */
+export type ParsedQuantity = { ok: true; valueSI: number; unit?: NamedUnit } | { ok: false; message: string };
 
 const LEADING_NUMBER = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*)$/;
 const SUPERSCRIPTS: Record<string, string> = { "⁻": "-", "⁰": "0", "¹": "1", "²": "2", "³": "3", "⁴": "4", "⁵": "5", "⁶": "6", "⁷": "7", "⁸": "8", "⁹": "9" };
 
 /**
- * Spellings mathjs does not read: Ω, micro signs, M☉, Unicode minus, superscript exponents, and the printed
- * "2.20 × 10⁻⁸" form (read as 2.20e-8, so what formatQuantity prints parses back).
+ * Spellings mathjs does not read: Ω, micro signs, M☉, Unicode minus, superscript exponents, and a number written
+ * as Branchline prints it, "2.20 × 10⁻⁸" (read as 2.20e-8, so what formatQuantity prints parses back).
  */
 function normaliseSpelling(text: string): string {
   return text
@@ -43,7 +46,56 @@ function normaliseSpelling(text: string): string {
     .replace(/M☉/g, "Msun")
     .replace(/−/g, "-")
     .replace(/[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+/g, (run) => `^${[...run].map((ch) => SUPERSCRIPTS[ch]).join("")}`)
-    .replace(/^([+-]?(?:\d+\.?\d*|\.\d+))\s*×\s*10\^(-?\d+)/, "$1e$2");
+    .replace(/^([+-]?(?:\d+\.?\d*|\.\d+))\s*[×x·*]\s*10\^([+-]?\d+)/, "$1e$2");
+}
+
+/**
+ * Lengths the field itself measures in, beside the metre: around a black hole its horizon radius r_s = 2GM/c² and
+ * GM/c² (the geometrized mass); in de Sitter the horizon radius c/H. Known only with a background, so optional.
+ */
+export interface LengthScales {
+  schwarzschildRadiusMetres?: number;
+  hubbleRadiusMetres?: number;
+}
+
+/** Units of our own a value can be typed in and echoed back in: the elementary charge, the solar mass, and the field's lengths. */
+export type NamedUnit = "e" | "M☉" | "r_s" | "GM/c²" | "c/H";
+
+const NAMED_LENGTH_SPELLINGS: { unit: "r_s" | "GM/c²" | "c/H"; spelling: RegExp }[] = [
+  { unit: "r_s", spelling: /^(?:r_?s|rₛ|r_\{s\})$/ },
+  { unit: "GM/c²", spelling: /^(?:GM\/c\^?2|M)$/ },
+  { unit: "c/H", spelling: /^(?:c\/H|r_?H)$/ },
+];
+
+/** Metres in one of the field's named lengths, or undefined when the background has no such length. */
+function namedLengthMetres(unit: "r_s" | "GM/c²" | "c/H", scales: LengthScales): number | undefined {
+  switch (unit) {
+    case "r_s":
+      return scales.schwarzschildRadiusMetres;
+    case "GM/c²":
+      return scales.schwarzschildRadiusMetres === undefined ? undefined : scales.schwarzschildRadiusMetres / 2;
+    case "c/H":
+      return scales.hubbleRadiusMetres;
+  }
+}
+
+/** SI value of one of a named unit (undefined: a length the background does not have). */
+export function namedUnitSI(unit: NamedUnit, scales: LengthScales = {}): number | undefined {
+  if (unit === "e") return elementaryChargeCoulombs;
+  if (unit === "M☉") return solarMass.value;
+  return namedLengthMetres(unit, scales);
+}
+
+/** A value printed in a named unit, through the one number formatter: "3 r_s", "100 e", "10 M☉". */
+export function formatInUnit(valueSI: number, unit: NamedUnit, scales: LengthScales = {}, digits = 4): string | null {
+  const size = namedUnitSI(unit, scales);
+  return size === undefined ? null : `${formatNumber(valueSI / size, digits)} ${unit}`;
+}
+
+/** A length beside the field's own lengths, for a readout next to the SI value: "= 3 r_s = 6 GM/c²", "= 0.5 c/H"; "" with none. */
+export function namedLengthsText(metres: number, scales: LengthScales = {}, digits = 4): string {
+  const units: ("r_s" | "GM/c²" | "c/H")[] = scales.schwarzschildRadiusMetres !== undefined ? ["r_s", "GM/c²"] : scales.hubbleRadiusMetres !== undefined ? ["c/H"] : [];
+  return units.map((unit) => `= ${formatInUnit(metres, unit, scales, digits)}`).join(" ");
 }
 
 /** The unit part as mathjs reads it: a lone `e` is the elementary charge; "1/s" style reciprocals are kept. */
@@ -51,11 +103,20 @@ function readUnit(unitText: string): Unit {
   return math.unit(unitText.replace(/(?<![A-Za-z_0-9])e(?![A-Za-z_0-9])/g, "echarge"));
 }
 
+/** The named unit a unit text stands for, if it is one. */
+function namedUnitOf(unitText: string, dimension: QuantityDimension): NamedUnit | undefined {
+  if (dimension === "charge" && /^(?:e|echarge)$/.test(unitText)) return "e";
+  if (dimension === "mass" && unitText === "Msun") return "M☉";
+  if (dimension === "length") return NAMED_LENGTH_SPELLINGS.find((n) => n.spelling.test(unitText))?.unit;
+  return undefined;
+}
+
 /**
- * Parse text such as "250 ms" or "10 Msun" as a quantity of the given dimension, into SI (m, s, kg, C, m s^-2, s^-1).
- * A bare number is refused unless `options.defaultUnit` says which unit it is in.
+ * Parse text such as "250 ms", "10 Msun", "1.5 × 10⁶ e" or (with the background's `lengthScales`) "3 rs" as a
+ * quantity of the given dimension, into SI (m, s, kg, C, m s^-2, s^-1). A bare number is refused unless
+ * `options.defaultUnit` says which unit it is in.
  */
-export function parseQuantity(text: string, dimension: QuantityDimension, options: { defaultUnit?: string } = {}): ParsedQuantity {
+export function parseQuantity(text: string, dimension: QuantityDimension, options: { defaultUnit?: string; lengthScales?: LengthScales } = {}): ParsedQuantity {
   const expected = DIMENSIONS[dimension];
   const wanted = `${expected.article} such as '${expected.example}'`;
   const match = LEADING_NUMBER.exec(normaliseSpelling(text));
@@ -63,6 +124,15 @@ export function parseQuantity(text: string, dimension: QuantityDimension, option
   const [, numberText, written] = match;
   const unitText = written.trim() || options.defaultUnit;
   if (!unitText) return { ok: false, message: `'${text}' has no unit: write ${wanted}` };
+  const named = namedUnitOf(unitText, dimension);
+  if (named === "r_s" || named === "GM/c²" || named === "c/H") {
+    const metres = namedLengthMetres(named, options.lengthScales ?? {});
+    if (metres === undefined) {
+      return { ok: false, message: `'${unitText}' is a length of ${named === "c/H" ? "a de Sitter background" : "a black-hole background"}; this one has none` };
+    }
+    const valueSI = Number(numberText) * metres;
+    return Number.isFinite(valueSI) ? { ok: true, valueSI, unit: named } : { ok: false, message: `'${text}' is too large to represent` };
+  }
   let unit: Unit;
   try {
     unit = math.multiply(Number(numberText), readUnit(unitText)) as Unit;
@@ -72,7 +142,7 @@ export function parseQuantity(text: string, dimension: QuantityDimension, option
   if (!unit.equalBase(math.unit(expected.siUnit))) return { ok: false, message: `expected ${wanted}, got '${text}'` };
   const valueSI = unit.toNumber(expected.siUnit);
   if (!Number.isFinite(valueSI)) return { ok: false, message: `'${text}' is too large to represent` };
-  return { ok: true, valueSI };
+  return named ? { ok: true, valueSI, unit: named } : { ok: true, valueSI };
 }
 
 const PREFIXES: Record<number, string> = {
@@ -127,6 +197,22 @@ export function formatQuantity(valueSI: number, dimension: QuantityDimension, op
     return dimension === "mass" ? scientific(valueSI, "kg", digits) : scientific(value, symbol, digits);
   }
   return `${mantissa} ${PREFIXES[exponent]}${symbol}`;
+}
+
+/**
+ * A plain number with `digits` significant digits (default 3): as it is between 0.01 and 9999, else with its power
+ * of ten written out ("6.8 × 10²⁰", "−7.52 × 10⁻⁵"). The one way Branchline prints a bare number, in fields, flags
+ * and figures alike.
+ */
+export function formatNumber(value: number, digits = 3): string {
+  if (value === 0) return "0";
+  if (!Number.isFinite(value)) return Number.isNaN(value) ? "NaN" : value > 0 ? "∞" : "−∞";
+  const sign = value < 0 ? "−" : "";
+  const rounded = Number(Math.abs(value).toPrecision(digits));
+  const exponent = Math.floor(Math.log10(rounded));
+  if (exponent >= -2 && exponent <= 3) return sign + String(rounded);
+  const mantissa = Number((rounded / 10 ** exponent).toPrecision(digits));
+  return `${sign}${mantissa} × 10${superscript(exponent)}`;
 }
 
 /** A mass, length, time or charge in geometrized (G = c = 1) and Planck (ħ = G = c = 1, 4πε0 = 1) terms. */

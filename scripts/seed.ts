@@ -52,12 +52,13 @@ function hoveringLab(): ScenarioDocument {
 function acceleratedLab(): ScenarioDocument {
   const doc = defaultScenarioDocument();
   doc.background = { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 };
+  doc.lab = { placement: "uniformly-accelerated" };
   doc.source = { chargeCoulombs: 10 * e, massKg: 1e-15, labMassKg: null };
   doc.separation = { axis: "tangential", split: "one-branch-stays", distanceMetres: 5e-7 };
   return doc;
 }
 
-/** An invented sequencer run: separate over 40 ms with a smooth ramp, hold 2.5 µm for 120 ms, recombine over 40 ms. */
+/** An invented sequencer run: separate over 40 ms with a cubic ramp (3u² − 2u³), hold 2.5 µm for 120 ms, recombine over 40 ms. */
 function sequencerRunCsv(): string {
   const rows = ["t [ms],separation [um]"];
   const ramp = (u: number) => u * u * (3 - 2 * u);
@@ -85,7 +86,7 @@ async function seed(): Promise<void> {
     await addMemberByEmail(db, actor, project.id, DEMO_VIEWER.email, "viewer");
     const flat = await createScenario(db, actor, project.id, { title: "Charged microsphere: flat-space recombination study", document: flatSpaceStudy() });
     const hovering = await createScenario(db, actor, project.id, { title: "Lab hovering outside a 10 M☉ black hole", document: hoveringLab() });
-    await createScenario(db, actor, project.id, { title: "Accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
+    await createScenario(db, actor, project.id, { title: "Uniformly accelerated lab at 10¹⁸ m/s²", document: acceleratedLab() });
     await createScenario(db, actor, project.id, { title: "Charged silica sphere 40 µm above a gold-coated chip, 4 K", document: silicaAboveGoldChip() });
     await createScenario(db, actor, project.id, { title: "Neutral diamond, 10 s hold in a room-temperature vacuum", document: neutralDiamondLongHold() });
     console.log("[seed] created the demo project with five scenarios");

@@ -97,7 +97,31 @@ function DeSitterDerivation() {
   );
 }
 
-export default function MethodsPage() {
+type EchoParams = { from?: string | string[]; label?: string | string[]; value?: string | string[]; inputs?: string | string[] };
+
+const one = (value: string | string[] | undefined) => (typeof value === "string" ? value.slice(0, 300) : null);
+
+/** The number a reader clicked in the editor, echoed with its inputs above the formulas, and a link to its formula. */
+function ClickedNumber({ params }: { params: EchoParams }) {
+  const [from, label, value, inputs] = [one(params.from), one(params.label), one(params.value), one(params.inputs)];
+  if (!from || !label || !value || !(from in sources)) return null;
+  return (
+    <section className="mt-6 rounded border border-focus bg-white/60 p-4 text-sm" aria-label="The number you opened" data-testid="methods-echo">
+      <p>
+        <span className="font-semibold">{label}</span> = <span className="tabular">{value}</span>
+      </p>
+      {inputs && <p className="mt-1 text-ink-soft">from {inputs}</p>}
+      <p className="mt-1">
+        <a href={`#${from}`} className="underline decoration-rule-strong underline-offset-2">
+          Its formula: {sources[from as SourceKey].title}
+        </a>
+      </p>
+    </section>
+  );
+}
+
+export default async function MethodsPage({ searchParams }: { searchParams: Promise<EchoParams> }) {
+  const params = await searchParams;
   const listed = new Set(groups.flatMap((g) => g.keys));
   const rest = (Object.keys(sources) as SourceKey[]).filter((k) => !listed.has(k));
   const all = rest.length ? [...groups, { id: "further", title: "Further formulas", intro: "", keys: rest }] : groups;
@@ -110,6 +134,7 @@ export default function MethodsPage() {
         branches and <Formula tex="\Delta p(\tau) = q\,(x_A(\tau) - x_B(\tau))" /> the dipole difference along the lab's
         proper time <Formula tex="\tau" />.
       </p>
+      <ClickedNumber params={params} />
       <section className="mt-6 rounded border border-rule bg-white/50 p-5">
         <h2 className="font-serif text-lg font-semibold">The core formula</h2>
         <p className="mt-2 text-sm leading-relaxed">

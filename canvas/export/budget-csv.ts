@@ -43,7 +43,7 @@ export function csvValue(q: Quantity): string {
 const CHANNEL_WORDS = { electromagnetic: "electromagnetic", gravitational: "gravitational" } as const;
 
 const CHANNEL_ROWS: { words: string; of(c: ChannelResult): Quantity | null }[] = [
-  { words: "Quanta to infinity", of: (c) => c.farFieldQuanta },
+  { words: "Quanta to null infinity ℐ⁺", of: (c) => c.farFieldQuanta },
   { words: "Quanta into the horizon", of: (c) => c.horizonQuanta },
   { words: "Ramp-driven quanta", of: (c) => c.rampDrivenQuanta },
   { words: "Hold-driven quanta", of: (c) => c.holdDrivenQuanta },

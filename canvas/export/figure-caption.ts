@@ -33,15 +33,17 @@ function labPart(document: ScenarioDocument): string {
   const { background: b, lab } = document;
   switch (lab.placement) {
     case "inertial":
-      return b.kind === "rindler" ? "lab accelerated, at c²/a from the horizon" : b.kind === "de-sitter" ? "lab at the centre r = 0" : "lab inertial";
+      return "lab inertial";
+    case "uniformly-accelerated":
+      return "lab uniformly accelerated, at c²/a from the horizon";
     case "areal-radius": {
       const r = lab.arealRadiusMetres;
       if (b.kind === "schwarzschild") return `lab at r = ${q(r, "length")} (r/rₛ = ${ratio(r / schwarzschildRadiusMetres(b.massKg))})`;
       if (b.kind === "de-sitter") return `lab at r = ${q(r, "length")} (rH/c = ${ratio((r * b.hubbleRatePerSecond) / c)})`;
       return `lab at r = ${q(r, "length")}`;
     }
-    case "proper-distance-above-horizon":
-      return `lab ${q(lab.properDistanceMetres, "length")} of proper distance from the horizon`;
+    case "proper-distance-from-horizon":
+      return `lab ${q(lab.properDistanceMetres, "length")} of proper distance ${b.kind === "de-sitter" ? "inward from" : "above"} the horizon`;
   }
 }
 

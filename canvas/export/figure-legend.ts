@@ -13,7 +13,7 @@ export type LegendEntry =
   | { kind: "area"; words: string; fill: string };
 
 export const RADIATION_WORDS: Record<RadiationKind, string> = {
-  "far-field": "radiated toward ℐ⁺ by the ramps",
+  "far-field": "radiated to null infinity ℐ⁺ by the ramps",
   horizon: "taken by the horizon while apart",
 };
 

@@ -74,9 +74,9 @@ export function withBackgroundKind(document: ScenarioDocument, kind: ScenarioDoc
     case "minkowski":
       return { ...document, background: { kind }, lab: { placement: "inertial" } };
     case "rindler":
-      return { ...document, background: { kind, accelerationMetresPerSecondSquared: DEFAULT_RINDLER_ACCELERATION }, lab: { placement: "inertial" } };
+      return { ...document, background: { kind, accelerationMetresPerSecondSquared: DEFAULT_RINDLER_ACCELERATION }, lab: { placement: "uniformly-accelerated" } };
     case "de-sitter":
-      return { ...document, background: { kind, hubbleRatePerSecond: DEFAULT_HUBBLE_RATE }, lab: { placement: "inertial" } };
+      return { ...document, background: { kind, hubbleRatePerSecond: DEFAULT_HUBBLE_RATE }, lab: { placement: "areal-radius", arealRadiusMetres: 0 } };
     case "schwarzschild": {
       const massKg = DEFAULT_BLACK_HOLE_SOLAR_MASSES * solarMass.value;
       const horizon = (2 * G * massKg) / (c * c);
@@ -93,19 +93,19 @@ export function withRampShape(document: ScenarioDocument, ramp: "separation" | "
 
 /**
  * The same lab described another way (areal radius ↔ proper distance from the horizon), so switching the
- * description does not move it; a lab at the de Sitter centre asked for a radius is put half-way to the horizon.
+ * description does not move it.
  */
 export function withLabPlacement(document: ScenarioDocument, placement: LabPlacement["placement"]): ScenarioDocument {
   if (document.lab.placement === placement) return document;
   const background = makeBackground(document.background, document.lab);
   switch (placement) {
     case "inertial":
+    case "uniformly-accelerated":
       return { ...document, lab: { placement } };
     case "areal-radius": {
-      const r = background.labRadiusMetres > 0 ? background.labRadiusMetres : 0.5 * (background.horizon?.radiusMetres ?? 1);
-      return { ...document, lab: { placement, arealRadiusMetres: r } };
+      return { ...document, lab: { placement, arealRadiusMetres: background.labRadiusMetres } };
     }
-    case "proper-distance-above-horizon":
+    case "proper-distance-from-horizon":
       return { ...document, lab: { placement, properDistanceMetres: background.labProperDistanceToHorizonMetres ?? 1 } };
   }
 }

@@ -31,7 +31,7 @@ export function FilesPage({ projectId, scenarioId }: { projectId: string; scenar
           {canWrite && (
             <section aria-labelledby="sequencer-title" className="space-y-3 border-t border-rule pt-6">
               <h2 id="sequencer-title" className="font-serif text-lg font-semibold">
-                Protocol from a sequencer file
+                Measured profile from a sequencer CSV
               </h2>
               <p className="text-sm text-ink-soft">
                 Read a lab sequencer’s CSV of separation against time and save it as this scenario’s protocol, as a new version (v{scenario.version + 1}); the

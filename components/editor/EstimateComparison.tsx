@@ -4,8 +4,8 @@
  * Beside the exact Schwarzschild hold rate, the published order-of-magnitude estimate for the same lab and
  * source, greyed, with the ratio: a reader sees at once how far the exact coefficient moves the estimate.
  */
-import Link from "next/link";
-import type { ChannelResult, EstimateRegime } from "@/physics/result";
+import { besideTheEditor, methodsHref } from "@/components/methods/methods-href";
+import type { ChannelResult, EstimateRegime, Quantity } from "@/physics/result";
 import { quantityText } from "./quantity-text";
 
 const regimeWords: Record<EstimateRegime, string> = {
@@ -13,6 +13,17 @@ const regimeWords: Record<EstimateRegime, string> = {
   "near-horizon": "near-horizon (Rindler) estimate",
   interpolated: "interpolated estimate",
 };
+
+/** A number linking to its formula on the Methods page, opened beside the editor with the number echoed there. */
+function MethodsNumber({ quantity, label, className, prefix = "" }: { quantity: Quantity; label: string; className: string; prefix?: string }) {
+  const value = quantityText(quantity);
+  return (
+    <a href={methodsHref(quantity.sourceKey, { label, value })} {...besideTheEditor} className={className}>
+      {prefix}
+      {value}
+    </a>
+  );
+}
 
 export function EstimateComparison({ channels }: { channels: ChannelResult[] }) {
   const compared = channels.filter((c) => c.comparison);
@@ -28,19 +39,13 @@ export function EstimateComparison({ channels }: { channels: ChannelResult[] }) 
                 {c.channel === "electromagnetic" ? "Electromagnetic" : "Gravitational"}
               </th>
               <td className="py-0.5 pr-2 text-right">
-                <Link href={`/methods#${c.holdRate.sourceKey}`} className="tabular underline decoration-rule-strong underline-offset-4">
-                  {quantityText(c.holdRate)}
-                </Link>
+                <MethodsNumber quantity={c.holdRate} label={`Hold rate into the horizon, ${c.channel}, exact`} className="tabular underline decoration-rule-strong underline-offset-4" />
               </td>
               <td className="py-0.5 pr-2 text-right text-ink-faint" title={regimeWords[c.comparison!.estimateRegime]}>
-                <Link href={`/methods#${c.comparison!.estimateHoldRate.sourceKey}`} className="tabular">
-                  ~{quantityText(c.comparison!.estimateHoldRate)}
-                </Link>
+                <MethodsNumber quantity={c.comparison!.estimateHoldRate} label={`Hold rate into the horizon, ${c.channel}, published estimate`} className="tabular" prefix="~" />
               </td>
               <td className="py-0.5 text-right text-ink-faint">
-                <Link href={`/methods#${c.comparison!.ratioExactToEstimate.sourceKey}`} className="tabular">
-                  ratio {quantityText(c.comparison!.ratioExactToEstimate)}
-                </Link>
+                <MethodsNumber quantity={c.comparison!.ratioExactToEstimate} label={`Exact over estimate, ${c.channel}`} className="tabular" prefix="ratio " />
               </td>
             </tr>
           ))}
@@ -48,7 +53,7 @@ export function EstimateComparison({ channels }: { channels: ChannelResult[] }) 
       </table>
       <p className="mt-1 text-ink-faint">
         The estimate (greyed) is the published order of magnitude; the exact value comes from the horizon&apos;s
-        field change at this radius (<Link href="/methods/schwarzschild-exact" className="underline">derivation</Link>).
+        field change at this radius (<a href="/methods/schwarzschild-exact" {...besideTheEditor} className="underline">derivation</a>).
       </p>
     </div>
   );

@@ -80,7 +80,7 @@ export function OffsetsPanel() {
             ? "Drag a handle; Shift snaps to round values; Tab walks the handles, arrow keys nudge the selected one."
             : readOnly
               ? "Read-only."
-              : "A formula or sampled profile has no handles: a formula is edited in the Protocol strip."}
+              : "A formula or sampled profile has no handles: a formula is edited in the Protocol panel."}
         </p>
       </div>
       <div ref={ref} className="overflow-hidden rounded border border-rule" style={{ height: HEIGHT }}>

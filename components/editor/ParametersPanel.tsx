@@ -5,9 +5,11 @@ import { useMemo, type ReactNode } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { compactNumber } from "@/canvas/kernels/diagram/labels";
 import { withBackgroundKind, withLabPlacement } from "@/canvas/kernels/document-edits";
-import { elementaryCharge } from "@/physics/constants";
+import { withPeakSeparation } from "@/canvas/kernels/protocol-kind";
+import { schwarzschildRadiusMetres } from "@/physics/backgrounds";
+import { c, elementaryCharge } from "@/physics/constants";
 import type { BackgroundKind, LabPlacement, ScenarioDocument } from "@/physics/scenario/schema";
-import { formatQuantity, parseQuantity } from "@/physics/units";
+import { formatQuantity, namedLengthsText, parseQuantity, type LengthScales } from "@/physics/units";
 import { EnvironmentFields } from "./EnvironmentFields";
 import { DraftField, QuantityField, type ParseResult } from "./QuantityField";
 import { useEdit } from "./useEdit";
@@ -57,7 +59,7 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
   return (
     <Group title="Background">
       <label className="block text-sm font-semibold text-ink">
-        Spacetime
+        Kind of background
         <select
           className={selectClass}
           value={bg.kind}
@@ -77,6 +79,7 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
           label="Black-hole mass"
           dimension="mass"
           hint="In kg or solar masses, e.g. 10 Msun"
+          valueSI={bg.massKg}
           shown={formatQuantity(bg.massKg, "mass", { solarMasses: true, digits: 4 })}
           disabled={readOnly}
           onCommit={(massKg) => edit("Set black-hole mass", (d) => ({ ...d, background: { kind: "schwarzschild", massKg } }))}
@@ -108,9 +111,9 @@ function BackgroundFields({ document, readOnly }: { document: PhysicalSetup; rea
 
 const PLACEMENT_WORDS: Record<BackgroundKind, Partial<Record<LabPlacement["placement"], string>>> = {
   minkowski: { inertial: "at rest (inertial)" },
-  rindler: { inertial: "accelerated, c²/a from the horizon" },
-  schwarzschild: { "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance above the horizon" },
-  "de-sitter": { inertial: "at the centre", "areal-radius": "areal radius", "proper-distance-above-horizon": "proper distance inward from the horizon" },
+  rindler: { "uniformly-accelerated": "uniformly accelerated, c²/a from the horizon" },
+  schwarzschild: { "areal-radius": "areal radius", "proper-distance-from-horizon": "proper distance above the horizon" },
+  "de-sitter": { "areal-radius": "areal radius (0: the static geodesic observer at the centre)", "proper-distance-from-horizon": "proper distance inward from the horizon" },
 };
 
 /**
@@ -135,15 +138,30 @@ function LabSummary() {
   );
 }
 
+/** The background's own lengths: r_s = 2GM/c² (and GM/c²) around a black hole, c/H in de Sitter. */
+function lengthScalesOf(background: ScenarioDocument["background"]): LengthScales {
+  if (background.kind === "schwarzschild") return { schwarzschildRadiusMetres: schwarzschildRadiusMetres(background.massKg) };
+  if (background.kind === "de-sitter") return { hubbleRadiusMetres: c / background.hubbleRatePerSecond };
+  return {};
+}
+
+/** "e.g. 3 rs or 6 GM/c^2" for the lengths a background has, so a reader knows they are accepted. */
+function lengthHint(metres: number, scales: LengthScales): string | undefined {
+  const readout = namedLengthsText(metres, scales);
+  if (!readout) return undefined;
+  return `${readout}; type e.g. ${scales.schwarzschildRadiusMetres !== undefined ? "3 rs or 6 GM/c^2" : "0.5 c/H"}, or in metres`;
+}
+
 function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
   const edit = useEdit();
   const placements = PLACEMENT_WORDS[document.background.kind];
   const lab = document.lab;
+  const scales = lengthScalesOf(document.background);
   return (
     <Group title="Lab">
       {Object.keys(placements).length > 1 ? (
         <label className="block text-sm font-semibold text-ink">
-          Position given as
+          Place the lab by
           <select
             className={selectClass}
             value={lab.placement}
@@ -164,24 +182,35 @@ function LabFields({ document, readOnly }: { document: PhysicalSetup; readOnly: 
         <QuantityField
           label="Areal radius"
           dimension="length"
+          lengthScales={scales}
+          valueSI={lab.arealRadiusMetres}
+          hint={lengthHint(lab.arealRadiusMetres, scales)}
           shown={formatQuantity(lab.arealRadiusMetres, "length", { digits: 5 })}
           disabled={readOnly}
           testId="lab-areal-radius"
           onCommit={(r) => edit("Set lab radius", (d) => ({ ...d, lab: { placement: "areal-radius", arealRadiusMetres: r } }))}
         />
       )}
-      {lab.placement === "proper-distance-above-horizon" && (
+      {lab.placement === "proper-distance-from-horizon" && (
         <QuantityField
           label={document.background.kind === "de-sitter" ? "Proper distance inward from the horizon" : "Proper distance above the horizon"}
           dimension="length"
+          lengthScales={scales}
+          valueSI={lab.properDistanceMetres}
+          hint={lengthHint(lab.properDistanceMetres, scales)}
           shown={formatQuantity(lab.properDistanceMetres, "length", { digits: 5 })}
           disabled={readOnly}
-          onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: l } }))}
+          onCommit={(l) => edit("Set lab distance", (d) => ({ ...d, lab: { placement: "proper-distance-from-horizon", properDistanceMetres: l } }))}
         />
       )}
       <LabSummary />
     </Group>
   );
+}
+
+/** A charge that is a whole number of elementary charges (up to a million), shown in e rather than in coulombs. */
+function isWholeMultiple(inE: number): boolean {
+  return inE !== 0 && Math.abs(inE) <= 1e6 && Math.abs(inE - Math.round(inE)) < 1e-6;
 }
 
 /** A mass, or nothing at all (empty text): the lab's mass is optional. */
@@ -192,7 +221,7 @@ function parseOptionalMass(text: string): ParseResult<number | null> {
   return parsed.valueSI > 0 ? { ok: true, value: parsed.valueSI } : { ok: false, message: "the lab's mass must be positive; leave the field empty for none" };
 }
 
-function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnly: boolean }) {
+function SourceFields({ document, readOnly, measuredProfile }: { document: PhysicalSetup; readOnly: boolean; measuredProfile: boolean }) {
   const edit = useEdit();
   const { source, separation } = document;
   return (
@@ -201,7 +230,9 @@ function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnl
         <QuantityField
           label="Charge"
           dimension="charge"
-          hint={`= ${compactNumber(source.chargeCoulombs / elementaryCharge.value)} e; type e.g. 100 e or 1.6e-17 C`}
+          hint={`= ${compactNumber(source.chargeCoulombs / elementaryCharge.value, 4)} e = ${formatQuantity(source.chargeCoulombs, "charge", { digits: 4 })}; type e.g. 100 e or 1.6e-17 C`}
+          valueSI={source.chargeCoulombs}
+          initialUnit={isWholeMultiple(source.chargeCoulombs / elementaryCharge.value) ? "e" : undefined}
           shown={formatQuantity(source.chargeCoulombs, "charge", { digits: 4 })}
           disabled={readOnly}
           onCommit={(q) => edit("Set charge", (d) => ({ ...d, source: { ...d.source, chargeCoulombs: q } }))}
@@ -209,6 +240,7 @@ function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnl
         <QuantityField
           label="Mass"
           dimension="mass"
+          valueSI={source.massKg}
           shown={formatQuantity(source.massKg, "mass", { digits: 4 })}
           disabled={readOnly}
           onCommit={(m) => edit("Set source mass", (d) => ({ ...d, source: { ...d.source, massKg: m } }))}
@@ -249,9 +281,13 @@ function SourceFields({ document, readOnly }: { document: PhysicalSetup; readOnl
         <QuantityField
           label="Full separation d"
           dimension="length"
+          hint={measuredProfile ? "The measured profile's peak: a new value rescales the profile's samples." : lengthHint(separation.distanceMetres, lengthScalesOf(document.background))}
+          lengthScales={lengthScalesOf(document.background)}
+          valueSI={separation.distanceMetres}
           shown={formatQuantity(separation.distanceMetres, "length", { digits: 4 })}
           disabled={readOnly}
-          onCommit={(m) => edit("Set separation", (d) => ({ ...d, separation: { ...d.separation, distanceMetres: m } }))}
+          testId="separation-distance"
+          onCommit={(m) => edit("Set separation", (d) => withPeakSeparation(d, m))}
         />
       </Group>
     </>
@@ -266,6 +302,7 @@ export function ParametersPanel() {
   const document = useMemo(() => ({ background, lab, source, separation }), [background, lab, source, separation]);
   const environment = useEditor((s) => s.document.environment);
   const readOnly = useEditor((s) => s.readOnly);
+  const measuredProfile = useEditor((s) => s.document.protocol.kind === "sampled");
   return (
     <section aria-labelledby="parameters-heading" className="space-y-4">
       <h2 id="parameters-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
@@ -273,7 +310,7 @@ export function ParametersPanel() {
       </h2>
       <BackgroundFields document={document} readOnly={readOnly} />
       <LabFields document={document} readOnly={readOnly} />
-      <SourceFields document={document} readOnly={readOnly} />
+      <SourceFields document={document} readOnly={readOnly} measuredProfile={measuredProfile} />
       <EnvironmentFields environment={environment} readOnly={readOnly} />
     </section>
   );

@@ -1,12 +1,15 @@
 "use client";
 
 /**
- * The Protocol strip: separation, hold and recombination as bars, each with its duration and ramp shape; for a
- * formula profile, its expression and duration. A sampled profile is shown in the Offsets panel and not edited here.
+ * The Protocol: which kind of profile the branches follow (ramps, a formula, a measured profile), switched in one
+ * undo step with the peak separation kept (canvas/kernels/protocol-kind.ts), and the fields of that kind: the
+ * ramps' durations and shapes; a formula's σ(t) and duration; a measured profile's duration and interpolation (its
+ * peak is d, set under Parameters).
  */
 import { memo, useDeferredValue } from "react";
 import { useEditor } from "@/canvas/EditorProvider";
 import { withFormula, withRampShape, withSegmentDuration } from "@/canvas/kernels/document-edits";
+import { withInterpolation, withProtocolKind, withSampledDuration, type ProtocolKind } from "@/canvas/kernels/protocol-kind";
 import type { HandleId } from "@/canvas/kernels/offsets/handles";
 import { segmentShares } from "@/canvas/kernels/offsets/viewport";
 import type { SegmentName } from "@/canvas/kernels/timeline";
@@ -18,20 +21,21 @@ import { usePanelValue } from "./usePacedDuringDrag";
 
 const SHAPE_WORDS: Record<RampShape, string> = {
   "minimum-jerk": "minimum jerk",
-  smoothstep: "smoothstep",
+  cubic: "cubic (3u² − 2u³)",
   cosine: "cosine",
   linear: "linear (kinked)",
 };
 
 const SEGMENT_WORDS: Record<SegmentName, string> = { separation: "Separation", hold: "Hold", recombination: "Recombination" };
 
-const FORMULA_HINT = "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration; t, pi, e, arithmetic and elementary functions.";
+const FORMULA_HINT =
+  "σ(t): 0 together, 1 fully apart; t in seconds from 0 to the duration. Numbers, t, pi and e (Euler's number here), + − * / ^, comparisons, a ? b : c, sin cos exp log sqrt and the other elementary functions; no units (docs: file formats).";
 
 /** A duration typed with its unit, read-only for a viewer. */
 function DurationField({ seconds, testId, onCommit }: { seconds: number; testId: string; onCommit(seconds: number): CommitResult }) {
   const readOnly = useEditor((s) => s.readOnly);
   return (
-    <div className="w-32">
+    <div className="w-40">
       <QuantityField
         compact
         label="Duration"
@@ -73,11 +77,72 @@ function FormulaProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: 
   );
 }
 
-function StripHeading() {
+const KIND_WORDS: Record<ProtocolKind, string> = { segments: "Ramps", formula: "Formula σ(t)", sampled: "Measured profile" };
+const KIND_LABELS: Record<ProtocolKind, string> = { segments: "ramps", formula: "a formula", sampled: "a measured profile" };
+
+/** The heading and the kind switch: one radio group, each choice one undo step that keeps the peak separation. */
+function StripHeading({ kind, readOnly }: { kind: ProtocolKind; readOnly: boolean }) {
+  const edit = useEdit();
   return (
-    <h2 id="protocol-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
-      Protocol strip
-    </h2>
+    <div className="mb-2 flex flex-wrap items-baseline gap-x-4 gap-y-1">
+      <h2 id="protocol-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+        Protocol
+      </h2>
+      <div role="radiogroup" aria-label="Kind of protocol" className="flex flex-wrap gap-x-3 text-sm" data-testid="protocol-kind">
+        {(Object.keys(KIND_WORDS) as ProtocolKind[]).map((option) => (
+          <label key={option} className="flex items-center gap-1.5">
+            <input
+              type="radio"
+              name="protocol-kind"
+              value={option}
+              checked={kind === option}
+              disabled={readOnly}
+              onChange={() => edit(`Switch to ${KIND_LABELS[option]}`, (d) => withProtocolKind(d, option))}
+            />
+            {KIND_WORDS[option]}
+          </label>
+        ))}
+      </div>
+    </div>
+  );
+}
+
+const INTERPOLATION_WORDS = { linear: "linear (kinked at every sample)", "cubic-spline": "cubic spline (zero end velocity)" } as const;
+
+/** A measured profile: its duration (stretching the samples in time) and interpolation; its peak is d, under Parameters. */
+function MeasuredProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: "sampled" }> }) {
+  const readOnly = useEditor((s) => s.readOnly);
+  const edit = useEdit();
+  const samples = protocol.samples;
+  const durationSeconds = samples[samples.length - 1].timeSeconds - samples[0].timeSeconds;
+  return (
+    <div className="flex flex-wrap items-start gap-3 rounded border border-rule bg-paper-deep px-3 py-2" data-testid="sampled-profile">
+      <p className="min-w-64 flex-1 text-sm text-ink-soft">
+        {samples.length.toLocaleString("en")} samples. The full separation d under Parameters is this profile&apos;s peak: a new d rescales the
+        samples; a new duration stretches them in time.
+      </p>
+      <DurationField
+        seconds={durationSeconds}
+        testId="sampled-duration"
+        onCommit={(seconds) => edit("Set profile duration", (d) => withSampledDuration(d, seconds))}
+      />
+      <label className="block text-xs font-semibold text-ink-soft">
+        Interpolation
+        <select
+          className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1 text-sm font-normal text-ink disabled:cursor-not-allowed disabled:bg-paper-deep disabled:text-ink-soft"
+          value={protocol.interpolation}
+          disabled={readOnly}
+          data-testid="sampled-interpolation"
+          onChange={(e) => edit("Set profile interpolation", (d) => withInterpolation(d, e.target.value as keyof typeof INTERPOLATION_WORDS))}
+        >
+          {(Object.keys(INTERPOLATION_WORDS) as (keyof typeof INTERPOLATION_WORDS)[]).map((option) => (
+            <option key={option} value={option}>
+              {INTERPOLATION_WORDS[option]}
+            </option>
+          ))}
+        </select>
+      </label>
+    </div>
   );
 }
 
@@ -101,7 +166,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   if (protocol.kind === "formula") {
     return (
       <section aria-labelledby="protocol-heading">
-        <StripHeading />
+        <StripHeading kind="formula" readOnly={readOnly} />
         <FormulaProfile protocol={protocol} />
       </section>
     );
@@ -109,11 +174,8 @@ const ProtocolStripView = memo(function ProtocolStripView({
   if (protocol.kind === "sampled") {
     return (
       <section aria-labelledby="protocol-heading">
-        <StripHeading />
-        <p className="rounded border border-rule p-3 text-sm text-ink-soft" data-testid="sampled-profile">
-          A sampled profile of {protocol.samples.length.toLocaleString("en")} samples ({protocol.interpolation === "linear" ? "linear" : "cubic-spline"}{" "}
-          interpolation), shown in the Offsets panel; its samples are not edited here.
-        </p>
+        <StripHeading kind="sampled" readOnly={readOnly} />
+        <MeasuredProfile protocol={protocol} />
       </section>
     );
   }
@@ -127,7 +189,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   };
   return (
     <section aria-labelledby="protocol-heading">
-      <StripHeading />
+      <StripHeading kind="segments" readOnly={readOnly} />
       <div className="flex flex-col gap-1 sm:flex-row">
         {segments.map((segment, i) => {
           const part = protocol[segment];

@@ -9,7 +9,7 @@
 import { useState, type KeyboardEvent } from "react";
 import { FieldFrame } from "@/components/ui/Field";
 import { fieldStyles } from "@/components/ui/styles";
-import { parseQuantity, type QuantityDimension } from "@/physics/units";
+import { formatInUnit, parseQuantity, type LengthScales, type NamedUnit, type QuantityDimension } from "@/physics/units";
 
 export type CommitResult = { ok: true } | { ok: false; message: string };
 export type ParseResult<T> = { ok: true; value: T } | { ok: false; message: string };
@@ -83,12 +83,37 @@ interface QuantityFieldProps extends Omit<DraftFieldProps<number>, "parse" | "co
   dimension: QuantityDimension;
   /** Unit assumed for a bare number, when there is an obvious one. */
   defaultUnit?: string;
+  /** The background's own lengths (r_s and GM/c², or c/H), accepted as units of a length. */
+  lengthScales?: LengthScales;
+  /** The value in SI. With it, a value typed in a named unit (e, M☉, r_s, GM/c², c/H) is shown back in that unit. */
+  valueSI?: number;
+  /** The named unit to show the value in until something else is typed. */
+  initialUnit?: NamedUnit;
 }
 
-export function QuantityField({ dimension, defaultUnit, ...field }: QuantityFieldProps) {
-  const parse = (text: string): ParseResult<number> => {
-    const parsed = parseQuantity(text, dimension, defaultUnit ? { defaultUnit } : {});
-    return parsed.ok ? { ok: true, value: parsed.valueSI } : parsed;
+/**
+ * A quantity with its unit. The value is echoed in the unit last typed when that is one of our named units ("100 e"
+ * stays "100 e", "3 rs" reads back "3 r_s"); a value typed in SI units is shown with SI prefixes.
+ */
+export function QuantityField({ dimension, defaultUnit, lengthScales, valueSI, initialUnit, shown, onCommit, ...field }: QuantityFieldProps) {
+  // undefined: nothing typed yet (initialUnit applies); null: last typed in SI units.
+  const [typedUnit, setTypedUnit] = useState<NamedUnit | null | undefined>(undefined);
+  const echoUnit = typedUnit === undefined ? initialUnit : typedUnit;
+  const echoed = valueSI !== undefined && echoUnit ? formatInUnit(valueSI, echoUnit, lengthScales) : null;
+  const parse = (text: string): ParseResult<{ valueSI: number; unit: NamedUnit | null }> => {
+    const parsed = parseQuantity(text, dimension, { ...(defaultUnit ? { defaultUnit } : {}), lengthScales });
+    return parsed.ok ? { ok: true, value: { valueSI: parsed.valueSI, unit: parsed.unit ?? null } } : parsed;
   };
-  return <DraftField {...field} parse={parse} />;
+  return (
+    <DraftField
+      {...field}
+      shown={echoed ?? shown}
+      parse={parse}
+      onCommit={(typed) => {
+        const result = onCommit(typed.valueSI);
+        if (result.ok) setTypedUnit(typed.unit);
+        return result;
+      }}
+    />
+  );
 }

@@ -2,7 +2,7 @@
 
 /**
  * The scenario editor, Branchline's main screen: loads the scenario and the caller's rights in the project, then
- * mounts one editor store (read-only for a viewer) with the Diagram, Offsets, Protocol strip, Parameters, Budget
+ * mounts one editor store (read-only for a viewer) with the Diagram, Offsets, Protocol, Parameters, Budget
  * and Sweep around it.
  */
 import Link from "next/link";

@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * The panels around the canvases (Budget, Protocol strip, handle fields, Sweep) follow a drag in the Offsets panel at a
+ * The panels around the canvases (Budget, Protocol, handle fields, Sweep) follow a drag in the Offsets panel at a
  * reading pace rather than on every frame: while a handle is dragged they show what the editor holds at most every
  * DRAG_PACE_MS (canvas/editor.ts), all of them at the same instant (one render, one layout, one paint), and at once otherwise (a typed
  * value, a key press, the end of the drag). Redrawing those tables and fields costs the page about as much per frame

@@ -132,7 +132,7 @@ function ExportPanel({ id: panelId, title, description }: { id: string; title: s
           <Tick label="Caption" checked={caption} onChange={setCaption} />
         </div>
         <Choice<(typeof RATIOS)[number]> legend="PNG size" options={RATIOS} value={ratio} onChange={setRatio} words={(r) => `${r}×`} />
-        <Choice<FigureGround> legend="Ground" options={["solid", "transparent"] as const} value={ground} onChange={setGround} words={(g) => (g === "solid" ? (theme === "light" ? "white" : "dark") : "transparent")} />
+        <Choice<FigureGround> legend="Fill" options={["solid", "transparent"] as const} value={ground} onChange={setGround} words={(g) => (g === "solid" ? (theme === "light" ? "white" : "dark") : "transparent")} />
         <Choice<Lettering> legend="SVG labels" options={["embedded", "outlines"] as const} value={lettering} onChange={setLettering} words={(l) => (l === "embedded" ? "text, fonts embedded" : "outlines")} />
         <p className="text-xs font-semibold text-ink-soft">Diagram</p>
         {figureButtons("diagram", scene.ok, "Diagram")}

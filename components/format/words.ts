@@ -1,5 +1,5 @@
 /** Our words for the values stored in a scenario document. */
-import type { BackgroundKind, LabPlacement, RampShape } from "@/physics/scenario/schema";
+import type { BackgroundKind, LabPlacement, RampShape, ScenarioDocument } from "@/physics/scenario/schema";
 
 export const backgroundNames: Record<BackgroundKind, string> = {
   minkowski: "Minkowski",
@@ -15,16 +15,28 @@ export function backgroundName(kind: string): string {
 }
 
 export const placementNames: Record<LabPlacement["placement"], string> = {
-  inertial: "inertial (no placement needed)",
+  inertial: "inertial, at rest",
+  "uniformly-accelerated": "uniformly accelerated, c²/a from the horizon",
   "areal-radius": "static at an areal radius",
-  "proper-distance-above-horizon": "static at a proper distance above the horizon",
+  "proper-distance-from-horizon": "static at a proper distance from the horizon",
 };
 
 export const rampShapeNames: Record<RampShape, string> = {
-  smoothstep: "smoothstep",
+  cubic: "cubic (3u² − 2u³)",
   cosine: "cosine",
   "minimum-jerk": "minimum jerk",
   linear: "linear",
+};
+
+export const splitNames: Record<ScenarioDocument["separation"]["split"], string> = {
+  symmetric: "symmetric (±d/2)",
+  "one-branch-stays": "branch B stays",
+};
+
+export const protocolKindNames: Record<ScenarioDocument["protocol"]["kind"], string> = {
+  segments: "ramps",
+  formula: "formula σ(t)",
+  sampled: "measured profile",
 };
 
 export const roleNames = { owner: "Owner", editor: "Editor", viewer: "Viewer" } as const;

@@ -18,9 +18,9 @@ function Scenario({ entry }: { entry: AuditEntryDto }) {
   return entry.scenario ? <Who>{entry.scenario.title}</Who> : <>a deleted scenario</>;
 }
 
-/** One entry in words; a deleted account is "a former account", its address kept for the entry's target. */
+/** One entry in words; a deleted account is "a former member", its address kept for the entry's target. */
 function describe(entry: AuditEntryDto): ReactNode {
-  const actor = <Who>{entry.actor?.name ?? "a former account"}</Who>;
+  const actor = <Who>{entry.actor?.name ?? "a former member"}</Who>;
   const target = <Who>{entry.target?.name ?? entry.target?.email ?? "someone"}</Who>;
   const subject = <Who>“{entry.subject ?? "untitled"}”</Who>;
   switch (entry.action) {

@@ -64,8 +64,8 @@ export function MemberTable({ projectName, members, currentUserId, manages, pend
               </td>
               <td className={`${tableStyles.cell} whitespace-nowrap text-right`}>
                 {manages && !isSelf && (
-                  <button type="button" onClick={() => onTransfer(member)} className={buttonStyles.row} aria-label={`Hand ownership to ${member.name}`}>
-                    Hand ownership
+                  <button type="button" onClick={() => onTransfer(member)} className={buttonStyles.row} aria-label={`Make ${member.name} owner`}>
+                    Make owner
                   </button>
                 )}
                 {(isSelf || manages) && (

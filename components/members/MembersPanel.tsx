@@ -109,8 +109,8 @@ export function MembersPanel({ projectId, currentUserId }: { projectId: string; 
 
       <ConfirmDialog
         open={handingTo !== null}
-        title={`Hand ownership of “${project.name}” to ${handingTo?.name ?? ""}?`}
-        confirmLabel="Hand ownership"
+        title={`Make ${handingTo?.name ?? ""} owner of “${project.name}”?`}
+        confirmLabel="Make owner"
         pending={transfer.isPending}
         error={transfer.isError ? sentence(messageOf(transfer.error)) : null}
         onCancel={() => {

@@ -21,7 +21,7 @@ const newScenarioSchema = z.object({
 /** What the chosen background starts with, read from the document itself. */
 function startingHint(kind: BackgroundKind): string {
   const document = newScenarioDocument(kind);
-  return `Starts with: ${backgroundSummary(document.background)}; ${labSummary(document.lab)}.`;
+  return `Starts with: ${backgroundSummary(document.background)}; ${labSummary(document.lab, document.background.kind)}.`;
 }
 
 /** Creates a scenario from the chosen background's starting values and opens it in the editor. */

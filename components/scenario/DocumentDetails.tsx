@@ -79,6 +79,7 @@ function LabRows({ lab }: { lab: ScenarioDocument["lab"] }) {
   const placement = <Row label="Placement" value={placementNames[lab.placement]} mono={false} />;
   switch (lab.placement) {
     case "inertial":
+    case "uniformly-accelerated":
       return placement;
     case "areal-radius":
       return (
@@ -87,11 +88,11 @@ function LabRows({ lab }: { lab: ScenarioDocument["lab"] }) {
           <Row label="Areal radius r" value={formatLength(lab.arealRadiusMetres)} exactValue={exact(lab.arealRadiusMetres, "m")} />
         </>
       );
-    case "proper-distance-above-horizon":
+    case "proper-distance-from-horizon":
       return (
         <>
           {placement}
-          <Row label="Proper distance above the horizon" value={formatLength(lab.properDistanceMetres)} exactValue={exact(lab.properDistanceMetres, "m")} />
+          <Row label="Proper distance from the horizon" value={formatLength(lab.properDistanceMetres)} exactValue={exact(lab.properDistanceMetres, "m")} />
         </>
       );
   }
@@ -123,7 +124,7 @@ function ProtocolRows({ protocol }: { protocol: ProtocolSpec }) {
     case "formula":
       return (
         <>
-          <Row label="Profile s(t)" value={<code className="break-all">{protocol.expression}</code>} />
+          <Row label="Profile σ(t)" value={<code className="break-all">{protocol.expression}</code>} />
           <Row label="Duration" value={formatDuration(protocol.durationSeconds)} exactValue={exact(protocol.durationSeconds, "s")} />
         </>
       );
@@ -142,7 +143,7 @@ function ProtocolRows({ protocol }: { protocol: ProtocolSpec }) {
         <>
           <Row label="Samples" value={protocol.samples.length.toLocaleString("en")} />
           <Row label="Time span" value={formatDuration(span)} exactValue={exact(span, "s")} />
-          <Row label="Widest separation" value={formatLength(widest)} exactValue={exact(widest, "m")} />
+          <Row label="Peak separation" value={formatLength(widest)} exactValue={exact(widest, "m")} />
           <Row label="Interpolation" value={protocol.interpolation === "cubic-spline" ? "cubic spline" : "linear"} mono={false} />
         </>
       );

@@ -14,7 +14,7 @@ const starting: Record<BackgroundKind, Pick<ScenarioDocument, "background" | "la
     lab: { placement: "areal-radius", arealRadiusMetres: 1.0e5 },
   },
   // The Rindler lab needs no placement: its acceleration puts it at c²/a from the horizon.
-  rindler: { background: { kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, lab: { placement: "inertial" } },
+  rindler: { background: { kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, lab: { placement: "uniformly-accelerated" } },
   "de-sitter": {
     background: { kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 },
     lab: { placement: "areal-radius", arealRadiusMetres: 1.0e25 },

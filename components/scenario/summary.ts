@@ -15,13 +15,15 @@ export function backgroundSummary(background: ScenarioDocument["background"]): s
   }
 }
 
-export function labSummary(lab: ScenarioDocument["lab"]): string {
+export function labSummary(lab: ScenarioDocument["lab"], backgroundKind?: ScenarioDocument["background"]["kind"]): string {
   switch (lab.placement) {
     case "inertial":
       return "inertial lab";
+    case "uniformly-accelerated":
+      return "uniformly accelerated lab";
     case "areal-radius":
       return `lab static at areal radius r = ${formatLength(lab.arealRadiusMetres)}`;
-    case "proper-distance-above-horizon":
-      return `lab static ${formatLength(lab.properDistanceMetres)} (proper distance) above the horizon`;
+    case "proper-distance-from-horizon":
+      return `lab static ${formatLength(lab.properDistanceMetres)} (proper distance) ${backgroundKind === "de-sitter" ? "inward from" : "above"} the horizon`;
   }
 }

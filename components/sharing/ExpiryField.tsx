@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * What a row holding a secret shares (a share link, an API token): the "Works for" choice of days (null: until
+ * What a row holding a secret shares (a share link, an API token): the "Expires after" choice of days (null: until
  * revoked) and the words for its status, so both read the same.
  */
 import type { UseFormRegisterReturn } from "react-hook-form";
@@ -17,7 +17,7 @@ export const daysOrNull = (value: string | number | null) => (value === "" || va
 
 export function ExpiryField({ choices, registration, error, className }: { choices: ExpiryChoice[]; registration: UseFormRegisterReturn; error?: string; className: string }) {
   return (
-    <SelectField label="Works for" className={className} error={error} {...registration}>
+    <SelectField label="Expires after" className={className} error={error} {...registration}>
       {choices.map((choice) => (
         <option key={choice.label} value={choice.days ?? ""}>
           {choice.label}

@@ -1,7 +1,7 @@
 "use client";
 
 /**
- * The figures of a shared scenario: the editor's Diagram, Offsets, Protocol strip and Budget, mounted on a
+ * The figures of a shared scenario: the editor's Diagram, Offsets, Protocol and Budget, mounted on a
  * read-only editor store that never saves (nothing here can write), with the Budget the server computed; and
  * Export, so that the link holder can take the figure, the numbers and the scenario file away.
  */

@@ -22,7 +22,7 @@ function IssueList({ issues }: { issues: { path: string; message: string }[] }) 
 
 /**
  * A scenario as a share link shows it: read-only, with nothing of its project but the scenario itself (no project
- * name, no members, no other scenarios): the Diagram, Offsets, Protocol strip and Budget, then every parameter.
+ * name, no members, no other scenarios): the Diagram, Offsets, Protocol and Budget, then every parameter.
  */
 export function SharedScenarioView({ scenario, result, resultIssues }: { scenario: SharedScenarioDto; result: ScenarioResult | null; resultIssues: ComputeIssue[] | null }) {
   return (

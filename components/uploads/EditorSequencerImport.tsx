@@ -16,9 +16,9 @@ export function EditorSequencerImport({ projectId, scenarioId, disabled }: { pro
       projectId={projectId}
       scenarioId={scenarioId}
       disabled={disabled}
-      triggerLabel="Profile from a sequencer file…"
+      triggerLabel="Import a measured profile…"
       onUse={({ protocol }) => {
-        const result = edit("Use a sequencer profile", (document) => withSampledProtocol(document, protocol));
+        const result = edit("Import a measured profile", (document) => withSampledProtocol(document, protocol));
         if (!result.ok) throw new Error(result.message);
       }}
     />

@@ -41,7 +41,7 @@ type Preview = { state: "idle" } | { state: "reading" } | { state: "ready"; prof
  * its header names none, look at the first rows and a sketch of the whole profile, then use it. The file is read
  * on the server without storing anything (a preview); what happens on "Use this profile" is the caller's.
  */
-export function SequencerProfileImport({ projectId, scenarioId, onUse, triggerLabel = "Read a sequencer file…", disabled }: SequencerProfileImportProps) {
+export function SequencerProfileImport({ projectId, scenarioId, onUse, triggerLabel = "Import a measured profile…", disabled }: SequencerProfileImportProps) {
   const dialog = useRef<HTMLDialogElement>(null);
   const [open, setOpen] = useState(false);
   const [file, setFile] = useState<File | null>(null);
@@ -135,7 +135,7 @@ export function SequencerProfileImport({ projectId, scenarioId, onUse, triggerLa
         <div className="space-y-5 p-6">
           <div>
             <h2 id={ids.title} className="font-serif text-xl font-semibold">
-              Separation profile from a sequencer file
+              Measured profile from a sequencer CSV
             </h2>
             <p className="mt-1 text-sm text-ink-soft">
               A CSV with a time column and a separation column, units in the header (“t [ms]”, “separation [um]”) or chosen below; up to{" "}
@@ -146,7 +146,7 @@ export function SequencerProfileImport({ projectId, scenarioId, onUse, triggerLa
           <div className="grid gap-4 sm:grid-cols-2">
             <div className="sm:col-span-2">
               <label htmlFor={ids.file} className={fieldStyles.label}>
-                Sequencer file
+                Sequencer CSV
               </label>
               <input
                 id={ids.file}
@@ -211,7 +211,7 @@ function ProfilePreview({ profile, protocol }: { profile: SequencerProfileSummar
           <dd className="tabular font-mono">{formatDuration(profile.durationSeconds)}</dd>
         </div>
         <div>
-          <dt className="text-ink-faint">Largest separation</dt>
+          <dt className="text-ink-faint">Peak separation</dt>
           <dd className="tabular font-mono">{formatLength(profile.maxSeparationMetres)}</dd>
         </div>
         <div>

@@ -1,4 +1,5 @@
 import type { BackgroundFlag } from "./types";
+import { formatNumber } from "../units";
 
 /** Below this 1 − (horizon term), a static lab's radius keeps fewer than about four significant digits beyond the horizon radius. */
 export const NEAR_HORIZON_LAPSE_SQUARED_LIMIT = 1e-12;
@@ -11,7 +12,7 @@ export function nearHorizonPrecisionFlag(lapse: number, lapseSquaredFormula: str
     code: "lab-too-close-to-horizon-for-double",
     severity: "caution",
     message:
-      `the lab is so close to the horizon (${lapseSquaredFormula} = ${lapseSquared.toExponential(2)}) that its radius ` +
+      `the lab is so close to the horizon (${lapseSquaredFormula} = ${formatNumber(lapseSquared)}) that its radius ` +
       "is barely distinguishable from the horizon radius in double precision; results derived from r lose digits",
   };
 }

@@ -48,11 +48,12 @@ function placementMismatch(background: BackgroundSpec, lab: LabPlacement, allowe
  * The Background of a scenario: its lab's acceleration, redshift, horizon, temperatures, tortoise coordinate,
  * conformal map and cautions (see each make* for formulas and sources).
  *
- * Placements: Minkowski and Rindler take "inertial" (the Minkowski lab at rest at r = 0; the Rindler lab is the
+ * Placements: Minkowski takes "inertial" (the lab at rest at r = 0); Rindler takes "uniformly-accelerated" (the
  * accelerated observer at distance c²/a from its horizon). Schwarzschild takes "areal-radius" (r > 2GM/c²) or
- * "proper-distance-above-horizon" (radial proper distance from the horizon, inverted to r by Newton's method).
- * de Sitter takes "areal-radius" (r < c/H), "proper-distance-above-horizon" read as the proper distance inward
- * from the cosmological horizon (at most πc/2H, the centre), or "inertial" for the geodesic lab at the centre.
+ * "proper-distance-from-horizon" (radial proper distance above the horizon, inverted to r by Newton's method).
+ * de Sitter takes "areal-radius" (0 ≤ r < c/H; r = 0 is the static geodesic observer at the centre) or
+ * "proper-distance-from-horizon" read as the proper distance inward from the cosmological horizon (at most πc/2H,
+ * the centre).
  *
  * Throws BackgroundInputError (with the document path) for invalid numbers, a placement the background does not
  * take, a lab on or inside a black-hole horizon, or on or beyond a cosmological horizon.
@@ -64,7 +65,7 @@ export function makeBackground(background: BackgroundSpec, lab: LabPlacement, op
       if (lab.placement !== "inertial") throw placementMismatch(background, lab, '"inertial"');
       return makeMinkowski(options.minkowskiDiagramScaleMetres ?? c);
     case "rindler":
-      if (lab.placement !== "inertial") throw placementMismatch(background, lab, '"inertial" (its distance to the horizon is c²/a)');
+      if (lab.placement !== "uniformly-accelerated") throw placementMismatch(background, lab, '"uniformly-accelerated" (its distance to the horizon is c²/a)');
       return makeRindler(background.accelerationMetresPerSecondSquared);
     case "schwarzschild": {
       const horizonRadiusMetres = schwarzschildRadiusMetres(background.massKg);
@@ -98,10 +99,11 @@ function schwarzschildPosition(background: BackgroundSpec, lab: LabPlacement, ho
         );
       }
       return schwarzschildPositionAtRadius(lab.arealRadiusMetres, horizonRadiusMetres);
-    case "proper-distance-above-horizon":
+    case "proper-distance-from-horizon":
       return schwarzschildPositionAtProperDistance(lab.properDistanceMetres, horizonRadiusMetres);
     case "inertial":
-      throw placementMismatch(background, lab, '"areal-radius" or "proper-distance-above-horizon" (no inertial lab stays static near a black hole)');
+    case "uniformly-accelerated":
+      throw placementMismatch(background, lab, '"areal-radius" or "proper-distance-from-horizon" (no inertial lab stays static near a black hole)');
   }
 }
 
@@ -109,7 +111,8 @@ function deSitterPosition(hubbleRatePerSecond: number, lab: LabPlacement): Stati
   const horizonRadiusMetres = c / hubbleRatePerSecond;
   switch (lab.placement) {
     case "inertial":
-      return deSitterPositionAtRadius(0, hubbleRatePerSecond);
+    case "uniformly-accelerated":
+      throw placementMismatch({ kind: "de-sitter", hubbleRatePerSecond }, lab, '"areal-radius" (0 for the static geodesic observer at the centre) or "proper-distance-from-horizon"');
     case "areal-radius":
       if (!(lab.arealRadiusMetres < horizonRadiusMetres)) {
         throw new BackgroundInputError(
@@ -119,7 +122,7 @@ function deSitterPosition(hubbleRatePerSecond: number, lab: LabPlacement): Stati
         );
       }
       return deSitterPositionAtRadius(lab.arealRadiusMetres, hubbleRatePerSecond);
-    case "proper-distance-above-horizon": {
+    case "proper-distance-from-horizon": {
       const centreDistanceMetres = (Math.PI / 2) * horizonRadiusMetres;
       if (lab.properDistanceMetres > centreDistanceMetres) {
         throw new BackgroundInputError(

@@ -13,6 +13,7 @@ import { environmentChannels, type EnvironmentInputs } from "./budget";
 import { environmentMargins } from "./margin";
 import { bodyMaterials } from "./materials";
 import type { BranchPaths, EnvironmentBudget } from "./types";
+import { formatNumber } from "../units";
 
 export type { EnvironmentBudget };
 
@@ -57,7 +58,7 @@ function blockFlags(document: ScenarioDocument, environment: EnvironmentSpec): V
     flags.push({
       code: "environment:body-density",
       status: solid ? "ok" : "caution",
-      message: `the source's mass and the body's radius give a density of ${density.toExponential(2)} kg/m³` + (solid ? "" : ", far from any solid: check the mass or the radius"),
+      message: `the source's mass and the body's radius give a density of ${formatNumber(density)} kg/m³` + (solid ? "" : ", far from any solid: check the mass or the radius"),
       measure: density,
     });
   }

@@ -31,6 +31,7 @@ import { gasSpecies, molecularMassKg, type GasSpecies } from "./species";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
 import { oneMinusDawsonOverX } from "./special-functions";
 import { regimeOf } from "./which-path";
+import { formatNumber, formatQuantity } from "../units";
 
 export interface GasParameters {
   pressurePascals: number;
@@ -88,8 +89,8 @@ export function gasChannel(paths: BranchPaths, p: GasParameters): EnvironmentCha
       code: "gas-regime",
       status: regime === "crossover" ? "caution" : "note",
       message:
-        `${gasSpecies[p.species].name} at full separation: ${regime} (d/Δx_c = ${(d / rates.crossoverSeparationMetres).toExponential(2)}, ` +
-        `crossover Δx_c = ${rates.crossoverSeparationMetres.toExponential(2)} m ≈ 0.345 λ_th); the joined hard-sphere form is evaluated at every instant` +
+        `${gasSpecies[p.species].name} at full separation: ${regime} (d/Δx_c = ${formatNumber(d / rates.crossoverSeparationMetres)}, ` +
+        `crossover Δx_c = ${formatQuantity(rates.crossoverSeparationMetres, "length")} ≈ 0.345 λ_th); the joined hard-sphere form is evaluated at every instant` +
         (regime === "crossover" ? ", and its shape between the limits assumes isotropic scattering" : ""),
       measure: d / rates.crossoverSeparationMetres,
     },

@@ -30,6 +30,7 @@ import type { FlagStatus, ValidityFlag } from "../result-basics";
 import { ScenarioInputError } from "../scenario/input-error";
 import { accumulate, environmentResult, zeroEnvironmentResult } from "./channel-result";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
+import { formatNumber, formatQuantity } from "../units";
 
 export type SurfaceOrientation = "parallel" | "perpendicular";
 
@@ -117,17 +118,17 @@ function surfaceFlags(paths: BranchPaths, p: SurfaceParameters, leastHeight: num
     ratioFlag(
       "surface-skin-depth",
       p.distanceMetres / skinDepth,
-      `the surface is ${(p.distanceMetres / skinDepth).toExponential(2)} skin depths away at the protocol's highest frequency ${omega.toExponential(2)} rad/s: the quasi-static image needs z ≪ δ`,
+      `the surface is ${formatNumber(p.distanceMetres / skinDepth)} skin depths away at the protocol's highest frequency ${formatNumber(omega)} rad/s: the quasi-static image needs z ≪ δ`,
     ),
     ratioFlag(
       "surface-relaxation",
       omega * tau,
-      `ωτ = ${(omega * tau).toExponential(2)} (τ = ${tau.toExponential(2)} s${p.relaxationTimeSeconds === null ? ", Drude time assumed 1e-12 s" : ""}): the Ohmic response needs frequencies below the relaxation rate`,
+      `ωτ = ${formatNumber(omega * tau)} (τ = ${formatQuantity(tau, "time")}${p.relaxationTimeSeconds === null ? ", Drude time assumed 1 ps" : ""}): the Ohmic response needs frequencies below the relaxation rate`,
     ),
     ratioFlag(
       "surface-body-size",
       p.bodyRadiusMetres / leastHeight,
-      `the body's radius is ${(p.bodyRadiusMetres / leastHeight).toExponential(2)} of its least height above the surface: the image of a point charge needs ≪ 1 (the separation itself is treated exactly)`,
+      `the body's radius is ${formatNumber(p.bodyRadiusMetres / leastHeight)} of its least height above the surface: the image of a point charge needs ≪ 1 (the separation itself is treated exactly)`,
     ),
     speed === 0
       ? { code: "surface-moving-charge", status: "ok", message: "the branches do not move" }
@@ -135,7 +136,7 @@ function surfaceFlags(paths: BranchPaths, p: SurfaceParameters, leastHeight: num
           code: "surface-moving-charge",
           status: speed / c > 1e-3 ? "caution" : "note",
           message:
-            `branches move at up to ${speed.toExponential(2)} m/s: the static image leaves out retardation and the eddy currents' magnetic field, ` +
+            `branches move at up to ${formatNumber(speed)} m/s: the static image leaves out retardation and the eddy currents' magnetic field, ` +
             "which the quasi-static model missed for keV electrons past doped silicon (Kerker et al. 2020)",
           measure: speed / c,
         },
@@ -147,7 +148,7 @@ export function surfaceChannel(paths: BranchPaths, p: SurfaceParameters, documen
   const reach = paths.split === "symmetric" ? 0.5 * d : d;
   const leastHeight = p.orientation === "perpendicular" && paths.split === "symmetric" ? p.distanceMetres - reach : p.distanceMetres;
   if (leastHeight <= p.bodyRadiusMetres) {
-    throw new ScenarioInputError(`${documentPath}.distanceMetres`, `a branch comes within ${leastHeight.toExponential(3)} m of the surface, not more than the body's radius: the body would touch it`);
+    throw new ScenarioInputError(`${documentPath}.distanceMetres`, `a branch comes within ${formatQuantity(leastHeight, "length")} of the surface, not more than the body's radius: the body would touch it`);
   }
   if (p.chargeCoulombs === 0) return zeroEnvironmentResult("surface", "environment-surface", "the body carries no charge (its induced dipoles are not counted)");
   if (p.temperatureKelvin === 0) return zeroEnvironmentResult("surface", "environment-surface", "the surface is at 0 K");

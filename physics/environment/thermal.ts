@@ -28,6 +28,7 @@ import { clausiusMossotti, type Permittivity } from "./materials";
 import type { BranchPaths, EnvironmentChannelResult } from "./types";
 import { boseSum, riemannZeta } from "./special-functions";
 import { regimeOf } from "./which-path";
+import { formatNumber } from "../units";
 
 export interface ThermalParameters {
   bodyRadiusMetres: number;
@@ -130,7 +131,7 @@ function sizeFlag(p: ThermalParameters): ValidityFlag {
     code: "thermal-size",
     status,
     message:
-      `body radius is ${measure.toExponential(2)} of ħc/k_BT at ${hottest} K: the Rayleigh (dipole) rates need ≪ 1` +
+      `body radius is ${formatNumber(measure)} of ħc/k_BT at ${hottest} K: the Rayleigh (dipole) rates need ≪ 1` +
       (status === "invalid" ? "; a body this large scatters geometrically and these rates overestimate it by orders of magnitude" : ""),
     measure,
   };
@@ -174,7 +175,7 @@ export function thermalChannel(paths: BranchPaths, p: ThermalParameters, channel
   const regimeFlag: ValidityFlag = {
     code: `${channel}-regime`,
     status: regime === "crossover" ? "caution" : "note",
-    message: `${channel.replace("thermal-", "")} at ${temperature} K, full separation: ${regime} (Λd²/γ = ${((lambda * d * d) / gamma).toExponential(2)})`,
+    message: `${channel.replace("thermal-", "")} at ${temperature} K, full separation: ${regime} (Λd²/γ = ${formatNumber(((lambda * d * d) / gamma))})`,
     measure: (lambda * d * d) / gamma,
   };
   return environmentResult(channel, key, accumulate(paths, (a, b) => F(a - b)), regime, [regimeFlag, ...flags]);

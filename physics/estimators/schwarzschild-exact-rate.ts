@@ -45,6 +45,7 @@ import {
   type SchwarzschildHorizonRateModel,
   type SchwarzschildRateLab,
 } from "./schwarzschild-horizon-rate";
+import { formatNumber } from "../units";
 
 const severityStatus: Record<SchwarzschildRateFlag["severity"], FlagStatus> = { info: "note", caution: "caution" };
 
@@ -61,7 +62,7 @@ function multipoleFlag(status: "converged" | "not-converged" | "skipped", lMax: 
     return {
       code: "schwarzschild-multipole-check",
       status: "ok",
-      message: `the Legendre multipole sum (ℓ ≤ ${lMax}) agrees with the closed-form horizon memory to ${relativeTolerance!.toExponential(1)}`,
+      message: `the Legendre multipole sum (ℓ ≤ ${lMax}) agrees with the closed-form horizon memory to ${formatNumber(relativeTolerance!, 2)}`,
       measure: relativeTolerance!,
     };
   }
@@ -121,7 +122,7 @@ function exactElectromagneticRate(input: SchwarzschildHorizonRateInput, estimate
 
 /** Size GM/(c²b) of the corrections the leading-order gravitational rate leaves out, judged as in physics/flags.ts. */
 function gravityModelFlag(correction: number): ValidityFlag {
-  const size = `relative corrections of order GM/(c²b) = ${correction.toPrecision(2)} (b = ${(1 / correction).toPrecision(3)} GM/c²) are not computed`;
+  const size = `relative corrections of order GM/(c²b) = ${formatNumber(correction, 2)} (b = ${formatNumber(1 / correction)} GM/c²) are not computed`;
   const base = "gravitational hold rate: the far-zone tidal-heating rate, leading order in GM/(c²b), the same formula at every radius";
   if (correction <= GRAVITY_FAR_ZONE_CORRECTION_CAUTION) {
     return { code: "schwarzschild-gravity-model", status: "note", message: `${base}; ${size}`, measure: correction };

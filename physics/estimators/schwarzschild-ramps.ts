@@ -28,6 +28,7 @@ import type { ValidityFlag } from "../result-basics";
 import type { ChannelDefinition } from "../spectra/channels";
 import { c } from "../constants";
 import { rampQuantaPerSquaredSource, type RampIntegral } from "./ramp-quanta";
+import { formatNumber } from "../units";
 
 export interface SchwarzschildRampLab {
   /** √(1 − 2GM/(c²b)) at the lab. */
@@ -89,14 +90,14 @@ function rampModelFlag(definition: ChannelDefinition, w: number, log10Slow: numb
         ? "slow ramps: the count to null infinity ℐ⁺ matched to the static Copson–Linet dipole, β²·f·N_flat" +
           (definition.channel === "gravitational" ? " (gravity: the Killing-time stretch f² only, corrections O(GM/(c²b)) not computed)" : "")
         : "the Rindler count at the lab's acceleration (near the horizon, or fast ramps: most quanta near the horizon go into it)";
-    return { code, status: "note", message: `ramp-driven ${who}: ${limit}; weight of the slow-ramp limit ${w.toPrecision(3)}`, measure: away };
+    return { code, status: "note", message: `ramp-driven ${who}: ${limit}; weight of the slow-ramp limit ${formatNumber(w)}`, measure: away };
   }
   return {
     code,
     status: "caution",
     message:
       `ramp-driven ${who}: between the near-horizon (Rindler) and the slow-ramp (ℐ⁺, matched) limits, interpolated in the logarithm ` +
-      `with weight ${w.toPrecision(3)} on the slow-ramp limit; the two limits differ by a factor ${factor.toPrecision(3)} here, ` +
+      `with weight ${formatNumber(w)} on the slow-ramp limit; the two limits differ by a factor ${formatNumber(factor)} here, ` +
       "the size of the uncertainty of this count",
     measure: away,
   };

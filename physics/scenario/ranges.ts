@@ -36,8 +36,8 @@ export const PARAMETER_RANGES = {
   blackHoleMass: range("background.massKg", "black-hole mass", 1e-8, 1e60, "kg"),
   acceleration: range("background.accelerationMetresPerSecondSquared", "lab acceleration", 1e-30, 1e50, "m s^-2"),
   hubbleRate: range("background.hubbleRatePerSecond", "Hubble rate", 1e-40, 1e40, "s^-1"),
-  arealRadius: range("lab.arealRadiusMetres", "lab areal radius", 1e-30, 1e30, "m"),
-  properDistance: range("lab.properDistanceMetres", "lab proper distance above the horizon", 1e-30, 1e30, "m"),
+  arealRadius: range("lab.arealRadiusMetres", "lab areal radius", 1e-30, 1e30, "m", { zeroAllowed: true }),
+  properDistance: range("lab.properDistanceMetres", "lab proper distance from the horizon", 1e-30, 1e30, "m"),
   charge: range("source.chargeCoulombs", "charge", 1e-40, 1e20, "C", { zeroAllowed: true, magnitude: true }),
   sourceMass: range("source.massKg", "source mass", 1e-40, 1e60, "kg", { zeroAllowed: true }),
   labMass: range("source.labMassKg", "lab mass", 1e-40, 1e60, "kg", { zeroAllowed: true }),
@@ -97,7 +97,7 @@ export function rangeIssues(document: ScenarioDocument): RangeIssue[] {
   if (background.kind === "rindler") check(issues, R.acceleration, background.accelerationMetresPerSecondSquared);
   if (background.kind === "de-sitter") check(issues, R.hubbleRate, background.hubbleRatePerSecond);
   if (lab.placement === "areal-radius") check(issues, R.arealRadius, lab.arealRadiusMetres);
-  if (lab.placement === "proper-distance-above-horizon") check(issues, R.properDistance, lab.properDistanceMetres);
+  if (lab.placement === "proper-distance-from-horizon") check(issues, R.properDistance, lab.properDistanceMetres);
   check(issues, R.charge, source.chargeCoulombs);
   check(issues, R.sourceMass, source.massKg);
   check(issues, R.labMass, source.labMassKg);

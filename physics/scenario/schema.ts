@@ -1,6 +1,8 @@
 /**
- * The scenario document: what a user draws and sets, in SI numbers. Version 2 (version 1 plus the optional
- * `environment` block of environment-schema.ts; a version-1 document upgrades to an isolated body).
+ * The scenario document: what a user draws and sets, in SI numbers. Version 3: version 2 (version 1 plus the
+ * optional `environment` block of environment-schema.ts; a version-1 document upgrades to an isolated body) with
+ * names that say what things are (upgrade-v3.ts: ramp shape "cubic", placements "uniformly-accelerated" and
+ * "proper-distance-from-horizon", a de Sitter lab at the centre as areal radius 0).
  *
  * Every reader goes through parseScenarioDocument, which accepts any known version and upgrades it to the
  * current one; an unknown or malformed document is answered with the list of what is wrong, never a crash.
@@ -9,13 +11,15 @@ import { z } from "zod";
 import { e } from "../constants";
 import { environmentSchema, upgradeVersion1To2 } from "./environment-schema";
 import { keptText } from "./text";
+import { upgradeVersion2To3 } from "./upgrade-v3";
 
-export const CURRENT_SCHEMA_VERSION = 2 as const;
+export const CURRENT_SCHEMA_VERSION = 3 as const;
 
 const positive = (what: string) => z.number({ error: `${what} must be a number` }).finite().positive(`${what} must be positive`);
 const nonNegative = (what: string) => z.number({ error: `${what} must be a number` }).finite().nonnegative(`${what} must not be negative`);
 
-export const rampShapeSchema = z.enum(["smoothstep", "cosine", "minimum-jerk", "linear"]);
+/** σ(u) of a ramp: "cubic" 3u² − 2u³, "cosine" (1 − cos πu)/2, "minimum-jerk" 10u³ − 15u⁴ + 6u⁵, "linear" u. */
+export const rampShapeSchema = z.enum(["cubic", "cosine", "minimum-jerk", "linear"]);
 export type RampShape = z.infer<typeof rampShapeSchema>;
 
 export const backgroundSchema = z.discriminatedUnion("kind", [
@@ -27,11 +31,17 @@ export const backgroundSchema = z.discriminatedUnion("kind", [
 export type BackgroundSpec = z.infer<typeof backgroundSchema>;
 export type BackgroundKind = BackgroundSpec["kind"];
 
-/** Where the lab sits. Minkowski and Rindler labs need no placement (the Rindler lab is set by its acceleration). */
+/**
+ * Where the lab sits. Minkowski: "inertial" (at rest). Rindler: "uniformly-accelerated" (set by the background's
+ * acceleration, c²/a from the horizon). Schwarzschild and de Sitter: "areal-radius" (de Sitter takes 0, the static
+ * geodesic observer at the centre) or "proper-distance-from-horizon" (above a black hole's horizon, inward from a
+ * de Sitter one).
+ */
 export const labPlacementSchema = z.discriminatedUnion("placement", [
   z.object({ placement: z.literal("inertial") }),
-  z.object({ placement: z.literal("areal-radius"), arealRadiusMetres: positive("lab areal radius") }),
-  z.object({ placement: z.literal("proper-distance-above-horizon"), properDistanceMetres: positive("lab proper distance above the horizon") }),
+  z.object({ placement: z.literal("uniformly-accelerated") }),
+  z.object({ placement: z.literal("areal-radius"), arealRadiusMetres: nonNegative("lab areal radius") }),
+  z.object({ placement: z.literal("proper-distance-from-horizon"), properDistanceMetres: positive("lab proper distance from the horizon") }),
 ]);
 export type LabPlacement = z.infer<typeof labPlacementSchema>;
 
@@ -64,7 +74,10 @@ export const segmentsProtocolSchema = z.object({
   recombination: z.object({ durationSeconds: positive("recombination duration"), shape: rampShapeSchema }),
 });
 
-/** A separation profile s(t) ∈ [0, 1] × d, as a mathjs expression in t (seconds), over [0, durationSeconds]. */
+/**
+ * A separation profile σ(t) ∈ [0, 1] (the separation is d·σ(t)), as a profile formula in t (seconds) over
+ * [0, durationSeconds]; the grammar is physics/protocols/formula.ts's (docs/formats.md lists it).
+ */
 export const formulaProtocolSchema = z.object({
   kind: z.literal("formula"),
   expression: keptText("formula must be text").min(1, "formula must not be empty").max(2000, "formula is too long"),
@@ -98,8 +111,8 @@ export const numericsSchema = z
   .default({ kinkTimeResolutionSeconds: null });
 export type NumericsSpec = z.infer<typeof numericsSchema>;
 
-export const scenarioDocumentV1Schema = z.object({
-  schemaVersion: z.literal(1),
+export const scenarioDocumentSchema = z.object({
+  schemaVersion: z.literal(3),
   background: backgroundSchema,
   lab: labPlacementSchema,
   source: sourceSchema,
@@ -107,17 +120,9 @@ export const scenarioDocumentV1Schema = z.object({
   protocol: protocolSchema,
   display: displaySchema,
   numerics: numericsSchema,
-});
-
-// --- Version 2: the lab's environment (physics/scenario/environment-schema.ts) ---
-export const scenarioDocumentV2Schema = scenarioDocumentV1Schema.extend({
-  schemaVersion: z.literal(2),
   /** The lab's gas, thermal radiation and a nearby surface; null: an isolated body (what version 1 computed). */
   environment: environmentSchema.nullable().default(null),
 });
-// --- end of version 2 ---
-
-export const scenarioDocumentSchema = scenarioDocumentV2Schema;
 export type ScenarioDocument = z.infer<typeof scenarioDocumentSchema>;
 export type ScenarioDocumentInput = z.input<typeof scenarioDocumentSchema>;
 
@@ -130,7 +135,7 @@ export interface SchemaIssue {
 export type ParseResult = { ok: true; document: ScenarioDocument } | { ok: false; issues: SchemaIssue[] };
 
 /** Upgraders from version n to n + 1, applied in order. */
-const upgraders: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = { 1: upgradeVersion1To2 };
+const upgraders: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = { 1: upgradeVersion1To2, 2: upgradeVersion2To3 };
 
 export function parseScenarioDocument(input: unknown): ParseResult {
   if (typeof input !== "object" || input === null || Array.isArray(input)) {
@@ -156,7 +161,7 @@ export function parseScenarioDocument(input: unknown): ParseResult {
 /** A sensible new scenario: a charged microparticle split by 1 µm in flat spacetime. */
 export function defaultScenarioDocument(): ScenarioDocument {
   return {
-    schemaVersion: 2,
+    schemaVersion: 3,
     background: { kind: "minkowski" },
     lab: { placement: "inertial" },
     source: { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null },

@@ -123,7 +123,7 @@ test("a newer version saved elsewhere is announced before any save meets it, and
   await expect(owner.getByTestId("save-state")).toHaveText(`Saved · v${scenario.version + 1}`);
 });
 
-test("the keyboard walks the Offsets panel's handles in protocol order, naming each, and a formula profile is edited in the Protocol strip", async ({ browser }) => {
+test("the keyboard walks the Offsets panel's handles in protocol order, naming each, and a formula profile is edited in the Protocol", async ({ browser }) => {
   const { owner, project, scenario: segments, scenarioIn } = await ownerWithScenario(browser, "Keyboard", "Keyboard and formulas", "Hovering lab");
 
   await owner.goto(editorPath(project.id, segments.id));

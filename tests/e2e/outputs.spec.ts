@@ -29,7 +29,7 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   const { url, link } = (await created.json()) as { url: string; link: { id: string } };
   const token = url.split("/").pop()!;
 
-  // Signed out: the share page draws the Diagram, with the Protocol strip and the Budget.
+  // Signed out: the share page draws the Diagram, with the Protocol and the Budget.
   const outsiderContext = await browser.newContext({ acceptDownloads: true });
   const outsider = await outsiderContext.newPage();
   // Nothing on the share page or the embed ever writes: no request but GET or HEAD leaves it.
@@ -50,7 +50,7 @@ test("a share link shows the Diagram signed out and exports a vector figure; its
   const diagram = outsider.getByTestId("diagram").locator("canvas").first();
   await expect(diagram).toBeVisible(slow);
   await expect.poll(() => diagram.evaluate(inkedPixels), slow).toBeGreaterThan(2000);
-  await expect(outsider.getByRole("heading", { name: "Protocol strip" })).toBeVisible();
+  await expect(outsider.getByRole("heading", { name: "Protocol", exact: true })).toBeVisible();
   await expect(outsider.getByTestId("budget")).toHaveAttribute("data-state", "current", slow);
   await expect(outsider.getByTestId("duration-hold")).toBeDisabled();
 
@@ -180,14 +180,14 @@ test("an editor's toolbar exports the scenario file and the Budget as CSV", asyn
   const [file] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download scenario file (JSON)" }).click()]);
   expect(file.suggestedFilename()).toBe("hovering-lab.json");
   const scenarioFile = JSON.parse(await readFile((await file.path())!, "utf8"));
-  // The file carries the document as read: upgraded to the current schema version (2, with no environment).
-  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: { ...blackHoleScenario("one-branch-stays"), schemaVersion: 2, environment: null } });
+  // The file carries the document as read: upgraded to the current schema version (3, with no environment).
+  expect(scenarioFile).toMatchObject({ format: "branchline-scenario", formatVersion: 1, title: "Hovering lab", document: { ...blackHoleScenario("one-branch-stays"), schemaVersion: 3, environment: null } });
 
   const [csv] = await Promise.all([owner.waitForEvent("download"), owner.getByRole("button", { name: "Download Budget (CSV)" }).click()]);
   expect(csv.suggestedFilename()).toBe("hovering-lab-budget.csv");
   const lines = (await readFile((await csv.path())!, "utf8")).split("\r\n");
   // The scenario's inputs come first, then the numbers, then the flags once each.
-  expect(lines[0]).toBe("# schemaVersion: 2");
+  expect(lines[0]).toBe("# schemaVersion: 3");
   expect(lines).toContain("# background.kind: schwarzschild");
   expect(lines).toContain("quantity,value,unit,source");
   expect(lines).toContain("flag,status,message");

@@ -27,16 +27,16 @@ test("a sequencer file with a bad row says which row; a good one previews and be
   const { projectId, scenarioId } = await editorWithScenario(page);
   await page.goto(`/projects/${projectId}/scenarios/${scenarioId}/files`);
   await hydrated(page);
-  await page.getByRole("button", { name: "Read a sequencer file…" }).click();
-  const dialog = page.getByRole("dialog", { name: "Separation profile from a sequencer file" });
+  await page.getByRole("button", { name: "Import a measured profile…" }).click();
+  const dialog = page.getByRole("dialog", { name: "Measured profile from a sequencer CSV" });
   await expect(dialog).toBeVisible();
 
-  await dialog.getByLabel("Sequencer file").setInputFiles(csv("t [ms],separation [um]\n0,0\n10,1.5\n20,abc\n30,0\n", "bad-run.csv"));
+  await dialog.getByLabel("Sequencer CSV").setInputFiles(csv("t [ms],separation [um]\n0,0\n10,1.5\n20,abc\n30,0\n", "bad-run.csv"));
   await expect(dialog.getByText("Row 4: separation 'abc' is not a number.")).toBeVisible(slow);
   await expect(dialog.getByRole("button", { name: "Use this profile" })).toBeDisabled();
 
   // No units in the header: the dialog asks for them, then reads the file.
-  await dialog.getByLabel("Sequencer file").setInputFiles(csv("time,separation\n0,0\n10,1.5\n20,3\n30,3\n40,0\n", "good-run.csv"));
+  await dialog.getByLabel("Sequencer CSV").setInputFiles(csv("time,separation\n0,0\n10,1.5\n20,3\n30,3\n40,0\n", "good-run.csv"));
   await expect(dialog.getByText("The header names no time unit: choose one.")).toBeVisible(slow);
   await dialog.getByLabel("Time unit").selectOption("ms");
   await dialog.getByLabel("Separation unit").selectOption("um");

@@ -42,7 +42,7 @@ describe("POST /api/compute", () => {
   });
 
   it("answers 400 naming the field and the reason for a bad document", async () => {
-    const bad = { ...defaultScenarioDocument(), protocol: { kind: "segments", separation: { durationSeconds: -1, shape: "smoothstep" }, hold: { durationSeconds: 1 }, recombination: { durationSeconds: 1, shape: "smoothstep" } } };
+    const bad = { ...defaultScenarioDocument(), protocol: { kind: "segments", separation: { durationSeconds: -1, shape: "cubic" }, hold: { durationSeconds: 1 }, recombination: { durationSeconds: 1, shape: "cubic" } } };
     const res = await call(computeRoute.POST, "POST", "/api/compute", { body: bad });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.map((f: { path: string }) => f.path)).toContain("protocol.separation.durationSeconds");

@@ -102,11 +102,11 @@ describe("text that PostgreSQL cannot store", () => {
 
 describe("parameters outside the range where the computation is defined", () => {
   it.each([
-    ["Hubble rate", { kind: "de-sitter", hubbleRatePerSecond: 1e-300 }, { placement: "inertial" }, "document.background.hubbleRatePerSecond", /Hubble rate must be from 1e-40 to 1e40 s\^-1/],
-    ["acceleration", { kind: "rindler", accelerationMetresPerSecondSquared: 1e-300 }, { placement: "inertial" }, "document.background.accelerationMetresPerSecondSquared", /from 1e-30 to 1e50 m s\^-2/],
-    ["black-hole mass", { kind: "schwarzschild", massKg: 1e-300 }, { placement: "proper-distance-above-horizon", properDistanceMetres: 1 }, "document.background.massKg", /from 1e-8 to 1e60 kg/],
-    ["proper distance", { kind: "schwarzschild", massKg: 2e31 }, { placement: "proper-distance-above-horizon", properDistanceMetres: 1e-300 }, "document.lab.properDistanceMetres", /from 1e-30 to 1e30 m/],
-    ["Hubble rate of 1e300", { kind: "de-sitter", hubbleRatePerSecond: 1e300 }, { placement: "inertial" }, "document.background.hubbleRatePerSecond", /1e40 s\^-1/],
+    ["Hubble rate", { kind: "de-sitter", hubbleRatePerSecond: 1e-300 }, { placement: "areal-radius", arealRadiusMetres: 0 }, "document.background.hubbleRatePerSecond", /Hubble rate must be from 1e-40 to 1e40 s\^-1/],
+    ["acceleration", { kind: "rindler", accelerationMetresPerSecondSquared: 1e-300 }, { placement: "uniformly-accelerated" }, "document.background.accelerationMetresPerSecondSquared", /from 1e-30 to 1e50 m s\^-2/],
+    ["black-hole mass", { kind: "schwarzschild", massKg: 1e-300 }, { placement: "proper-distance-from-horizon", properDistanceMetres: 1 }, "document.background.massKg", /from 1e-8 to 1e60 kg/],
+    ["proper distance", { kind: "schwarzschild", massKg: 2e31 }, { placement: "proper-distance-from-horizon", properDistanceMetres: 1e-300 }, "document.lab.properDistanceMetres", /from 1e-30 to 1e30 m/],
+    ["Hubble rate of 1e300", { kind: "de-sitter", hubbleRatePerSecond: 1e300 }, { placement: "areal-radius", arealRadiusMetres: 0 }, "document.background.hubbleRatePerSecond", /1e40 s\^-1/],
   ])("refuses a %s out of range on save with 400, the range and the unit", async (_what, background, lab, field, range) => {
     const document = { ...defaultScenarioDocument(), background, lab };
     const res = await call(scenarioRoute.PUT, "PUT", scenarioPath(), { as: f.users.owner, params: S(), body: { version: 1, document } });
@@ -132,7 +132,7 @@ describe("a stored document that predates the ranges", () => {
   let token: string;
   beforeAll(async () => {
     const db = getDb();
-    const stored = { ...defaultScenarioDocument(), background: { kind: "de-sitter", hubbleRatePerSecond: 1e-300 }, lab: { placement: "inertial" } };
+    const stored = { ...defaultScenarioDocument(), background: { kind: "de-sitter", hubbleRatePerSecond: 1e-300 }, lab: { placement: "areal-radius", arealRadiusMetres: 0 } };
     // Written as an older Branchline would have stored it: straight into the table, past today's checks.
     await sql`update scenarios set document = ${JSON.stringify(stored)}::jsonb, background_kind = 'de-sitter' where id = ${f.scenarioId}`.execute(db);
     const link = await createShareLink(db, { userId: f.users.owner.id, siteRole: "member" }, f.projectId, f.scenarioId, { label: "for the referee" });

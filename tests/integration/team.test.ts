@@ -389,7 +389,7 @@ describe("history: what changed, and restore", () => {
   beforeAll(async () => {
     f = await projectFixture();
     const second = { ...defaultScenarioDocument(), protocol: { ...defaultScenarioDocument().protocol, hold: { durationSeconds: 0.5 } } };
-    const third = { ...second, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 } };
+    const third = { ...second, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 }, lab: { placement: "uniformly-accelerated" } };
     const v2 = await call(scenarioRoute.PUT, "PUT", "/x", { as: f.users.editor, params: S(), body: { version: 1, title: "Longer hold", document: second } });
     expect(v2.status).toBe(200);
     const v3 = await call(scenarioRoute.PUT, "PUT", "/x", { as: f.users.editor, params: S(), body: { version: 2, document: third } });
@@ -406,6 +406,7 @@ describe("history: what changed, and restore", () => {
     expect(res.body.diff.changes).toEqual([
       { path: "background.accelerationMetresPerSecondSquared", kind: "added", after: 1e18 },
       { path: "background.kind", kind: "changed", before: "minkowski", after: "rindler" },
+      { path: "lab.placement", kind: "changed", before: "inertial", after: "uniformly-accelerated" },
       { path: "protocol.hold.durationSeconds", kind: "changed", before: 0.1, after: 0.5 },
     ]);
     const same = await diff("2", { against: "2" });

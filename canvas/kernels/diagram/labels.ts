@@ -1,5 +1,6 @@
 /** Words and numbers printed on the diagram: SI quantities without trailing zeros, and grid-line labels. */
-import { formatQuantity, type QuantityDimension } from "@/physics/units";
+import { superscript } from "@/physics/superscript";
+import { formatNumber, formatQuantity, type QuantityDimension } from "@/physics/units";
 
 /** formatQuantity with three digits, trailing zeros of the mantissa dropped ("4.00 ms" → "4 ms", "2.50 µm" → "2.5 µm"). */
 export function compactQuantity(valueSI: number, dimension: QuantityDimension, digits?: number): string {
@@ -57,19 +58,10 @@ export function labTimeLabels(tauSeconds: number[]): string[] {
   return labels;
 }
 
-const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";
 
-const superscript = (n: number) => `${n < 0 ? "⁻" : ""}${[...String(Math.abs(n))].map((d) => SUPERSCRIPT[Number(d)]).join("")}`;
-
-/** A plain number with `digits` significant digits (default 2), powers of ten written out ("6.8 × 10²"). */
+/** A plain number with `digits` significant digits (default 2), through the one number formatter (physics/units.ts). */
 export function compactNumber(value: number, digits = 2): string {
-  if (value === 0) return "0";
-  const exponent = Math.floor(Math.log10(Math.abs(value)));
-  if (exponent >= -2 && exponent <= 3) return String(Number(value.toPrecision(digits)));
-  let mantissa = Number((value / 10 ** exponent).toPrecision(digits));
-  let shown = exponent;
-  if (Math.abs(mantissa) >= 10) [mantissa, shown] = [mantissa / 10, exponent + 1];
-  return `${mantissa} × 10${superscript(shown)}`;
+  return formatNumber(value, digits);
 }
 
 /** A number known only by its base-10 logarithm (beyond a double's range), as "m × 10ⁿ". */

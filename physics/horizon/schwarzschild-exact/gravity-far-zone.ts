@@ -35,6 +35,7 @@
 import { G, c, hbar } from "../../constants";
 import { lapseFromHeight, heightOverMassLength, massLengthMetres } from "./geometrized-units";
 import type { MemoryAxis } from "./multipoles";
+import { formatNumber } from "../../units";
 
 export type Vector3 = readonly [number, number, number];
 export type Matrix3 = readonly [Vector3, Vector3, Vector3];
@@ -139,7 +140,7 @@ export function schwarzschildGravityFarZoneRate(input: GravityFarZoneInput): Gra
     flags.push({
       code: "lab-not-in-far-zone",
       severity: "caution",
-      message: `b = ${bOverM.toPrecision(3)} GM/c²: the far-zone formula leaves out relative corrections of order GM/(c² b) = ${correction.toPrecision(2)}.`,
+      message: `b = ${formatNumber(bOverM)} GM/c²: the far-zone formula leaves out relative corrections of order GM/(c² b) = ${formatNumber(correction, 2)}.`,
     });
   }
   if (input.splitting === "symmetric") {

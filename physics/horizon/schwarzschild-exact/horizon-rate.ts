@@ -36,6 +36,7 @@ import {
 import { radialMemoryNorm, tangentialMemoryNorm } from "./horizon-memory";
 import { backwardRecurrenceSteps } from "./legendre-q";
 import { estimatedMultipolesNeeded, memoryNormMultipoleSum, type MemoryAxis, type MultipoleSum } from "./multipoles";
+import { formatNumber, formatQuantity } from "../../units";
 
 export type SeparationAxis = MemoryAxis | { angleFromRadialRadians: number };
 
@@ -175,7 +176,7 @@ export function schwarzschildHorizonRate(input: SchwarzschildHorizonRateInput): 
       severity: "caution",
       message:
         `The separation is more than a tenth of the lab's proper distance to the horizon ` +
-        `(${properDistanceToHorizon.toPrecision(3)} m); the rate is the leading term in d and may be off by O(d²/distance²).`,
+        `(${formatQuantity(properDistanceToHorizon, "length")}); the rate is the leading term in d and may be off by O(d²/distance²).`,
     });
   }
   if (eps < 1e-10) {
@@ -183,8 +184,8 @@ export function schwarzschildHorizonRate(input: SchwarzschildHorizonRateInput): 
       code: "near-horizon-input-precision",
       severity: "caution",
       message:
-        `The lab sits ${eps.toExponential(2)} M above the horizon; representing b in double precision leaves ` +
-        `b/M − 2 uncertain by about ${((2.2e-16 * (2 + eps)) / eps).toExponential(1)} (relative), and the rate by 3/2 of that.`,
+        `The lab sits ${formatNumber(eps)} M above the horizon; representing b in double precision leaves ` +
+        `b/M − 2 uncertain by about ${formatNumber(((2.2e-16 * (2 + eps)) / eps), 2)} (relative), and the rate by 3/2 of that.`,
     });
   }
 

@@ -92,7 +92,7 @@ describe("the Budget as CSV", () => {
   it("leaves out what the background does not have (Minkowski has no horizon)", () => {
     const flat = budgetCsvRows(computeScenario(defaultScenarioDocument()));
     expect(flat.some((r) => r[0].startsWith("Quanta into the horizon"))).toBe(false);
-    expect(flat.some((r) => r[0].startsWith("Quanta to infinity"))).toBe(true);
+    expect(flat.some((r) => r[0].startsWith("Quanta to null infinity ℐ⁺"))).toBe(true);
   });
 
   it("names the formula of each number", () => {

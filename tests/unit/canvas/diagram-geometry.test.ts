@@ -17,7 +17,7 @@ import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenar
 
 const base = defaultScenarioDocument();
 const logUniform = (lowExp: number, highExp: number) => fc.double({ min: lowExp, max: highExp, noNaN: true }).map((e) => 10 ** e);
-const shape = fc.constantFrom("smoothstep", "cosine", "minimum-jerk", "linear" as const);
+const shape = fc.constantFrom("cubic", "cosine", "minimum-jerk", "linear" as const);
 
 const protocol = fc.record({
   separation: logUniform(-7, 3),
@@ -51,11 +51,11 @@ const backgrounds: Record<string, fc.Arbitrary<ScenarioDocument>> = {
     background: { kind: "schwarzschild" as const, massKg },
     lab: { placement: "areal-radius" as const, arealRadiusMetres: radii * schwarzschildRadiusMetres(massKg) },
   })),
-  Rindler: logUniform(-2, 20).map((a) => ({ ...base, background: { kind: "rindler" as const, accelerationMetresPerSecondSquared: a } })),
+  Rindler: logUniform(-2, 20).map((a) => ({ ...base, background: { kind: "rindler" as const, accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" as const } })),
   "de Sitter": fc.record({ H: logUniform(-18, -8), share: fc.double({ min: 0, max: 0.97, noNaN: true }) }).map(({ H, share }) => ({
     ...base,
     background: { kind: "de-sitter" as const, hubbleRatePerSecond: H },
-    lab: share < 0.05 ? { placement: "inertial" as const } : { placement: "areal-radius" as const, arealRadiusMetres: (share * c) / H },
+    lab: { placement: "areal-radius" as const, arealRadiusMetres: share < 0.05 ? 0 : (share * c) / H },
   })),
 };
 
@@ -181,7 +181,7 @@ const EXAMPLES: Record<string, ScenarioDocument> = {
     background: { kind: "schwarzschild", massKg: 1.989e31 },
     lab: { placement: "areal-radius", arealRadiusMetres: 1.5e5 },
   },
-  Rindler: { ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 } },
+  Rindler: { ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 }, lab: { placement: "uniformly-accelerated" } },
   "de Sitter": { ...base, background: { kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 }, lab: { placement: "areal-radius", arealRadiusMetres: 3e25 } },
 };
 

@@ -10,7 +10,7 @@ const base = defaultScenarioDocument();
 const documents: Record<string, ScenarioDocument> = {
   Minkowski: base,
   Schwarzschild: schwarzschildDocument(),
-  "the Rindler wedge": { ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 } },
+  "the Rindler wedge": { ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 }, lab: { placement: "uniformly-accelerated" } },
   "the de Sitter static patch": { ...base, background: { kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 }, lab: { placement: "areal-radius", arealRadiusMetres: 3e25 } },
 };
 

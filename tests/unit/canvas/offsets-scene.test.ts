@@ -137,7 +137,7 @@ const scenario = fc
       separation: logUniform(-7, 3),
       hold: logUniform(-7, 4),
       recombination: logUniform(-7, 3),
-      shape: fc.constantFrom("smoothstep", "cosine", "minimum-jerk", "linear" as const),
+      shape: fc.constantFrom("cubic", "cosine", "minimum-jerk", "linear" as const),
       split: fc.constantFrom("symmetric", "one-branch-stays" as const),
       axis: fc.constantFrom("radial", "tangential" as const),
       distance: logUniform(-9, -1),

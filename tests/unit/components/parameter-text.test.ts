@@ -1,10 +1,23 @@
 import { describe, expect, it } from "vitest";
 import { parameterLabel, parameterValue } from "@/components/history/parameterText";
 
-describe("parameter labels and values for comparing revisions", () => {
-  it("reads a path as words, dropping the SI unit from the name", () => {
-    expect(parameterLabel("protocol.hold.durationSeconds")).toBe("Protocol › hold › duration");
-    expect(parameterLabel("background.accelerationMetresPerSecondSquared")).toBe("Background › acceleration");
+describe("parameter labels and values for comparing versions", () => {
+  it("uses the editor's labels for the fields it has", () => {
+    expect(parameterLabel("protocol.hold.durationSeconds")).toBe("Hold › duration");
+    expect(parameterLabel("background.accelerationMetresPerSecondSquared")).toBe("Lab acceleration");
+    expect(parameterLabel("background.hubbleRatePerSecond")).toBe("Hubble rate H");
+    expect(parameterLabel("separation.distanceMetres")).toBe("Full separation d");
+  });
+
+  it("uses the editor's words for named values", () => {
+    expect(parameterValue("separation.split", "one-branch-stays")).toBe("branch B stays");
+    expect(parameterValue("protocol.separation.shape", "cubic")).toBe("cubic (3u² − 2u³)");
+    expect(parameterValue("lab.placement", "uniformly-accelerated")).toBe("uniformly accelerated, c²/a from the horizon");
+    expect(parameterValue("protocol.kind", "sampled")).toBe("measured profile");
+  });
+
+  it("reads any other path as words, dropping the SI unit from the name", () => {
+    expect(parameterLabel("environment.gas.pressurePascals")).toBe("Environment › gas › pressure pascals");
     expect(parameterLabel("protocol.samples.0.timeSeconds")).toBe("Protocol › samples › #1 › time");
     expect(parameterLabel("schemaVersion")).toBe("Schema version");
   });

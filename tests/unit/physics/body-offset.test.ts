@@ -15,7 +15,7 @@ import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { scenario, valueOf, withSeparation, withSource } from "./scenarios";
 
 const a = 1e14;
-const rindler = () => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a } });
+const rindler = () => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" } });
 
 /** ΔI at full separation, read from the gravitational hold rate. */
 function quadrupoleDifference(doc: ScenarioDocument): number {

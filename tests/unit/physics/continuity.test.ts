@@ -79,11 +79,11 @@ const inputs: Input[] = [
   },
   {
     name: "lab position",
-    get: (d) => (d.lab.placement === "areal-radius" ? d.lab.arealRadiusMetres : d.lab.placement === "proper-distance-above-horizon" ? d.lab.properDistanceMetres : 0),
+    get: (d) => (d.lab.placement === "areal-radius" ? d.lab.arealRadiusMetres : d.lab.placement === "proper-distance-from-horizon" ? d.lab.properDistanceMetres : 0),
     set: (d, x) =>
       d.lab.placement === "areal-radius"
         ? { ...d, lab: { ...d.lab, arealRadiusMetres: x } }
-        : d.lab.placement === "proper-distance-above-horizon"
+        : d.lab.placement === "proper-distance-from-horizon"
           ? { ...d, lab: { ...d.lab, properDistanceMetres: x } }
           : d,
   },
@@ -151,7 +151,7 @@ describe("every reported rate and count is continuous in every continuous input 
 
   it("in the Rindler wedge", () => {
     fc.assert(
-      fc.property(common, logUniform(1e10, 1e16), (parts, a) => assertContinuous(build({ kind: "rindler", accelerationMetresPerSecondSquared: a }, { placement: "inertial" }, parts))),
+      fc.property(common, logUniform(1e10, 1e16), (parts, a) => assertContinuous(build({ kind: "rindler", accelerationMetresPerSecondSquared: a }, { placement: "uniformly-accelerated" }, parts))),
       { numRuns: 4 },
     );
   });
@@ -159,7 +159,7 @@ describe("every reported rate and count is continuous in every continuous input 
   it("in the de Sitter static patch, at and off the centre", () => {
     fc.assert(
       fc.property(common, logUniform(1, 1e4), fc.double({ min: 0, max: 0.9, noNaN: true }), (parts, H, rOverHorizon) => {
-        const lab: ScenarioDocument["lab"] = rOverHorizon < 0.1 ? { placement: "inertial" } : { placement: "areal-radius", arealRadiusMetres: (rOverHorizon * c) / H };
+        const lab: ScenarioDocument["lab"] = rOverHorizon < 0.1 ? { placement: "areal-radius", arealRadiusMetres: 0 } : { placement: "areal-radius", arealRadiusMetres: (rOverHorizon * c) / H };
         assertContinuous(build({ kind: "de-sitter", hubbleRatePerSecond: H }, lab, parts));
       }),
       { numRuns: 4 },
@@ -186,7 +186,7 @@ describe("every reported rate and count is continuous in every continuous input 
     fc.assert(
       fc.property(common, logUniform(1e-4, 1e2), (parts, heightOverM) => {
         const massKg = 10 * solarMassKg;
-        assertContinuous(build({ kind: "schwarzschild", massKg }, { placement: "proper-distance-above-horizon", properDistanceMetres: (heightOverM * G * massKg) / (c * c) }, parts));
+        assertContinuous(build({ kind: "schwarzschild", massKg }, { placement: "proper-distance-from-horizon", properDistanceMetres: (heightOverM * G * massKg) / (c * c) }, parts));
       }),
       { numRuns: 4 },
     );

@@ -35,7 +35,7 @@ describe("de Sitter off the centre", () => {
   });
 
   it("says what is assumed about the graviton state when gravity is active", () => {
-    const doc = withSeparation(scenario({ background: { kind: "de-sitter", hubbleRatePerSecond: 1e3 } }), { split: "one-branch-stays" });
+    const doc = withSeparation(scenario({ background: { kind: "de-sitter", hubbleRatePerSecond: 1e3 }, lab: { placement: "areal-radius", arealRadiusMetres: 0 } }), { split: "one-branch-stays" });
     expect(computeScenario(doc).flags.find((f) => f.code === "thermal-form-assumed")).toMatchObject({ status: "note", message: expect.stringMatching(/Bunch–Davies graviton state/) });
   });
 });

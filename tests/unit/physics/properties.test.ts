@@ -7,7 +7,7 @@ import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { electromagneticChannel, gravitationalChannel } from "@/physics/spectra/channels";
 import { scenario, segments, withSeparation, withSource } from "./scenarios";
 
-const smoothShape = fc.constantFrom("smoothstep", "cosine", "minimum-jerk" as const);
+const smoothShape = fc.constantFrom("cubic", "cosine", "minimum-jerk" as const);
 const logUniform = (lo: number, hi: number) => fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((x) => 10 ** x);
 const background = fc.constantFrom<ScenarioDocument["background"]>(
   { kind: "minkowski" },
@@ -16,7 +16,13 @@ const background = fc.constantFrom<ScenarioDocument["background"]>(
   { kind: "schwarzschild", massKg: 2e31 },
 );
 const labFor = (b: ScenarioDocument["background"]): ScenarioDocument["lab"] =>
-  b.kind === "schwarzschild" ? { placement: "areal-radius", arealRadiusMetres: 1e5 } : { placement: "inertial" };
+  b.kind === "schwarzschild"
+    ? { placement: "areal-radius", arealRadiusMetres: 1e5 }
+    : b.kind === "rindler"
+      ? { placement: "uniformly-accelerated" }
+      : b.kind === "de-sitter"
+        ? { placement: "areal-radius", arealRadiusMetres: 0 }
+        : { placement: "inertial" };
 
 const documents = fc
   .record({

@@ -21,7 +21,7 @@ describe("protocol → branch paths", () => {
   });
 
   it("runs each ramp shape from 0 to 1 and back (minimum-jerk: Flash & Hogan, J. Neurosci. 5, 1688 (1985))", () => {
-    for (const shape of ["smoothstep", "cosine", "minimum-jerk", "linear"] as const) {
+    for (const shape of ["cubic", "cosine", "minimum-jerk", "linear"] as const) {
       const history = separationHistory({ separation, protocol: segments({ shape, separationSeconds: 1, holdSeconds: 2, recombinationSeconds: 3 }) });
       expect(fractionAt(history, 0)).toBeCloseTo(0, 14);
       expect(fractionAt(history, 0.5)).toBeCloseTo(0.5, 14); // every shape is point-symmetric about its middle

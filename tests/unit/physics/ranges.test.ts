@@ -14,9 +14,9 @@ const R = PARAMETER_RANGES;
 
 function withBackground(kind: "minkowski" | "schwarzschild" | "rindler" | "de-sitter"): ScenarioDocument {
   const doc = defaultScenarioDocument();
-  if (kind === "schwarzschild") return { ...doc, background: { kind, massKg: 2e31 }, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: 1e5 } };
-  if (kind === "rindler") return { ...doc, background: { kind, accelerationMetresPerSecondSquared: 9.81 } };
-  if (kind === "de-sitter") return { ...doc, background: { kind, hubbleRatePerSecond: 2.2e-18 }, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: 1e20 } };
+  if (kind === "schwarzschild") return { ...doc, background: { kind, massKg: 2e31 }, lab: { placement: "proper-distance-from-horizon", properDistanceMetres: 1e5 } };
+  if (kind === "rindler") return { ...doc, background: { kind, accelerationMetresPerSecondSquared: 9.81 }, lab: { placement: "uniformly-accelerated" } };
+  if (kind === "de-sitter") return { ...doc, background: { kind, hubbleRatePerSecond: 2.2e-18 }, lab: { placement: "proper-distance-from-horizon", properDistanceMetres: 1e20 } };
   return doc;
 }
 
@@ -82,9 +82,9 @@ describe("parameter ranges", () => {
   it("answer a result without NaN, or a sentence, for any document inside them (every background)", () => {
     const within = (r: { min: number; max: number }) => fc.double({ min: Math.log10(r.min), max: Math.log10(r.max), noNaN: true }).map((e) => 10 ** e);
     const documents = fc.oneof(
-      fc.record({ m: within(R.blackHoleMass), p: within(R.properDistance) }).map(({ m, p }) => ({ ...withBackground("schwarzschild"), background: { kind: "schwarzschild" as const, massKg: m }, lab: { placement: "proper-distance-above-horizon" as const, properDistanceMetres: p } })),
-      within(R.acceleration).map((a) => ({ ...withBackground("rindler"), background: { kind: "rindler" as const, accelerationMetresPerSecondSquared: a } })),
-      fc.record({ h: within(R.hubbleRate), p: within(R.properDistance) }).map(({ h, p }) => ({ ...withBackground("de-sitter"), background: { kind: "de-sitter" as const, hubbleRatePerSecond: h }, lab: { placement: "proper-distance-above-horizon" as const, properDistanceMetres: p } })),
+      fc.record({ m: within(R.blackHoleMass), p: within(R.properDistance) }).map(({ m, p }) => ({ ...withBackground("schwarzschild"), background: { kind: "schwarzschild" as const, massKg: m }, lab: { placement: "proper-distance-from-horizon" as const, properDistanceMetres: p } })),
+      within(R.acceleration).map((a) => ({ ...withBackground("rindler"), background: { kind: "rindler" as const, accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" as const } })),
+      fc.record({ h: within(R.hubbleRate), p: within(R.properDistance) }).map(({ h, p }) => ({ ...withBackground("de-sitter"), background: { kind: "de-sitter" as const, hubbleRatePerSecond: h }, lab: { placement: "proper-distance-from-horizon" as const, properDistanceMetres: p } })),
     );
     const sources = fc.record({ q: within(R.charge), m: within(R.sourceMass), d: within(R.separation), ramp: within(R.rampDuration), hold: within(R.holdDuration) });
     fc.assert(

@@ -25,7 +25,7 @@ describe("scenario documents and computeScenarioFromJson", () => {
     const { numerics: _numerics, ...older } = defaultScenarioDocument();
     const parsed = parseScenarioDocument(older);
     expect(parsed.ok && parsed.document.numerics).toEqual({ kinkTimeResolutionSeconds: null });
-    expect(CURRENT_SCHEMA_VERSION).toBe(2);
+    expect(CURRENT_SCHEMA_VERSION).toBe(3);
   });
 
   it("answers a document from a newer Branchline, or a malformed one, with {path, message} issues", () => {

@@ -95,7 +95,7 @@ describe("the Schwarzschild electromagnetic hold rate of computeScenario", () =>
     const increments = [1, 2].map((i) => valueOf(counts[i].holdDrivenQuanta) - valueOf(counts[i - 1].holdDrivenQuanta));
     expect(increments[1] / increments[0]).toBeCloseTo((100 - 10) / (10 - 1), 6);
     // The same protocol in the Rindler wedge: its hold-driven part is the same rate × ∫σ²dτ.
-    const rindler = computeScenario({ ...hovering(6, "radial", 10), background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "inertial" } }).electromagnetic;
+    const rindler = computeScenario({ ...hovering(6, "radial", 10), background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "uniformly-accelerated" } }).electromagnetic;
     expect(valueOf(rindler.holdDrivenQuanta) / valueOf(rindler.holdRate)).toBeCloseTo(valueOf(counts[1].holdDrivenQuanta) / valueOf(counts[1].holdRate), 9);
   });
 
@@ -108,7 +108,7 @@ describe("the Schwarzschild electromagnetic hold rate of computeScenario", () =>
 
   it("reports the near-horizon limit for a lab whose areal radius rounds onto the horizon, and says so", () => {
     const rs = 2 * m;
-    const doc = { ...hovering(3, "tangential"), lab: { placement: "proper-distance-above-horizon", properDistanceMetres: 1e-9 * rs } } as ScenarioDocument;
+    const doc = { ...hovering(3, "tangential"), lab: { placement: "proper-distance-from-horizon", properDistanceMetres: 1e-9 * rs } } as ScenarioDocument;
     const result = computeScenario(doc);
     const a = valueOf(result.background.labProperAcceleration);
     const qd = doc.source.chargeCoulombs * doc.separation.distanceMetres;
@@ -131,7 +131,7 @@ describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
       expect(gw.holdRate.sourceKey).toBe("schwarzschild-exact-gw-far-zone");
       expect(gw.comparison!.estimateRegime).toBe("far");
       expect(valueOf(gw.comparison!.ratioExactToEstimate)).toBeCloseTo(valueOf(gw.holdRate) / valueOf(gw.comparison!.estimateHoldRate), 12);
-      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/relative corrections of order GM\/\(c²b\) = 0.0010/) });
+      expect(flag(computeScenario(doc), "schwarzschild-gravity-model")).toMatchObject({ status: "note", message: expect.stringMatching(/relative corrections of order GM\/\(c²b\) = 1 × 10⁻³ \(b = 1000 GM\/c²\)/) });
     }
   });
 
@@ -145,7 +145,7 @@ describe("the Schwarzschild gravitational hold rate of computeScenario", () => {
     const result = at(20);
     expect(result.gravitational.regime).toBe("far-zone");
     expect(result.gravitational.comparison!.estimateRegime).toBe("far");
-    expect(flag(result, "schwarzschild-gravity-model")).toMatchObject({ status: "caution", message: expect.stringMatching(/= 0.050/) });
+    expect(flag(result, "schwarzschild-gravity-model")).toMatchObject({ status: "caution", message: expect.stringMatching(/= 0.05 \(b = 20 GM\/c²\)/) });
     expect(flag(result, "schwarzschild-gravity-model")!.measure!).toBeCloseTo(0.05, 9);
     expect(flag(at(5), "schwarzschild-gravity-model")).toMatchObject({ status: "invalid", message: expect.stringMatching(/order one/) });
   });

@@ -64,12 +64,12 @@ describe("the ramps' quanta around a black hole", () => {
   it("are the Rindler count at the lab's acceleration near the horizon (30 m above a solar-mass hole, 1 µs minimum-jerk ramps)", () => {
     const fast = segments({ separationSeconds: 1e-6, recombinationSeconds: 1e-6, holdSeconds: 1e-5, shape: "minimum-jerk" });
     const near = withSeparation(
-      scenario({ background: { kind: "schwarzschild", massKg: solarMassKg }, lab: { placement: "proper-distance-above-horizon", properDistanceMetres: 30 }, protocol: fast }),
+      scenario({ background: { kind: "schwarzschild", massKg: solarMassKg }, lab: { placement: "proper-distance-from-horizon", properDistanceMetres: 30 }, protocol: fast }),
       { split: "one-branch-stays" },
     );
     const result = computeScenario(near);
     const a = valueOf(result.background.labProperAcceleration);
-    const rindler = computeScenario(withSeparation(scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, protocol: fast }), { split: "one-branch-stays" }));
+    const rindler = computeScenario(withSeparation(scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" }, protocol: fast }), { split: "one-branch-stays" }));
     for (const channel of ["electromagnetic", "gravitational"] as const) {
       expect(valueOf(result[channel].rampDrivenQuanta) / valueOf(rindler[channel].rampDrivenQuanta), channel).toBeCloseTo(1, 4);
     }

@@ -23,7 +23,7 @@ describe("sweeps and the recombination optimum", () => {
   });
 
   it("shows the hold-driven count growing linearly with the hold in the Rindler wedge", () => {
-    const doc = scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, protocol: segments() });
+    const doc = scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "uniformly-accelerated" }, protocol: segments() });
     const points = sweepScenario(doc, { parameter: "hold-time", fromValue: 1e3, toValue: 1e5, points: 3 }).points;
     const increments = [valueOf(points[1].totalQuanta) - valueOf(points[0].totalQuanta), valueOf(points[2].totalQuanta) - valueOf(points[1].totalQuanta)];
     expect(increments[1] / increments[0]).toBeCloseTo((1e5 - 1e4) / (1e4 - 1e3), 6);
@@ -58,7 +58,7 @@ describe("sweeps and the recombination optimum", () => {
   });
 
   it("reports the boundary when trading against the hold, where slower recombination always helps", () => {
-    const doc = scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, protocol: segments({ separationSeconds: 0.01 }) });
+    const doc = scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e17 }, lab: { placement: "uniformly-accelerated" }, protocol: segments({ separationSeconds: 0.01 }) });
     const optimum = optimiseRecombinationTime(doc, { totalDurationSeconds: 1, tradeAgainst: "hold" });
     expect(optimum.onBoundary).toBe(true);
     expect(optimum.tradedSeconds).toBeLessThan(1e-3);

@@ -3,7 +3,7 @@ import { computeScenario } from "@/physics/compute";
 import { G, c, epsilon0, hbar } from "@/physics/constants";
 import { scenario, segments, valueOf, withSeparation } from "./scenarios";
 
-const rindler = (a: number, holdSeconds = 0.1) => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, protocol: segments({ holdSeconds }) });
+const rindler = (a: number, holdSeconds = 0.1) => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" }, protocol: segments({ holdSeconds }) });
 
 describe("horizon counts for thermal fields (Rindler, de Sitter)", () => {
   it("holds at the rate S(0)|Δp|²/ħ² = q²d²a³/(6π² ε0 ħ c⁶) in the Rindler wedge (Boyer 1980; Takagi 1986)", () => {
@@ -41,7 +41,7 @@ describe("horizon counts for thermal fields (Rindler, de Sitter)", () => {
 
   it("at the de Sitter centre holds at the Rindler rate with a → cH (Gibbons–Hawking temperature, conformal invariance)", () => {
     const H = 1e3;
-    const doc = scenario({ background: { kind: "de-sitter", hubbleRatePerSecond: H }, lab: { placement: "inertial" } });
+    const doc = scenario({ background: { kind: "de-sitter", hubbleRatePerSecond: H }, lab: { placement: "areal-radius", arealRadiusMetres: 0 } });
     const qd = doc.source.chargeCoulombs * doc.separation.distanceMetres;
     const expected = (qd * qd * H ** 3) / (6 * Math.PI ** 2 * epsilon0 * hbar * c ** 3);
     expect(valueOf(computeScenario(doc).electromagnetic.holdRate) / expected).toBeCloseTo(1, 9);

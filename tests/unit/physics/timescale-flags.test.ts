@@ -32,7 +32,7 @@ describe("the hold-timescale flag", () => {
 
   it("compares the time apart with c/a in the Rindler wedge, and stops at a caution (the spectral count stays exact)", () => {
     const a = 3e8 / 1e-6; // c/a = 1 µs
-    const doc = (holdSeconds: number) => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, protocol: segments({ separationSeconds: 1e-6, recombinationSeconds: 1e-6, holdSeconds }) });
+    const doc = (holdSeconds: number) => scenario({ background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" }, protocol: segments({ separationSeconds: 1e-6, recombinationSeconds: 1e-6, holdSeconds }) });
     const short = flag(doc(0));
     expect(short.status).toBe("caution");
     expect(short.message).toMatch(/total count is exact/);

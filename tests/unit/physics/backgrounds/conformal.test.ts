@@ -46,7 +46,7 @@ const cases: Case[] = [
   },
   {
     name: "Rindler",
-    background: makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: acceleration }, { placement: "inertial" }),
+    background: makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: acceleration }, { placement: "uniformly-accelerated" }),
     timeScale: c / acceleration,
     lengthScale: c ** 2 / acceleration,
     radiusAt: (f) => (c ** 2 / acceleration) * 10 ** (-4 + 5 * f),

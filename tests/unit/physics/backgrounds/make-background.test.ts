@@ -14,7 +14,7 @@ const GM = G * massKg;
 const M = GM / c ** 2; // GM/c², metres
 const schwarzschild = { kind: "schwarzschild", massKg } as const;
 const atRadius = (arealRadiusMetres: number): LabPlacement => ({ placement: "areal-radius", arealRadiusMetres });
-const atProperDistance = (properDistanceMetres: number): LabPlacement => ({ placement: "proper-distance-above-horizon", properDistanceMetres });
+const atProperDistance = (properDistanceMetres: number): LabPlacement => ({ placement: "proper-distance-from-horizon", properDistanceMetres });
 
 function thrown(background: BackgroundSpec, lab: LabPlacement): BackgroundInputError {
   try {
@@ -179,7 +179,7 @@ describe("de Sitter static lab", () => {
   });
 
   it("the inertial lab sits at the centre, unaccelerated, πc/2H from the horizon", () => {
-    const centre = makeBackground(deSitter, { placement: "inertial" });
+    const centre = makeBackground(deSitter, { placement: "areal-radius", arealRadiusMetres: 0 });
     expect(centre.labProperAccelerationMetresPerSecondSquared).toBe(0);
     expect(relative(centre.labProperDistanceToHorizonMetres!, (Math.PI / 2) * (c / H))).toBeLessThan(1e-15);
   });
@@ -187,7 +187,7 @@ describe("de Sitter static lab", () => {
 
 describe("Rindler and Minkowski labs", () => {
   it("the Rindler lab is c²/a from its horizon, with surface gravity a/c per unit of its own proper time (Rindler, Am. J. Phys. 34, 1174 (1966))", () => {
-    const bg = makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, { placement: "inertial" });
+    const bg = makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, { placement: "uniformly-accelerated" });
     expect(relative(bg.labProperDistanceToHorizonMetres!, c ** 2 / 9.81)).toBeLessThan(1e-15);
     expect(relative(bg.horizon!.surfaceGravityPerSecond, 9.81 / c)).toBeLessThan(1e-15);
     expect(bg.labRedshiftFactor).toBe(1);

@@ -19,7 +19,7 @@ describe("horizon temperatures", () => {
   });
 
   it("Unruh: T_U = ħa/(2πck_B) (Unruh, Phys. Rev. D 14, 870 (1976)), ≈ 3.98e-20 K at a = 9.81 m/s² (from memory)", () => {
-    const bg = makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, { placement: "inertial" });
+    const bg = makeBackground({ kind: "rindler", accelerationMetresPerSecondSquared: 9.81 }, { placement: "uniformly-accelerated" });
     const closedForm = (hbar * 9.81) / (2 * Math.PI * c * kB);
     expect(relative(bg.horizon!.temperatureKelvin, closedForm)).toBeLessThan(1e-12);
     expect(relative(bg.labLocalTemperatureKelvin, closedForm)).toBeLessThan(1e-12);
@@ -27,7 +27,7 @@ describe("horizon temperatures", () => {
   });
 
   it("Gibbons–Hawking: T = ħH/(2πk_B) (Gibbons & Hawking, Phys. Rev. D 15, 2738 (1977)), ≈ 2.7e-30 K for H = 2.2e-18 s⁻¹", () => {
-    const bg = makeBackground({ kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 }, { placement: "inertial" });
+    const bg = makeBackground({ kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 }, { placement: "areal-radius", arealRadiusMetres: 0 });
     const closedForm = (hbar * 2.2e-18) / (2 * Math.PI * kB);
     expect(relative(bg.horizon!.temperatureKelvin, closedForm)).toBeLessThan(1e-12);
     expect(relative(bg.labLocalTemperatureKelvin, closedForm)).toBeLessThan(1e-12); // the centre: lapse 1
@@ -49,7 +49,7 @@ describe("local temperatures", () => {
 
   it("near a black hole's horizon the local temperature tends to the Unruh temperature of the lab's own acceleration (equivalence principle; Unruh 1976)", () => {
     for (const [properDistanceMetres, tolerance] of [[1e-2 * rs, 1e-4], [1e-4 * rs, 1e-8]]) {
-      const bg = makeBackground({ kind: "schwarzschild", massKg }, { placement: "proper-distance-above-horizon", properDistanceMetres });
+      const bg = makeBackground({ kind: "schwarzschild", massKg }, { placement: "proper-distance-from-horizon", properDistanceMetres });
       const unruh = (hbar * bg.labProperAccelerationMetresPerSecondSquared) / (2 * Math.PI * c * kB);
       expect(relative(bg.labLocalTemperatureKelvin, unruh)).toBeLessThan(tolerance);
     }

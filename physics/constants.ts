@@ -73,6 +73,11 @@ export const electronMass = constant({
   uncertainty: 0.000_000_0028e-31, reference: CODATA_2018,
 });
 
+export const standardGravity = constant({
+  symbol: "g_n", name: "standard acceleration of gravity", value: 9.806_65, unit: "m s^-2", uncertainty: 0,
+  reference: `${CODATA_2018}, adopted value (exact)`,
+});
+
 export const nominalSolarMassParameter = constant({
   symbol: "GM☉", name: "nominal solar mass parameter", value: 1.327_124_4e20, unit: "m^3 s^-2",
   uncertainty: 0, reference: `${IAU_2015_B3} (exact by definition)`,
@@ -103,5 +108,6 @@ export const G = gravitationalConstant.value;
 
 export const allConstants: readonly PhysicalConstant[] = [
   speedOfLight, planckConstant, reducedPlanckConstant, elementaryCharge, boltzmannConstant, vacuumPermittivity,
-  vacuumPermeability, gravitationalConstant, atomicMassConstant, electronMass, nominalSolarMassParameter, solarMass,
+  vacuumPermeability, gravitationalConstant, atomicMassConstant, electronMass, standardGravity, nominalSolarMassParameter,
+  solarMass,
 ];

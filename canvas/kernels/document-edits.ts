@@ -7,7 +7,7 @@
 import { BackgroundInputError, makeBackground } from "@/physics/backgrounds";
 import { separationHistory } from "@/physics/protocols";
 import { ScenarioInputError } from "@/physics/scenario/input-error";
-import { c, G, solarMass } from "@/physics/constants";
+import { startingBackground } from "@/physics/scenario/starting";
 import { parseScenarioDocument, type LabPlacement, type RampShape, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
 import type { ProtocolPlan } from "./offsets/drag-plan";
 import type { SegmentName } from "./timeline";
@@ -61,30 +61,11 @@ export function withFormula(document: ScenarioDocument, change: { expression?: s
   return { ...document, protocol: { ...document.protocol, ...change } };
 }
 
-/** 10 M☉ with the lab at five horizon radii, outside the photon sphere; an accelerated lab at 10¹⁸ m/s²; today's Hubble rate. */
-const DEFAULT_BLACK_HOLE_SOLAR_MASSES = 10;
-const DEFAULT_LAB_RADIUS_IN_HORIZON_RADII = 5;
-const DEFAULT_RINDLER_ACCELERATION = 1e18;
-const DEFAULT_HUBBLE_RATE = 2.2e-18;
-
-/** A fresh start for each background: its usual parameter and a lab placement it takes. */
+/** A fresh start for each background (physics/scenario/starting.ts), keeping the source, separation and protocol. */
 export function withBackgroundKind(document: ScenarioDocument, kind: ScenarioDocument["background"]["kind"]): ScenarioDocument {
   if (document.background.kind === kind) return document;
-  switch (kind) {
-    case "minkowski":
-      return { ...document, background: { kind }, lab: { placement: "inertial" } };
-    case "rindler":
-      return { ...document, background: { kind, accelerationMetresPerSecondSquared: DEFAULT_RINDLER_ACCELERATION }, lab: { placement: "uniformly-accelerated" } };
-    case "de-sitter":
-      return { ...document, background: { kind, hubbleRatePerSecond: DEFAULT_HUBBLE_RATE }, lab: { placement: "areal-radius", arealRadiusMetres: 0 } };
-    case "schwarzschild": {
-      const massKg = DEFAULT_BLACK_HOLE_SOLAR_MASSES * solarMass.value;
-      const horizon = (2 * G * massKg) / (c * c);
-      return { ...document, background: { kind, massKg }, lab: { placement: "areal-radius", arealRadiusMetres: DEFAULT_LAB_RADIUS_IN_HORIZON_RADII * horizon } };
-    }
-  }
+  return { ...document, ...startingBackground(kind) };
 }
-
 
 export function withRampShape(document: ScenarioDocument, ramp: "separation" | "recombination", shape: RampShape): ScenarioDocument {
   if (document.protocol.kind !== "segments") return document;

@@ -6,7 +6,7 @@ import { useCreateScenario } from "@/components/api/scenarios";
 import { backgroundKinds, backgroundNames } from "@/components/format/words";
 import { FormProblem } from "@/components/forms/FormProblem";
 import { useApiForm } from "@/components/forms/useApiForm";
-import { newScenarioDocument } from "@/components/scenario/newScenarioDocument";
+import { newScenarioDocument } from "@/physics/scenario/starting";
 import { backgroundSummary, labSummary } from "@/components/scenario/summary";
 import { SelectField, TextField } from "@/components/ui/Field";
 import { buttonStyles } from "@/components/ui/styles";

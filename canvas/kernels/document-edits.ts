@@ -8,6 +8,7 @@ import { BackgroundInputError, makeBackground } from "@/physics/backgrounds";
 import { separationHistory } from "@/physics/protocols";
 import { ScenarioInputError } from "@/physics/scenario/input-error";
 import { startingBackground } from "@/physics/scenario/starting";
+import type { SampledProtocol } from "../import/sequencer-csv";
 import { parseScenarioDocument, type LabPlacement, type RampShape, type ScenarioDocument, type SchemaIssue } from "@/physics/scenario/schema";
 import type { ProtocolPlan } from "./offsets/drag-plan";
 import type { SegmentName } from "./timeline";
@@ -95,4 +96,17 @@ export function withLabPlacement(document: ScenarioDocument, placement: LabPlace
 export function withRecombinationAndHold(document: ScenarioDocument, recombinationSeconds: number, holdSeconds: number): ScenarioDocument {
   if (document.protocol.kind !== "segments") return document;
   return withSegmentDuration(withSegmentDuration(document, "recombination", recombinationSeconds), "hold", holdSeconds);
+}
+
+/**
+ * The document with this sampled profile as its protocol, and its separation distance set to the profile's
+ * largest separation (the sampled history measures itself in that unit), so the two never disagree.
+ */
+export function withSampledProtocol(document: ScenarioDocument, protocol: SampledProtocol): ScenarioDocument {
+  const peak = protocol.samples.reduce((m, s) => Math.max(m, Math.abs(s.separationMetres)), 0);
+  return {
+    ...document,
+    protocol,
+    separation: { ...document.separation, distanceMetres: peak > 0 ? peak : document.separation.distanceMetres },
+  };
 }

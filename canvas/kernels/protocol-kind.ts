@@ -11,7 +11,7 @@
  * it); withPeakSeparation rescales the samples so that a new d is honoured rather than ignored.
  */
 import { fractionAt, rampShapes, separationHistory, type SeparationHistory } from "@/physics/protocols";
-import { withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { withSampledProtocol } from "@/canvas/kernels/document-edits";
 import type { ProtocolSpec, ScenarioDocument } from "@/physics/scenario/schema";
 
 export type ProtocolKind = ProtocolSpec["kind"];

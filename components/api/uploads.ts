@@ -5,7 +5,7 @@
  */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { AttachmentDto, ScenarioDto } from "@/contracts/dto";
-import type { ProfileFlag, SampledProtocol, SequencerSample, ColumnReading } from "@/physics/protocols/sequencer-csv";
+import type { ProfileFlag, SampledProtocol, SequencerSample, ColumnReading } from "@/canvas/import/sequencer-csv";
 import { ApiError, apiFetch, errorFromBody } from "./client";
 import { projectKeys } from "./projects";
 import { scenarioKeys } from "./scenarios";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEdit } from "@/components/editor/useEdit";
-import { withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { withSampledProtocol } from "@/canvas/kernels/document-edits";
 import { SequencerProfileImport } from "./SequencerProfileImport";
 
 /**

@@ -7,7 +7,7 @@ import { formatDuration, formatLength } from "@/components/format/quantities";
 import { sentence } from "@/components/format/text";
 import { Notice } from "@/components/ui/Notice";
 import { buttonStyles, fieldStyles, tableStyles } from "@/components/ui/styles";
-import { SEPARATION_UNIT_CHOICES, TIME_UNIT_CHOICES, SEQUENCER_CSV_LIMITS, type SampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { SEPARATION_UNIT_CHOICES, TIME_UNIT_CHOICES, SEQUENCER_CSV_LIMITS, type SampledProtocol } from "@/canvas/import/sequencer-csv";
 import { ProblemList } from "./ProblemList";
 import { ProfileSketch } from "./ProfileSketch";
 

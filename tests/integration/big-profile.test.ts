@@ -10,7 +10,8 @@ import * as sequencerRoute from "@/app/api/projects/[projectId]/scenarios/[scena
 import * as importRoute from "@/app/api/projects/[projectId]/scenarios/import/route";
 import { SCENARIO_FILE_MAX_BYTES } from "@/contracts/requests";
 import { computeScenario } from "@/physics/compute";
-import { parseSequencerCsv, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { parseSequencerCsv, toSampledProtocol } from "@/canvas/import/sequencer-csv";
+import { withSampledProtocol } from "@/canvas/kernels/document-edits";
 import { MAX_STORED_SAMPLES, THIN_TOLERANCE_FRACTION } from "@/physics/protocols/thin-profile";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
 import { projectFixture, type ProjectFixture } from "./fixtures";

@@ -6,7 +6,8 @@ import { sequencerProfileJsonSchema, sequencerProfileOptionsSchema } from "@/con
 import { json, requireActor, route } from "@/lib/http";
 import { objectStore } from "@/lib/storage";
 import { readUpload, utf8 } from "@/lib/upload-body";
-import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol } from "@/canvas/import/sequencer-csv";
+import { withSampledProtocol } from "@/canvas/kernels/document-edits";
 import { MAX_STORED_SAMPLES, THIN_TOLERANCE_FRACTION, thinProfile } from "@/physics/protocols/thin-profile";
 import type { z } from "zod";
 

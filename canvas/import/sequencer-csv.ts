@@ -9,10 +9,13 @@
  *
  * The delimiter is guessed from the first line (semicolon, tab, else comma); with semicolons a decimal comma ("1,5") is read as 1.5, as
  * spreadsheets in many locales write it. A leading byte-order mark is ignored.
+ *
+ * File reading, not physics: shared by the browser's preview and the server's import route. The document edit
+ * that applies the profile is canvas/kernels/document-edits.ts's withSampledProtocol.
  */
 import Papa from "papaparse";
-import type { ProtocolSpec, ScenarioDocument } from "../scenario/schema";
-import { formatQuantity, parseQuantity } from "../units";
+import type { ProtocolSpec } from "@/physics/scenario/schema";
+import { formatQuantity, parseQuantity } from "@/physics/units";
 
 export const SEQUENCER_CSV_LIMITS = {
   /** Largest file read, in bytes. */
@@ -258,17 +261,4 @@ export type SampledInterpolation = SampledProtocol["interpolation"];
 
 export function toSampledProtocol(samples: SequencerSample[], interpolation: SampledInterpolation = "linear"): SampledProtocol {
   return { kind: "sampled", samples: samples.map((s) => ({ timeSeconds: s.timeSeconds, separationMetres: s.separationMetres })), interpolation };
-}
-
-/**
- * The document with this sampled profile as its protocol, and its separation distance set to the profile's
- * largest separation (the sampled history measures itself in that unit), so the two never disagree.
- */
-export function withSampledProtocol(document: ScenarioDocument, protocol: SampledProtocol): ScenarioDocument {
-  const peak = protocol.samples.reduce((m, s) => Math.max(m, Math.abs(s.separationMetres)), 0);
-  return {
-    ...document,
-    protocol,
-    separation: { ...document.separation, distanceMetres: peak > 0 ? peak : document.separation.distanceMetres },
-  };
 }

@@ -3,7 +3,8 @@
  * Table 7: milli 10⁻³, micro 10⁻⁶, nano 10⁻⁹). Row numbers are those a spreadsheet shows (header = row 1).
  */
 import { describe, expect, it } from "vitest";
-import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol, withSampledProtocol } from "@/physics/protocols/sequencer-csv";
+import { parseSequencerCsv, SEQUENCER_CSV_LIMITS, toSampledProtocol } from "@/canvas/import/sequencer-csv";
+import { withSampledProtocol } from "@/canvas/kernels/document-edits";
 import { separationHistory } from "@/physics/protocols";
 import { defaultScenarioDocument, parseScenarioDocument } from "@/physics/scenario/schema";
 import { createEditorStore } from "@/canvas/store/createEditorStore";

@@ -52,7 +52,7 @@ describe("the lab's proper time read off the Diagram", () => {
   const documents = fc.oneof(
     fc.constant(base),
     logUniform(0.05, 2).map(blackHole),
-    logUniform(0, 18).map((a): ScenarioDocument => ({ ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: a } })),
+    logUniform(0, 18).map((a): ScenarioDocument => ({ ...base, background: { kind: "rindler", accelerationMetresPerSecondSquared: a }, lab: { placement: "uniformly-accelerated" } })),
     logUniform(-18, -9).map((H): ScenarioDocument => ({ ...base, background: { kind: "de-sitter", hubbleRatePerSecond: H }, lab: { placement: "areal-radius", arealRadiusMetres: (0.6 * c) / H } })),
   );
 

@@ -17,7 +17,7 @@ describe("parameter labels and values for comparing versions", () => {
   });
 
   it("reads any other path as words, dropping the SI unit from the name", () => {
-    expect(parameterLabel("environment.gas.pressurePascals")).toBe("Environment › gas › pressure pascals");
+    expect(parameterLabel("environment.gas.pressurePascals")).toBe("Environment › gas › pressure");
     expect(parameterLabel("protocol.samples.0.timeSeconds")).toBe("Protocol › samples › #1 › time");
     expect(parameterLabel("schemaVersion")).toBe("Schema version");
   });

@@ -11,6 +11,7 @@ import type { MapGrid } from "@/physics/maps/axes";
 import { superscript } from "@/physics/superscript";
 import { axisTickLabels, axisTitle, axisUnit, linearTicks, logTicks, type AxisUnit } from "../kernels/diagram/axis-scale";
 import type { FigurePalette } from "../theme";
+import { CHART_TICK_FONT, chartLine, chartText } from "./chart-shapes";
 import type { FigureShape } from "./diagram-figure";
 import type { ExportDrawing, NamedGroup } from "./standalone-figure";
 
@@ -33,7 +34,7 @@ export interface MapPlot {
 
 const MARGIN = { left: 84, right: 112, top: 24, bottom: 56 };
 const BAR = { gap: 18, width: 14 };
-const TICK_FONT = 12;
+const TICK_FONT = CHART_TICK_FONT;
 const TITLE_FONT = 13;
 
 /** The colour ramp, low to high: pale sand to deep ink blue, even in lightness so that it prints in grey. */
@@ -128,18 +129,8 @@ export function optimumPath(grid: MapGrid): { x: number; y: number }[] {
   return path;
 }
 
-const text = (t: string, x: number, y: number, anchor: "start" | "middle" | "end", fill: string, fontSize = TICK_FONT, rotation: 0 | -90 = 0): FigureShape => ({
-  kind: "text",
-  text: t,
-  x,
-  y,
-  anchor,
-  rotation,
-  fontSize,
-  font: "serif",
-  fill,
-});
-const line = (points: number[], stroke: string, width: number, dash: number[] = []): FigureShape => ({ kind: "line", points, stroke, width, dash, round: true });
+const text = chartText;
+const line = (points: number[], stroke: string, width: number, dash: number[] = []) => chartLine(points, stroke, width, dash, true);
 const rect = (x0: number, y0: number, x1: number, y1: number, fill: string): FigureShape => ({ kind: "area", points: [x0, y0, x1, y0, x1, y1, x0, y1], fill });
 
 function axisTicks(values: number[], scale: "log" | "linear", shown: [number, number]) {

@@ -10,6 +10,7 @@
  */
 import { axisTickLabels, axisTitle, axisUnit as unitFor, logTicks, tickLabel as unitTickLabel, type AxisTicks, type AxisUnit } from "../kernels/diagram/axis-scale";
 import { DASHES, type FigurePalette } from "../theme";
+import { CHART_TICK_FONT, chartLine, chartText } from "./chart-shapes";
 import type { FigureShape } from "./diagram-figure";
 import type { ExportDrawing, NamedGroup } from "./standalone-figure";
 
@@ -75,21 +76,11 @@ export function labelled(major: number[]): number[] {
 }
 
 const PLOT = { left: 92, right: 24, top: 20, bottom: 52 };
-const TICK_FONT = 12;
+const TICK_FONT = CHART_TICK_FONT;
 const TITLE_FONT = 13;
 
-const text = (t: string, x: number, y: number, anchor: "start" | "middle" | "end", fill: string, fontSize = TICK_FONT, rotation: 0 | -90 = 0): FigureShape => ({
-  kind: "text",
-  text: t,
-  x,
-  y,
-  anchor,
-  rotation,
-  fontSize,
-  font: "serif",
-  fill,
-});
-const line = (points: number[], stroke: string, width: number, dash: number[] = []): FigureShape => ({ kind: "line", points, stroke, width, dash, round: false });
+const text = chartText;
+const line = (points: number[], stroke: string, width: number, dash: number[] = []) => chartLine(points, stroke, width, dash, false);
 
 /** Pads a log range to whole minor ticks, so the curve never touches the frame. */
 function paddedRange(values: number[]): [number, number] {

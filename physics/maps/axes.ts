@@ -2,21 +2,11 @@
  * What a parameter map is made of: the parameters it may vary, the quantities it may show, the axes and the grid.
  * Types and constants only (safe for lib/contracts.ts and the browser); physics/maps/grid.ts computes.
  */
+import { SWEEP_PARAMETERS } from "../sweeps/parameters";
 import type { SweepParameter, SweepUnit } from "../sweeps/vary";
 
-/**
- * Every parameter a map may vary. A record keyed by SweepParameter, so that the type check names this list as soon
- * as physics/sweeps/vary.ts learns a new parameter.
- */
-const parameterSet: Record<SweepParameter, true> = {
-  "recombination-time": true,
-  "hold-time": true,
-  "lab-distance": true,
-  "gas-pressure": true,
-  "surroundings-temperature": true,
-  "surface-distance": true,
-};
-export const MAP_PARAMETERS = Object.keys(parameterSet) as SweepParameter[];
+/** Every parameter a map may vary: every parameter a sweep may (physics/sweeps/parameters.ts). */
+export const MAP_PARAMETERS: SweepParameter[] = [...SWEEP_PARAMETERS];
 
 /** What a map shows at each point: ⟨N⟩ (both channels, or one), the decoherence 𝒟, or the decoherence time. */
 export const MAP_QUANTITIES = ["total-quanta", "electromagnetic-quanta", "gravitational-quanta", "decoherence", "decoherence-time"] as const;

@@ -80,9 +80,13 @@ function FormulaProfile({ protocol }: { protocol: Extract<ProtocolSpec, { kind: 
 const KIND_WORDS: Record<ProtocolKind, string> = { segments: "Ramps", formula: "Formula σ(t)", sampled: "Measured profile" };
 const KIND_LABELS: Record<ProtocolKind, string> = { segments: "ramps", formula: "a formula", sampled: "a measured profile" };
 
-/** The heading and the kind switch: one radio group, each choice one undo step that keeps the peak separation. */
-function StripHeading({ kind, readOnly }: { kind: ProtocolKind; readOnly: boolean }) {
+/**
+ * The heading and the kind switch: one radio group, each choice one undo step that keeps the peak separation. The
+ * choice reads the store's document itself, not the paced copy the fields below follow, so a click shows at once.
+ */
+function StripHeading({ readOnly }: { readOnly: boolean }) {
   const edit = useEdit();
+  const kind = useEditor((s) => s.document.protocol.kind);
   return (
     <div className="mb-2 flex flex-wrap items-baseline gap-x-4 gap-y-1">
       <h2 id="protocol-heading" className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
@@ -166,7 +170,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   if (protocol.kind === "formula") {
     return (
       <section aria-labelledby="protocol-heading">
-        <StripHeading kind="formula" readOnly={readOnly} />
+        <StripHeading readOnly={readOnly} />
         <FormulaProfile protocol={protocol} />
       </section>
     );
@@ -174,7 +178,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   if (protocol.kind === "sampled") {
     return (
       <section aria-labelledby="protocol-heading">
-        <StripHeading kind="sampled" readOnly={readOnly} />
+        <StripHeading readOnly={readOnly} />
         <MeasuredProfile protocol={protocol} />
       </section>
     );
@@ -189,7 +193,7 @@ const ProtocolStripView = memo(function ProtocolStripView({
   };
   return (
     <section aria-labelledby="protocol-heading">
-      <StripHeading kind="segments" readOnly={readOnly} />
+      <StripHeading readOnly={readOnly} />
       <div className="flex flex-col gap-1 sm:flex-row">
         {segments.map((segment, i) => {
           const part = protocol[segment];

@@ -6,21 +6,22 @@
  * environmental channel, the value of its control parameter at which it would equal the body's own fields. Numbers
  * never break across lines: in a narrow column the unit shrinks, the number stays whole.
  */
-import Link from "next/link";
 import { shareText, type ChannelTable, type MarginRow } from "@/canvas/kernels/budget/channel-table";
+import { besideTheEditor, methodsHref } from "@/components/methods/methods-href";
 import type { Quantity } from "@/physics/result";
 import { quantityParts, quantityText } from "./quantity-text";
 
-/** A number with its unit, linked to its formula on the Methods page. */
+/** A number with its unit, linked to its formula on the Methods page, opened beside the editor with the number echoed. */
 export function QuantityLink({ quantity, testId, label }: { quantity: Quantity; testId: string; label: string }) {
   const { number, unit } = quantityParts(quantity);
   return (
-    <Link
-      href={`/methods#${quantity.sourceKey}`}
+    <a
+      href={methodsHref(quantity.sourceKey, { label, value: quantityText(quantity) })}
+      {...besideTheEditor}
       className="tabular whitespace-nowrap text-ink underline decoration-rule-strong underline-offset-4 hover:decoration-ink"
       data-testid={testId}
       data-value={quantity.value ?? ""}
-      aria-label={`${label}: ${quantityText(quantity)} (formula on the Methods page)`}
+      aria-label={`${label}: ${quantityText(quantity)} (formula on the Methods page, in a new tab)`}
     >
       {number}
       {/* A real space, so the visible text reads as the accessible name does ("3.2 ms"). */}
@@ -30,7 +31,7 @@ export function QuantityLink({ quantity, testId, label }: { quantity: Quantity; 
           <span className="text-[0.8em]">{unit}</span>
         </>
       )}
-    </Link>
+    </a>
   );
 }
 
@@ -147,9 +148,9 @@ export function MarginList({ margins }: { margins: MarginRow[] }) {
     <div className="mt-4" data-testid="budget-margins">
       <h3 className="mb-1 text-xs font-semibold text-ink-soft">
         Margin: where each environmental channel would equal the body&apos;s own fields{" "}
-        <Link href="/methods#environment-margin" className="font-normal underline decoration-rule-strong underline-offset-4">
+        <a href="/methods#environment-margin" {...besideTheEditor} className="font-normal underline decoration-rule-strong underline-offset-4">
           (method)
-        </Link>
+        </a>
       </h3>
       <ul className="space-y-1 text-xs sm:text-sm">
         {margins.map((margin) => (

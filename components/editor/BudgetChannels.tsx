@@ -7,6 +7,8 @@
  * never break across lines: in a narrow column the unit shrinks, the number stays whole.
  */
 import { shareText, type ChannelTable, type MarginRow } from "@/canvas/kernels/budget/channel-table";
+import { useEditorStore } from "@/canvas/EditorProvider";
+import { figureCaption } from "@/canvas/export/figure-caption";
 import { besideTheEditor, methodsHref } from "@/components/methods/methods-href";
 import type { Quantity } from "@/physics/result";
 import { quantityParts, quantityText } from "./quantity-text";
@@ -14,9 +16,15 @@ import { quantityParts, quantityText } from "./quantity-text";
 /** A number with its unit, linked to its formula on the Methods page, opened beside the editor with the number echoed. */
 export function QuantityLink({ quantity, testId, label }: { quantity: Quantity; testId: string; label: string }) {
   const { number, unit } = quantityParts(quantity);
+  const store = useEditorStore();
+  const echo = { label, value: quantityText(quantity) };
   return (
     <a
-      href={methodsHref(quantity.sourceKey, { label, value: quantityText(quantity) })}
+      href={methodsHref(quantity.sourceKey, echo)}
+      // The inputs are read when the link is followed, not on every edit: a drag does not re-render the Budget's links.
+      onClick={(event) => {
+        event.currentTarget.href = methodsHref(quantity.sourceKey, { ...echo, inputs: figureCaption(store.getState().document) });
+      }}
       {...besideTheEditor}
       className="tabular whitespace-nowrap text-ink underline decoration-rule-strong underline-offset-4 hover:decoration-ink"
       data-testid={testId}

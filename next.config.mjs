@@ -32,6 +32,9 @@ export const everyResponseHeaders = {
 const nextConfig = {
   serverExternalPackages: ["pg", "nodemailer", "bcryptjs", "rate-limiter-flexible", "esbuild"],
   poweredByHeader: false,
+  // Source maps for the browser's scripts only when asked for (BRANCHLINE_BROWSER_SOURCE_MAPS=1 at build time): the
+  // editor's browser bench (tests/bench/editor-browser.ts, BRANCH_PROFILE=1) reads them to name where a drag's time goes.
+  productionBrowserSourceMaps: process.env.BRANCHLINE_BROWSER_SOURCE_MAPS === "1",
   async headers() {
     return [...frameHeaderRules, everyResponseHeaders];
   },

@@ -17,6 +17,9 @@ export const apiPaths = {
   adminUsers: "/api/admin/users",
   adminUser: (userId: string) => `/api/admin/users/${at(userId)}`,
   compute: "/api/compute",
+  sweeps: "/api/sweeps",
+  maps: "/api/maps",
+  map: (mapId: string) => `/api/maps/${at(mapId)}`,
 
   projects: "/api/projects",
   project,
@@ -36,5 +39,6 @@ export const apiPaths = {
   shareLink: (projectId: string, scenarioId: string, linkId: string) => `${scenario(projectId, scenarioId)}/share-links/${at(linkId)}`,
   sequencerProfile: (projectId: string, scenarioId: string) => `${scenario(projectId, scenarioId)}/sequencer-profile`,
   attachments: (projectId: string, scenarioId: string) => `${scenario(projectId, scenarioId)}/attachments`,
+  scenarioMaps: (projectId: string, scenarioId: string) => `${scenario(projectId, scenarioId)}/maps`,
   attachment: (projectId: string, scenarioId: string, attachmentId: string) => `${scenario(projectId, scenarioId)}/attachments/${at(attachmentId)}`,
 } as const;

@@ -1,6 +1,7 @@
 /**
- * The sweep options the command-line tools share (`figure --what sweep`, `branchline sweep`): --vary, --from, --to
- * read into a sweep request for a document, with the editor's default range where --from or --to is left out.
+ * The sweep options the command-line tools share (`figure --what sweep`, `branchline sweep`, and each axis of
+ * `branchline map`): a parameter and its range read into SI values for a document, with the editor's default range
+ * where an end is left out.
  * Problems are added to `issues` as "--option: message" lines; the caller refuses them together.
  */
 import { defaultSweepRange } from "../canvas/kernels/sweep-range";
@@ -15,26 +16,49 @@ export interface SweepOptionValues {
   to?: string;
 }
 
-export function sweepBounds(document: ScenarioDocument, values: SweepOptionValues, issues: InputIssue[]): { parameter: SweepParameter; fromValue: number; toValue: number } {
-  const asked = values.vary ?? (document.protocol.kind === "segments" ? "recombination-time" : "lab-distance");
+/** The option names one parameter's range is read from (a sweep's --vary/--from/--to, a map axis' --x/--x-from/--x-to). */
+export interface RangeOptionNames {
+  vary: string;
+  from: string;
+  to: string;
+}
+
+/**
+ * A parameter and its range from the options named in `names`, with the editor's default range where from or to
+ * is left out; `fallback` is the parameter when none is named.
+ */
+export function parameterBounds(
+  document: ScenarioDocument,
+  values: SweepOptionValues,
+  names: RangeOptionNames,
+  fallback: SweepParameter,
+  issues: InputIssue[],
+): { parameter: SweepParameter; fromValue: number; toValue: number } {
+  const asked = values.vary ?? fallback;
   const known = (SWEEP_PARAMETERS as readonly string[]).includes(asked);
-  if (!known) issues.push({ path: "--vary", message: `must be ${SWEEP_PARAMETERS.join(", ")}; got "${asked}"` });
+  if (!known) issues.push({ path: names.vary, message: `must be ${SWEEP_PARAMETERS.join(", ")}; got "${asked}"` });
   const parameter = known ? (asked as SweepParameter) : SWEEP_PARAMETERS[0];
   const range = defaultSweepRange(document, parameter);
   const dimension = parameterDimension(parameter);
-  const bound = (name: "from" | "to", fallback: number | undefined): number => {
+  const problemsBefore = issues.length;
+  const bound = (name: "from" | "to", fallbackValue: number | undefined): number => {
     const text = values[name];
     if (text === undefined) {
-      if (fallback === undefined) issues.push({ path: `--${name}`, message: "this scenario has no default range for the sweep: give --from and --to" });
-      return fallback ?? NaN;
+      if (fallbackValue === undefined) issues.push({ path: names[name], message: `this scenario has no default range for ${parameter}: give ${names.from} and ${names.to}` });
+      return fallbackValue ?? NaN;
     }
     const value = parseQuantity(text, dimension);
     if (value.ok) return value.valueSI;
-    issues.push({ path: `--${name}`, message: value.message });
+    issues.push({ path: names[name], message: value.message });
     return NaN;
   };
   const fromValue = bound("from", range?.from);
   const toValue = bound("to", range?.to);
-  if (issues.length === 0 && !(toValue > fromValue)) issues.push({ path: "--to", message: "must be above --from" });
+  if (issues.length === problemsBefore && !(toValue > fromValue)) issues.push({ path: names.to, message: `must be above ${names.from}` });
   return { parameter, fromValue, toValue };
+}
+
+export function sweepBounds(document: ScenarioDocument, values: SweepOptionValues, issues: InputIssue[]): { parameter: SweepParameter; fromValue: number; toValue: number } {
+  const fallback = document.protocol.kind === "segments" ? "recombination-time" : "lab-distance";
+  return parameterBounds(document, values, { vary: "--vary", from: "--from", to: "--to" }, fallback, issues);
 }

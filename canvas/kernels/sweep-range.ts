@@ -5,7 +5,7 @@
 import { makeBackground } from "@/physics/backgrounds";
 import { c } from "@/physics/constants";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import type { SweepParameter } from "@/physics/sweeps";
+import { ENVIRONMENT_SWEEP_PARAMETERS, type SweepParameter } from "@/physics/sweeps";
 
 /** The value the parameter has now, SI; null where the document has none (no horizon to be distant from). */
 export function currentSweepValue(document: ScenarioDocument, parameter: SweepParameter): number | null {
@@ -64,4 +64,16 @@ export function defaultSweepRange(document: ScenarioDocument, parameter: SweepPa
     default:
       return { from: current / DECADES, to: current * DECADES };
   }
+}
+
+/**
+ * The parameters a map of this document can vary, in the order a map offers them: the segment times, a horizon
+ * distance, and the environment's parameters it has a part for. The Map panel and `branchline map` share it.
+ */
+export function mapParametersFor(document: ScenarioDocument): SweepParameter[] {
+  return [
+    ...(document.protocol.kind === "segments" ? (["recombination-time", "hold-time"] as const) : []),
+    ...(document.background.kind === "minkowski" ? [] : (["lab-distance"] as const)),
+    ...ENVIRONMENT_SWEEP_PARAMETERS.filter((p) => defaultSweepRange(document, p) !== null),
+  ];
 }

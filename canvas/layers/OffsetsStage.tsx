@@ -47,8 +47,16 @@ export default function OffsetsStage({ width, height }: { width: number; height:
   const selectionLineId = useId();
 
   // The handles' positions change on every frame of a drag: written straight onto the element, not re-rendered.
+  // Written only when they moved (the selector answers the same array then): a Budget answer leaves the element alone.
   useEffect(() => {
-    const write = () => container.current?.setAttribute("data-handles", handlesAttribute(store.getState()));
+    let written: unknown = null;
+    const write = () => {
+      const state = store.getState();
+      const handles = state.offsets.handles(state);
+      if (handles === written) return;
+      written = handles;
+      container.current?.setAttribute("data-handles", handlesAttribute(state));
+    };
     write();
     return store.subscribe(write);
   }, [store, readable]);

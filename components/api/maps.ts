@@ -2,6 +2,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { ParameterMapDto, ParameterMapSummary } from "@/contracts/dto";
 import type { z } from "zod";
 import type { mapCreateSchema } from "@/contracts/requests";
+import { apiPaths } from "@/contracts/api-paths";
 import { apiFetch } from "./client";
 
 export type { ParameterMapDto, ParameterMapSummary };
@@ -20,7 +21,7 @@ const isActive = (status: ParameterMapSummary["status"] | undefined) => status =
 export function useScenarioMaps(projectId: string, scenarioId: string) {
   return useQuery({
     queryKey: mapKeys.ofScenario(projectId, scenarioId),
-    queryFn: () => apiFetch<{ maps: ParameterMapSummary[] }>(`/api/projects/${encodeURIComponent(projectId)}/scenarios/${encodeURIComponent(scenarioId)}/maps`).then((r) => r.maps),
+    queryFn: () => apiFetch<{ maps: ParameterMapSummary[] }>(apiPaths.scenarioMaps(projectId, scenarioId)).then((r) => r.maps),
   });
 }
 
@@ -28,7 +29,7 @@ export function useScenarioMaps(projectId: string, scenarioId: string) {
 export function useParameterMap(mapId: string | null) {
   return useQuery({
     queryKey: mapKeys.one(mapId ?? ""),
-    queryFn: () => apiFetch<{ map: ParameterMapDto }>(`/api/maps/${encodeURIComponent(mapId!)}`).then((r) => r.map),
+    queryFn: () => apiFetch<{ map: ParameterMapDto }>(apiPaths.map(mapId!)).then((r) => r.map),
     enabled: mapId !== null,
     refetchInterval: (query) => (isActive(query.state.data?.status) ? POLL_MS : false),
   });
@@ -37,7 +38,7 @@ export function useParameterMap(mapId: string | null) {
 export function useStartMap(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: MapCreateBody) => apiFetch<{ map: ParameterMapDto }>("/api/maps", { method: "POST", json: body }).then((r) => r.map),
+    mutationFn: (body: MapCreateBody) => apiFetch<{ map: ParameterMapDto }>(apiPaths.maps, { method: "POST", json: body }).then((r) => r.map),
     onSuccess: (map) => {
       queryClient.setQueryData(mapKeys.one(map.id), map);
       void queryClient.invalidateQueries({ queryKey: mapKeys.ofScenario(projectId, scenarioId) });
@@ -48,7 +49,7 @@ export function useStartMap(projectId: string, scenarioId: string) {
 export function useCancelMap(projectId: string, scenarioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (mapId: string) => apiFetch<{ map: ParameterMapSummary } | undefined>(`/api/maps/${encodeURIComponent(mapId)}`, { method: "DELETE" }),
+    mutationFn: (mapId: string) => apiFetch<{ map: ParameterMapSummary } | undefined>(apiPaths.map(mapId), { method: "DELETE" }),
     onSuccess: (_answer, mapId) => {
       void queryClient.invalidateQueries({ queryKey: mapKeys.one(mapId) });
       void queryClient.invalidateQueries({ queryKey: mapKeys.ofScenario(projectId, scenarioId) });

@@ -14,7 +14,7 @@ import { DEFAULT_STANDALONE, exportPalette } from "@/canvas/export/export-figure
 import { diagramSvg } from "@/canvas/export/diagram-svg";
 import { mapFigureDrawing, mapPointAt } from "@/canvas/export/map-figure";
 import { measureWith, renderFigureFile, type FigureFileRequest } from "@/canvas/export/render-figure";
-import { defaultSweepRange } from "@/canvas/kernels/sweep-range";
+import { defaultSweepRange, mapParametersFor } from "@/canvas/kernels/sweep-range";
 import { messageOf } from "@/components/api/client";
 import { useCancelMap, useParameterMap, useScenarioMaps, useStartMap, type ParameterMapDto } from "@/components/api/maps";
 import { browserFigureToolkit } from "@/components/export/browser-figure-toolkit";
@@ -26,7 +26,7 @@ import { buttonStyles } from "@/components/ui/styles";
 import { MAP_QUANTITIES, MAX_MAP_SIDE, type AxisScale, type MapQuantity } from "@/physics/maps/axes";
 import { documentAt } from "@/physics/maps/point";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
-import { ENVIRONMENT_SWEEP_PARAMETERS, type SweepParameter } from "@/physics/sweeps/vary";
+import type { SweepParameter } from "@/physics/sweeps/vary";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
@@ -44,15 +44,6 @@ interface AxisDraft {
 
 const DEFAULT_POINTS = 24;
 
-/** What the document can vary: segment times, a horizon distance, and the environment's parameters it has a part for. */
-function availableParameters(document: ScenarioDocument): SweepParameter[] {
-  return [
-    ...(document.protocol.kind === "segments" ? (["recombination-time", "hold-time"] as const) : []),
-    ...(document.background.kind === "minkowski" ? [] : (["lab-distance"] as const)),
-    ...ENVIRONMENT_SWEEP_PARAMETERS.filter((p) => defaultSweepRange(document, p) !== null),
-  ];
-}
-
 function draftFor(document: ScenarioDocument, parameter: SweepParameter): AxisDraft {
   const range = defaultSweepRange(document, parameter) ?? { from: 1e-3, to: 1 };
   return { parameter, from: range.from, to: range.to, points: DEFAULT_POINTS, scale: "log" };
@@ -65,7 +56,7 @@ export function MapPanel({ projectId, scenarioId, title }: { projectId: string; 
 
 const MapView = memo(function MapView({ projectId, scenarioId, title, document }: { projectId: string; scenarioId: string; title: string; document: ScenarioDocument }) {
   const readOnly = useEditor((s) => s.readOnly);
-  const available = availableParameters(document);
+  const available = mapParametersFor(document);
   const [x, setX] = useState<AxisDraft | null>(null);
   const [y, setY] = useState<AxisDraft | null>(null);
   const [quantity, setQuantity] = useState<MapQuantity>("total-quanta");

@@ -13,7 +13,7 @@ export const EXIT = {
   stale: 3,
   /** The server refused the caller: no or a bad token (401), not allowed (403), not found or not visible (404). */
   refused: 4,
-  /** The server could not answer now: unreachable, busy (503), rate-limited (429) or failing (5xx); try again later. */
+  /** The server could not answer now: unreachable, busy (503), rate-limited (429) or failing (5xx), or a remote map failed or was cancelled there; try again later. */
   unavailable: 5,
 } as const;
 
@@ -26,7 +26,8 @@ export const EXIT_CODE_HELP = [
   "  2  bad input: usage, an option, or a document that does not validate or cannot be computed",
   "  3  push refused as stale: a scenario changed on the server since it was pulled (nothing was overwritten)",
   "  4  the server refused: no or a bad BRANCHLINE_TOKEN (401), not allowed (403), not found (404)",
-  "  5  the server could not answer now: unreachable, busy, rate-limited or failing; try again later",
+  "  5  the server could not answer now: unreachable, busy, rate-limited or failing, or a remote map failed or was",
+  "     cancelled on the server; try again later",
 ];
 
 export class CommandFailure extends Error {

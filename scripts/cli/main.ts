@@ -6,6 +6,7 @@
 import { figureCommand } from "../figure-command";
 import { InputRefusal } from "../scenario-input";
 import { computeCommand, computeUsage } from "./commands/compute";
+import { mapCommand, mapUsage } from "./commands/map";
 import { pullCommand, pullUsage, pushCommand, pushUsage } from "./commands/project-sync";
 import { sweepCommand, sweepUsage } from "./commands/sweep";
 import { CommandFailure, EXIT, EXIT_CODE_HELP, type ExitCode } from "./failure";
@@ -13,7 +14,8 @@ import { CommandFailure, EXIT, EXIT_CODE_HELP, type ExitCode } from "./failure";
 interface Command {
   summary: string;
   usage: string[];
-  run(argv: string[]): Promise<string | Uint8Array> | string | Uint8Array;
+  /** Data to standard output as its answer; messages to `io.stderr`. */
+  run(argv: string[], io: Io): Promise<string | Uint8Array> | string | Uint8Array;
 }
 
 const figureUsage = [
@@ -23,13 +25,11 @@ const figureUsage = [
   "  Draws the scenario's Diagram or a sweep's chart as the editor exports it and writes the file to standard output.",
 ];
 
-/**
- * Every command. The parameter maps (two parameters on a grid, computed here or by the server's workers through
- * POST /api/maps) join this table as `map` with their own module under commands/.
- */
+/** Every command, each in its own module under commands/ (figure's in scripts/figure-command.ts, shared with npm run figure). */
 export const commands: Record<string, Command> = {
   compute: { summary: "compute a scenario document here (JSON, CSV or a table)", usage: computeUsage, run: computeCommand },
   sweep: { summary: "sweep one parameter, here or on the server (--remote)", usage: sweepUsage, run: sweepCommand },
+  map: { summary: "map one quantity over two parameters, here or by the server's workers (--remote)", usage: mapUsage, run: (argv, io) => mapCommand(argv, io.stderr) },
   figure: { summary: "draw the Diagram or a sweep's chart as SVG, PNG or PDF", usage: figureUsage, run: (argv) => figureCommand(argv) },
   pull: { summary: "write a project's scenarios into a folder, recording their versions", usage: pullUsage, run: pullCommand },
   push: { summary: "send changed scenario files back as new versions (stale ones refused)", usage: pushUsage, run: pushCommand },
@@ -74,7 +74,7 @@ export async function main(argv: string[], io: Io = process): Promise<ExitCode> 
     return EXIT.ok;
   }
   try {
-    io.stdout.write(await command.run(rest));
+    io.stdout.write(await command.run(rest, io));
     return EXIT.ok;
   } catch (error) {
     if (error instanceof InputRefusal) {

@@ -43,6 +43,7 @@
  * slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */
 import { chromium, type CDPSession, type Page } from "@playwright/test";
+import { SourceMapConsumer } from "source-map-js";
 
 const BASE_URL = (process.env.BRANCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
 const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner" };
@@ -109,6 +110,12 @@ async function benchCopyOfHorizonScenario(page: Page): Promise<{ path: string; t
   throw new Error("no Schwarzschild scenario with a segment protocol found: is the demo data seeded (npm run db:seed)?");
 }
 
+/**
+ * The Offsets panel; builds from before its rename (schema version 2 and older) call it "lab-view", so the same bench
+ * can measure a build from before a change and one from after it.
+ */
+const offsetsPanel = (page: Page) => page.locator('[data-testid="offsets"], [data-testid="lab-view"]').first();
+
 async function budgetCurrent(page: Page): Promise<void> {
   await page.waitForSelector('[data-testid="budget"][data-state="current"]', { timeout: 30_000 });
 }
@@ -159,7 +166,7 @@ async function stopRecording(page: Page) {
  * on a clock of its own (waiting for each move's answer before the next would let a busy page slow the pointer down).
  */
 async function dragRecombination(page: Page): Promise<number> {
-  const lab = page.getByTestId("offsets");
+  const lab = offsetsPanel(page);
   await lab.scrollIntoViewIfNeeded();
   const handles = JSON.parse((await lab.getAttribute("data-handles")) ?? "[]") as { id: string; x: number }[];
   const handle = handles.find((h) => h.id === "recombination-end");
@@ -185,25 +192,111 @@ async function dragRecombination(page: Page): Promise<number> {
 
 interface ProfileNode {
   id: number;
-  callFrame: { functionName: string; url: string; lineNumber: number };
+  children?: number[];
+  callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
   hitCount?: number;
 }
 
-/** The functions with the most samples of a CPU profile (self time), with their share; "(program)" is the browser's own work. */
-function topSelfTime(profile: { nodes: ProfileNode[] }, count = 12): string[] {
-  const byFunction = new Map<string, number>();
+/** Where a profiled function is in our sources: its name and file as the build's source map (when served) says. */
+type SourceOf = (frame: ProfileNode["callFrame"]) => { name: string; file: string } | null;
+
+/**
+ * Reads the source maps of the scripts in a profile (served beside them when the build was made with
+ * BRANCHLINE_BROWSER_SOURCE_MAPS=1); without them every function keeps its minified name.
+ */
+async function sourceMapsOf(profile: { nodes: ProfileNode[] }): Promise<SourceOf> {
+  const urls = [...new Set(profile.nodes.map((n) => n.callFrame.url).filter((url) => url.startsWith("http")))];
+  const consumers = new Map<string, SourceMapConsumer>();
+  for (const url of urls) {
+    // The script names its map in its last comment (a bundler may give the map a name of its own).
+    const script = await fetch(url).then((r) => (r.ok ? r.text() : ""), () => "");
+    const mapName = /\/\/# sourceMappingURL=(\S+)\s*$/.exec(script)?.[1];
+    if (!mapName) continue;
+    const answer = await fetch(new URL(mapName, url)).catch(() => null);
+    if (answer?.ok) consumers.set(url, new SourceMapConsumer(await answer.json()));
+  }
+  return (frame) => {
+    const consumer = consumers.get(frame.url);
+    if (!consumer) return null;
+    const original = consumer.originalPositionFor({ line: frame.lineNumber + 1, column: frame.columnNumber });
+    if (!original.source) return null;
+    const file = original.source.replace(/^.*?(node_modules\/(?:@[^/]+\/)?[^/]+|\/(?=app|canvas|components|contracts|physics|lib)\/?)/, "$1");
+    return { name: original.name ?? frame.functionName ?? "(anonymous)", file: `${file}:${original.line}` };
+  };
+}
+
+/** The package (node_modules/…) or our folder a source file is in, for the per-module sums. */
+function moduleOf(file: string): string {
+  const pkg = /node_modules\/((?:@[^/]+\/)?[^/]+)/.exec(file);
+  if (pkg) return pkg[1];
+  return file.replace(/:\d+$/, "");
+}
+
+/** Shares of a profile's samples, summed by a key, the largest first. */
+function shares(profile: { nodes: ProfileNode[] }, keyOf: (node: ProfileNode) => string, count: number): string[] {
+  const byKey = new Map<string, number>();
   let total = 0;
   for (const node of profile.nodes) {
     const hits = node.hitCount ?? 0;
     total += hits;
-    const file = node.callFrame.url.split("/").pop() || "";
-    const key = `${node.callFrame.functionName || "(anonymous)"}${file ? ` ${file}:${node.callFrame.lineNumber + 1}` : ""}`;
-    byFunction.set(key, (byFunction.get(key) ?? 0) + hits);
+    const key = keyOf(node);
+    byKey.set(key, (byKey.get(key) ?? 0) + hits);
   }
-  return [...byFunction.entries()]
+  return [...byKey.entries()]
     .sort((a, b) => b[1] - a[1])
     .slice(0, count)
     .map(([key, hits]) => `  ${((100 * hits) / Math.max(1, total)).toFixed(1).padStart(5)} %  ${key}`);
+}
+
+/** Shares of a profile's samples by the functions on the stack (each counted once per sample), the largest first. */
+function totalShares(profile: { nodes: ProfileNode[] }, keyOf: (node: ProfileNode) => string | null, count: number): string[] {
+  const parent = new Map<number, ProfileNode>();
+  for (const node of profile.nodes) for (const child of node.children ?? []) parent.set(child, node);
+  const byKey = new Map<string, number>();
+  let total = 0;
+  for (const node of profile.nodes) {
+    const hits = node.hitCount ?? 0;
+    total += hits;
+    if (!hits) continue;
+    const seen = new Set<string>();
+    for (let at: ProfileNode | undefined = node; at; at = parent.get(at.id)) {
+      const key = keyOf(at);
+      if (key && !seen.has(key)) seen.add(key);
+    }
+    for (const key of seen) byKey.set(key, (byKey.get(key) ?? 0) + hits);
+  }
+  return [...byKey.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, count)
+    .map(([key, hits]) => `  ${((100 * hits) / Math.max(1, total)).toFixed(1).padStart(5)} %  ${key}`);
+}
+
+/**
+ * The functions with the most samples of a CPU profile (self time), with their share, then the same summed by
+ * package or source file; "(program)" is the browser's own work outside scripts.
+ */
+async function topSelfTime(profile: { nodes: ProfileNode[] }, count = 14): Promise<string[]> {
+  const sourceOf = await sourceMapsOf(profile);
+  const functionKey = (node: ProfileNode) => {
+    const mapped = sourceOf(node.callFrame);
+    if (mapped) return `${mapped.name} ${mapped.file}`;
+    const file = node.callFrame.url.split("/").pop() || "";
+    return `${node.callFrame.functionName || "(anonymous)"}${file ? ` ${file}:${node.callFrame.lineNumber + 1}` : ""}`;
+  };
+  const moduleKey = (node: ProfileNode) => {
+    const mapped = sourceOf(node.callFrame);
+    return mapped ? moduleOf(mapped.file) : node.callFrame.url ? "(unmapped script)" : node.callFrame.functionName || "(anonymous)";
+  };
+  return [
+    ...shares(profile, functionKey, count),
+    "  summed by package or source file:",
+    ...shares(profile, moduleKey, count),
+    "  total time (with all they call) of our own functions:",
+    ...totalShares(profile, (node) => {
+      const mapped = sourceOf(node.callFrame);
+      return mapped && !mapped.file.includes("node_modules") ? `${mapped.name} ${mapped.file}` : null;
+    }, count),
+  ];
 }
 
 /** The page's main-thread totals (CDP Performance metrics), in milliseconds: all tasks, script, style and layout. */
@@ -218,6 +311,75 @@ async function mainThreadTotals(cdp: CDPSession): Promise<Record<"task" | "scrip
   };
 }
 
+interface TraceEvent {
+  name: string;
+  ph: string;
+  pid: number;
+  tid: number;
+  ts: number;
+  dur?: number;
+  args?: { name?: string; data?: { type?: string; functionName?: string; url?: string } };
+}
+
+/** A trace event's own name, with the DOM event's type or the called script where the trace says it. */
+function traceKey(event: TraceEvent): string {
+  const data = event.args?.data;
+  if (data?.type) return `${event.name} ${data.type}`;
+  if (event.name === "FunctionCall" && data?.functionName) return `FunctionCall ${data.functionName} ${(data.url ?? "").split("/").pop()}`;
+  return event.name;
+}
+
+/**
+ * The renderer main thread's time during the drag by trace event, per frame: first each task's parts (the events
+ * right under a task, with all they contain: a pointer move's handler, an animation frame's callbacks, a worker's
+ * answer, the browser's style, layout, paint and commit), then self time (an event's duration less that of the
+ * events nested in it). A CPU profile lumps the browser's own work together as "(program)"; the trace names it.
+ */
+function mainThreadByTraceEvent(trace: { traceEvents: TraceEvent[] }, frames: number, count = 14): string[] {
+  const events = trace.traceEvents;
+  const main = events.find((e) => e.ph === "M" && e.name === "thread_name" && e.args?.name === "CrRendererMain");
+  if (!main) return ["  (no renderer main thread in the trace)"];
+  const complete = events
+    .filter((e) => e.pid === main.pid && e.tid === main.tid && e.ph === "X" && typeof e.dur === "number")
+    .sort((a, b) => a.ts - b.ts || b.dur! - a.dur!);
+  const self = new Map<string, number>();
+  const parts = new Map<string, number>();
+  const inclusive = new Map<string, number>();
+  const add = (map: Map<string, number>, key: string, micros: number) => map.set(key, (map.get(key) ?? 0) + micros);
+  const open: { event: TraceEvent; end: number; nested: number }[] = [];
+  const isTask = (e: TraceEvent) => e.name === "ThreadControllerImpl::RunTask" || e.name === "RunTask";
+  const close = (until: number) => {
+    while (open.length && open[open.length - 1].end <= until) {
+      const done = open.pop()!;
+      if (!isTask(done.event)) add(self, traceKey(done.event), done.event.dur! - done.nested);
+      if (open.length) open[open.length - 1].nested += done.event.dur!;
+    }
+  };
+  for (const event of complete) {
+    close(event.ts);
+    const parent = open[open.length - 1];
+    if (!isTask(event) && (!parent || open.every((o) => isTask(o.event)))) add(parts, traceKey(event), event.dur!);
+    if (!isTask(event) && !open.some((o) => traceKey(o.event) === traceKey(event))) add(inclusive, traceKey(event), event.dur!);
+    open.push({ event, end: event.ts + event.dur!, nested: 0 });
+  }
+  close(Infinity);
+  const listed = (map: Map<string, number>, length = count) =>
+    [...map.entries()]
+      .sort((a, b) => b[1] - a[1])
+      .slice(0, length)
+      .map(([name, micros]) => `    ${ms(micros / 1000 / Math.max(1, frames)).padStart(8)} a frame  ${name}`);
+  return [
+    "  a task's parts, all they contain:",
+    ...listed(parts),
+    "  each kind of event, all it contains (nested kinds counted in each):",
+    ...listed(inclusive, 2 * count),
+    "  self time:",
+    ...listed(self),
+  ];
+}
+
+const TRACE_CATEGORIES = ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink", "cc", "v8.execute", "toplevel"];
+
 /** One recorded drag: its figures as printed lines, and whether the frame-time target was met. */
 async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<{ lines: string[]; met: boolean }> {
   await budgetCurrent(page);
@@ -228,14 +390,22 @@ async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<
     await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
     await cdp.send("Profiler.start");
   }
+  const tracing = Boolean(process.env.BRANCH_TRACE);
+  if (tracing) await page.context().browser()!.startTracing(page, { categories: TRACE_CATEGORIES });
   const before = await mainThreadTotals(cdp);
   const started = performance.now();
   const moves = await dragRecombination(page);
   const wall = performance.now() - started;
   const after = await mainThreadTotals(cdp);
+  // The frames of the drag itself: the recorder runs on while the Budget catches up, and those calm frames would
+  // dilute both the frame times and the work per frame.
+  const framesInDrag = (await page.evaluate("window.__bench.deltas.length")) as number;
   const profile = profiling ? ((await cdp.send("Profiler.stop")) as { profile: { nodes: ProfileNode[] } }).profile : null;
+  const trace = tracing ? (JSON.parse((await page.context().browser()!.stopTracing()).toString("utf8")) as { traceEvents: TraceEvent[] }) : null;
   await budgetCurrent(page);
-  const { deltas, longTasks, moves: received, roundTrips } = await stopRecording(page);
+  const recorded = await stopRecording(page);
+  const { longTasks, moves: received, roundTrips } = recorded;
+  const deltas = recorded.deltas.slice(0, framesInDrag);
 
   const dropped = deltas.filter((d) => d > 1.5 * FRAME_PERIOD_MS).length;
   const p95 = quantile(deltas, 0.95);
@@ -253,7 +423,8 @@ async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<
     `  budget worker round trip (${ROUNDTRIP_MEASURE}), ${roundTrips.length} recomputes: ${roundTrips.length ? `p50 ${ms(quantile(roundTrips, 0.5))}, p95 ${ms(quantile(roundTrips, 0.95))}, max ${ms(Math.max(...roundTrips))}` : "none recorded"}`,
     `  target frame time p95 ≤ 16 ms (one ${ms(FRAME_PERIOD_MS)} period + 1 ms jitter): ${met ? "met" : "NOT met"}`,
   ];
-  if (profile) lines.push("  main thread during the drag, by self time:", ...topSelfTime(profile));
+  if (profile) lines.push("  main thread during the drag, by self time:", ...(await topSelfTime(profile)));
+  if (trace) lines.push("  main thread during the drag, by trace event:", ...mainThreadByTraceEvent(trace, deltas.length));
   return { lines, met };
 }
 
@@ -266,7 +437,7 @@ async function showSweep(page: Page): Promise<void> {
 /** Both drags on the scenario at `path`, printed. */
 async function benchScenario(page: Page, scenario: { path: string; title: string }, slowdown: number): Promise<void> {
   await page.goto(`${BASE_URL}${scenario.path}`);
-  await page.getByTestId("offsets").waitFor();
+  await offsetsPanel(page).waitFor();
   const cdp = await page.context().newCDPSession(page);
   await cdp.send("Performance.enable");
   if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });

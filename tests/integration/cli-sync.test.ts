@@ -1,5 +1,5 @@
 /**
- * `branchline pull` / `push` and `sweep --remote` over real HTTP with a personal API token, against the route
+ * `branchline pull` / `push`, `sweep --remote` and `map --remote` (with a real map worker) over real HTTP with a personal API token, against the route
  * handlers on the real PostgreSQL: a small HTTP server in the test hands each request to its route module (the
  * same handlers `next start` serves), and the command line runs in-process with BRANCHLINE_URL pointing at it.
  */
@@ -16,9 +16,15 @@ import { updateScenario } from "@/db/scenarios";
 import * as scenarioRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/route";
 import * as scenariosRoute from "@/app/api/projects/[projectId]/scenarios/route";
 import * as sweepsRoute from "@/app/api/sweeps/route";
+import * as mapRoute from "@/app/api/maps/[mapId]/route";
+import * as mapsRoute from "@/app/api/maps/route";
+import * as scenarioMapsRoute from "@/app/api/projects/[projectId]/scenarios/[scenarioId]/maps/route";
+import { stopMapSender } from "@/lib/map-queue";
 import { EXIT } from "@/scripts/cli/failure";
 import { main } from "@/scripts/cli/main";
 import { projectFixture, type ProjectFixture } from "./fixtures";
+import { call } from "./harness";
+import { ready, startWorker, stopWorkers } from "./map-workers";
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
@@ -27,6 +33,8 @@ const routes: { pattern: RegExp; names: string[]; module: Record<string, unknown
   { pattern: /^\/api\/projects\/([^/]+)\/scenarios\/([^/]+)$/, names: ["projectId", "scenarioId"], module: scenarioRoute },
   { pattern: /^\/api\/projects\/([^/]+)\/scenarios$/, names: ["projectId"], module: scenariosRoute },
   { pattern: /^\/api\/sweeps$/, names: [], module: sweepsRoute },
+  { pattern: /^\/api\/maps$/, names: [], module: mapsRoute },
+  { pattern: /^\/api\/maps\/([^/]+)$/, names: ["mapId"], module: mapRoute },
 ];
 
 let server: Server;
@@ -55,7 +63,11 @@ beforeAll(async () => {
   url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 });
 
-afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
+afterAll(async () => {
+  await stopWorkers();
+  await stopMapSender();
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+}, 60_000);
 
 async function cli(argv: string[], token: string) {
   let stdout = "";
@@ -156,4 +168,30 @@ describe("branchline pull and push over HTTP", () => {
     const local = await cli(args, token);
     expect(JSON.parse(remote.stdout)).toEqual(JSON.parse(local.stdout));
   });
+
+  it("maps on the server with --remote through the queue and a real worker, as the local map does; --scenario keeps the map with the saved scenario", async () => {
+    const f = await projectFixture();
+    const worker = startWorker();
+    await ready(worker);
+    const token = await editorToken(f, "read-write");
+    const example = path.resolve(__dirname, "../../examples/minkowski.json");
+    const axes = ["--x", "recombination-time", "--x-from", "1 ms", "--x-to", "10 ms", "--x-points", "3", "--y", "hold-time", "--y-from", "10 ms", "--y-to", "100 ms", "--y-points", "2"];
+    const remote = await cli(["map", example, ...axes, "--remote"], token);
+    expect(remote.code, remote.stderr).toBe(EXIT.ok);
+    expect(remote.stderr).toMatch(/map \S+ queued at http:\/\/127\.0\.0\.1:\d+\/api\/maps\//);
+    const local = await cli(["map", example, ...axes], token);
+    expect(JSON.parse(remote.stdout)).toEqual(JSON.parse(local.stdout));
+
+    const kept = await cli(["map", "--remote", "--scenario", `${f.projectId}/${f.scenarioId}`, ...axes, "--format", "csv"], token);
+    expect(kept.code, kept.stderr).toBe(EXIT.ok);
+    const id = /^# map: (\S+)/m.exec(kept.stdout)?.[1];
+    expect(id).toBeTruthy();
+    const listed = await call(scenarioMapsRoute.GET, "GET", `/api/projects/${f.projectId}/scenarios/${f.scenarioId}/maps`, { as: f.users.editor, params: { projectId: f.projectId, scenarioId: f.scenarioId } });
+    expect(listed.body.maps.map((m: { id: string }) => m.id)).toContain(id);
+    expect(kept.stdout.split("\r\n").filter((line) => line && !line.startsWith("#"))).toHaveLength(1 + 6);
+
+    // A read-only token may not start a map of a saved scenario (an editor's right): refused, exit 4.
+    const readOnly = await cli(["map", "--remote", "--scenario", `${f.projectId}/${f.scenarioId}`, ...axes], await editorToken(f, "read"));
+    expect(readOnly.code).toBe(EXIT.refused);
+  }, 120_000);
 });

@@ -5,8 +5,6 @@
  * the very numbers a direct computation of the same document gives; the CSV carries the inputs. Bad requests answer
  * 400 with the field, and 429 past the maps one account may run at once (the cost refusal: tests/unit/physics/maps.test.ts).
  */
-import { type ChildProcess, spawn } from "node:child_process";
-import path from "node:path";
 import { sql } from "kysely";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import * as mapRoute from "@/app/api/maps/[mapId]/route";
@@ -19,56 +17,8 @@ import { computeScenario } from "@/physics/compute";
 import { documentAt, type MapRequest } from "@/physics/maps";
 import { defaultScenarioDocument, type ScenarioDocument } from "@/physics/scenario/schema";
 import { projectFixture, smallMapRequest, type ProjectFixture } from "./fixtures";
+import { ready, startWorker, stopWorkers, until } from "./map-workers";
 import { call, makeUser, type TestUser } from "./harness";
-
-const root = path.resolve(__dirname, "../..");
-
-interface RunningWorker {
-  child: ChildProcess;
-  lines: string[];
-  exited: Promise<number | null>;
-}
-
-const workers: RunningWorker[] = [];
-
-function startWorker(): RunningWorker {
-  // One process (node with tsx's loader, not tsx's command, which runs the script in a child): killing it kills the worker.
-  const child = spawn(process.execPath, ["--conditions", "react-server", "--import", "tsx", "scripts/worker.ts"], {
-    cwd: root,
-    env: { ...process.env, BRANCHLINE_MAP_MAINTENANCE_SECONDS: "1" },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  const lines: string[] = [];
-  const collect = (chunk: Buffer) => lines.push(...chunk.toString().split("\n").filter(Boolean));
-  child.stdout!.on("data", collect);
-  child.stderr!.on("data", collect);
-  const exited = new Promise<number | null>((resolve) => child.on("exit", (code) => resolve(code)));
-  const worker = { child, lines, exited };
-  workers.push(worker);
-  return worker;
-}
-
-async function until<T>(what: string, probe: () => Promise<T | null | undefined | false>, timeoutMs = 150_000): Promise<T> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await probe();
-    if (value) return value;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 150));
-  }
-}
-
-const ready = (w: RunningWorker) => until("a worker to start", async () => w.lines.some((l) => l.includes("ready")), 60_000);
-
-async function stopWorkers(): Promise<void> {
-  await Promise.all(
-    workers.splice(0).map(async (w) => {
-      if (w.child.exitCode === null && w.child.signalCode === null) w.child.kill("SIGTERM");
-      await Promise.race([w.exited, new Promise((r) => setTimeout(r, 15_000))]);
-      if (w.child.exitCode === null && w.child.signalCode === null) w.child.kill("SIGKILL");
-    }),
-  );
-}
 
 const getMap = (user: TestUser, id: string, query?: Record<string, string>) => call(mapRoute.GET, "GET", `/api/maps/${id}`, { as: user, params: { mapId: id }, query });
 

@@ -3,6 +3,7 @@
  * (a progress bar on standard error) or, with --remote, by the server (POST /api/sweeps, at most its stated number
  * of points).
  */
+import { apiPaths } from "../../../contracts/api-paths";
 import { API_SWEEP_MAX_POINTS } from "../../../contracts/requests";
 import { ScenarioInputError } from "../../../physics/scenario/input-error";
 import { parseScenarioDocument } from "../../../physics/scenario/schema";
@@ -45,7 +46,7 @@ export async function sweepCommand(argv: string[]): Promise<string> {
 
   if (args.values.remote) {
     const body = { document: parsed.document, ...request, format: format === "csv" ? "csv" : "json" };
-    const answer = await send(remoteFromEnv(), "POST", "/api/sweeps", body);
+    const answer = await send(remoteFromEnv(), "POST", apiPaths.sweeps, body);
     if (format === "csv") return answer.text;
     return sweepOutput(answer.json<{ sweep: SweepResult }>().sweep, parsed.document, format);
   }

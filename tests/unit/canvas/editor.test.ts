@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it } from "vitest";
 import type { WorkerPort, WorkerRequest, WorkerResponse } from "@/canvas/compute-client";
-import { createEditor, type Editor } from "@/canvas/editor";
+import { BUDGET_DRAG_PACE_MS, createEditor, type Editor } from "@/canvas/editor";
 import { handleRequest } from "@/canvas/worker/handle-request";
 import { computeScenario } from "@/physics/compute";
 import { defaultScenarioDocument } from "@/physics/scenario/schema";
@@ -85,6 +85,32 @@ describe("the editor object", () => {
     expect(after.electromagnetic.totalQuanta.value).toBe(computeScenario(dragged).electromagnetic.totalQuanta.value);
     // A slower recombination radiates less in flat spacetime (the count falls as 1/T² for smooth ramps).
     expect(after.electromagnetic.totalQuanta.value!).toBeLessThan(before.electromagnetic.totalQuanta.value!);
+  });
+
+  it("asks its worker for the Budget at a pace during a drag, and for the dragged document as soon as the handle is let go", async () => {
+    const workers = inProcessWorkers();
+    editor = createEditor({ document: defaultScenarioDocument(), version: 1, readOnly: false, spawnWorker: workers.spawn });
+    await settled(editor);
+    const budgetRequests = () => workers.ports[0].requests.filter((r) => r.type === "budget").length;
+    const opened = budgetRequests();
+    const h = createHarness({ store: editor.store });
+    h.store.getState().setOffsetsSize({ width: 800, height: 320 });
+    let { x, y } = h.grip("recombination-end");
+    h.store.getState().offsetsPointerDown({ x, y, shiftKey: false });
+    // Thirty frames' moves within one task: the worker is not asked once per move.
+    for (let frame = 0; frame < 30; frame++) h.store.getState().offsetsPointerMove({ x: (x += 2), y, shiftKey: false });
+    expect(budgetRequests()).toBe(opened);
+    // The pace takes the newest document once the moves stop arriving (BUDGET_DRAG_PACE_MS after the last tick).
+    await new Promise((resolve) => setTimeout(resolve, 2 * BUDGET_DRAG_PACE_MS));
+    expect(budgetRequests()).toBe(opened + 1);
+    const requestedDuringDrag = workers.ports[0].requests.at(-1) as Extract<WorkerRequest, { type: "budget" }>;
+    expect(requestedDuringDrag.document).toEqual(h.document());
+    // One more move, then the release: the last document goes out at once, without waiting for the pace.
+    h.store.getState().offsetsPointerMove({ x: (x += 2), y, shiftKey: false });
+    h.store.getState().offsetsPointerUp({ x, y, shiftKey: false });
+    expect(budgetRequests()).toBe(opened + 2);
+    const after = await settled(editor);
+    expect(after.electromagnetic.totalQuanta.value).toBe(computeScenario(h.document()).electromagnetic.totalQuanta.value);
   });
 
   it("runs sweeps on a worker of its own, and dispose stops every worker and the pace clock", async () => {

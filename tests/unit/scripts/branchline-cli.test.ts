@@ -39,7 +39,7 @@ describe("branchline command line", () => {
   it("lists its commands and exit codes with --help, and answers 2 without a command or with an unknown one", async () => {
     const help = await run(["--help"]);
     expect(help.code).toBe(EXIT.ok);
-    for (const name of ["compute", "sweep", "figure", "pull", "push"]) expect(help.stdout).toContain(`  ${name} `);
+    for (const name of ["compute", "sweep", "map", "figure", "pull", "push"]) expect(help.stdout).toContain(`  ${name} `);
     expect(help.stdout).toContain("exit codes:");
     expect(help.stdout).toContain("BRANCHLINE_TOKEN");
     expect((await run([])).code).toBe(EXIT.badInput);
@@ -97,6 +97,49 @@ describe("branchline command line", () => {
     const tooMany = await run(["sweep", example("minkowski.json"), "--points", "200", "--remote"]);
     expect(tooMany.code).toBe(EXIT.badInput);
     expect(tooMany.stderr).toContain("--points: must be a whole number from 1 to 100");
+  });
+
+  it("maps two parameters here: each point is the document with both values set by hand, computed directly", async () => {
+    const args = ["map", example("minkowski.json"), "--x", "recombination-time", "--x-from", "1 ms", "--x-to", "100 ms", "--x-points", "3"];
+    const axisY = ["--y", "hold-time", "--y-from", "10 ms", "--y-to", "30 ms", "--y-points", "2", "--y-scale", "linear"];
+    const res = await run([...args, ...axisY]);
+    expect(res.code, res.stderr).toBe(EXIT.ok);
+    const grid = JSON.parse(res.stdout).map;
+    // Log spacing on x (1, 10, 100 ms), linear on y (10, 30 ms): the definitions, not the program's own axis code.
+    expect(grid.x.values).toEqual([expect.closeTo(1e-3, 15), expect.closeTo(1e-2, 14), expect.closeTo(1e-1, 13)]);
+    expect(grid.y.values).toEqual([expect.closeTo(0.01, 15), expect.closeTo(0.03, 15)]);
+    const parsed = parseScenarioDocument(JSON.parse(readFileSync(example("minkowski.json"), "utf8")));
+    if (!parsed.ok || parsed.document.protocol.kind !== "segments") throw new Error("the example has a segment protocol");
+    const { document } = parsed;
+    const protocol = parsed.document.protocol;
+    grid.y.values.forEach((hold: number, row: number) =>
+      grid.x.values.forEach((recombination: number, column: number) => {
+        const byHand = { ...document, protocol: { ...protocol, hold: { ...protocol.hold, durationSeconds: hold }, recombination: { ...protocol.recombination, durationSeconds: recombination } } };
+        expect(grid.log10[row][column]).toBeCloseTo(computeScenario(byHand).combined.totalQuanta.log10!, 12);
+      }),
+    );
+    // In flat spacetime a slower recombination radiates less (⟨N⟩ falls as 1/T² for smooth ramps).
+    expect(grid.log10[0][2]).toBeLessThan(grid.log10[0][0]);
+
+    const csv = await run([...args, ...axisY, "--format", "csv"]);
+    expect(csv.stdout).toContain("# x: recombination-time from 0.001 to 0.1 (SI), 3 points, log spacing");
+    const rows = csvRows(csv.stdout);
+    expect(rows[0]).toEqual(["recombination_time_s", "hold_time_s", "total_quanta_count", "log10_total_quanta", "not_computed_because"]);
+    expect(rows).toHaveLength(1 + 6);
+    const summary = await run([...args, ...axisY, "--format", "table"]);
+    expect(summary.stdout).toMatch(/smallest\s+\S+\s+at recombination-time = 0\.1 s, hold-time = 0\.0[13] s/);
+  });
+
+  it("refuses a map it cannot make with the option at fault and exit code 2", async () => {
+    const same = await run(["map", example("minkowski.json"), "--x", "hold-time", "--y", "hold-time"]);
+    expect(same.code).toBe(EXIT.badInput);
+    expect(same.stderr).toContain("--y: the two axes must vary different parameters");
+    const bad = await run(["map", example("minkowski.json"), "--x-from", "5", "--quantity", "brightness", "--y-points", "900", "--x-scale", "cubic"]);
+    expect(bad.code).toBe(EXIT.badInput);
+    for (const line of ["--x-from: ", "--quantity: must be total-quanta", "--y-points: must be a whole number from 2 to 200", "--x-scale: must be log or linear"]) expect(bad.stderr).toContain(line);
+    const local = await run(["map", "--scenario", "p/s"]);
+    expect(local.code).toBe(EXIT.badInput);
+    expect(local.stderr).toContain("--scenario: maps a saved scenario on the server: add --remote");
   });
 
   it("needs a token and a pulled folder for pull and push, and says when the server cannot be reached", async () => {

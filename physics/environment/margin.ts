@@ -31,12 +31,13 @@ const log10Quanta = (ch: EnvironmentChannelResult | undefined) => (ch?.totalQuan
 /** ⟨N⟩ of one channel with its parameter set to `value`. */
 type Evaluate = (value: number) => number;
 
-export function findMargin(evaluate: Evaluate, current: number, limit: number, fieldLog10Quanta: number): MarginOutcome {
+/** `unit` is the parameter's SI unit, for the words of a "not-reachable" reason. */
+export function findMargin(evaluate: Evaluate, current: number, limit: number, fieldLog10Quanta: number, unit = ""): MarginOutcome {
   const here = evaluate(current);
   if (here <= fieldLog10Quanta) return { kind: "already-below" };
   if (fieldLog10Quanta === -Infinity) return { kind: "not-reachable", reason: "the body's own field channels are exactly zero" };
   const atLimit = evaluate(limit);
-  if (atLimit > fieldLog10Quanta) return { kind: "not-reachable", reason: `still above the field channels at the search limit ${limit}` };
+  if (atLimit > fieldLog10Quanta) return { kind: "not-reachable", reason: `still above the field channels at the search limit, ${limit}${unit ? ` ${unit}` : ""}` };
   const f = (log10Value: number) => {
     const n = evaluate(10 ** log10Value);
     return (n === -Infinity ? -1e3 : n) - fieldLog10Quanta;
@@ -46,8 +47,8 @@ export function findMargin(evaluate: Evaluate, current: number, limit: number, f
 }
 
 function margin(channel: EnvironmentChannel, parameter: MarginParameter, current: number, evaluate: Evaluate, fieldLog10Quanta: number): ChannelMargin {
-  const outcome = findMargin(evaluate, current, MARGIN_LIMITS[parameter], fieldLog10Quanta);
   const unit = UNITS[parameter];
+  const outcome = findMargin(evaluate, current, MARGIN_LIMITS[parameter], fieldLog10Quanta, unit);
   return {
     channel,
     parameter,

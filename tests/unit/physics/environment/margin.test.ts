@@ -57,6 +57,8 @@ describe("the margin: where each environmental channel equals the body's own fie
     const margins = environmentMargins(paths, inputs(), 10);
     expect(margins.every((m) => m.outcome.kind === "already-below")).toBe(true);
     expect(environmentMargins(paths, inputs(), -Infinity).find((m) => m.channel === "gas")!.outcome.kind).toBe("not-reachable");
-    expect(findMargin((p) => Math.log10(p) + 100, 1, 1e-20, -200).kind).toBe("not-reachable");
+    const unreachable = findMargin((p) => Math.log10(p) + 100, 1, 1e-20, -200, "Pa");
+    expect(unreachable.kind).toBe("not-reachable");
+    expect(unreachable.kind === "not-reachable" && unreachable.reason).toBe("still above the field channels at the search limit, 1e-20 Pa");
   });
 });

@@ -29,24 +29,40 @@ export interface MapWorkerOptions {
   log?: (line: string) => void;
 }
 
-/** Computes one chunk: false when the map was gone or cancelled (before or during the row). */
-export async function computeChunk(db: Kysely<Database>, job: MapRowJob, inputsCache = new Map<string, MapInputs>()): Promise<boolean> {
-  let inputs = inputsCache.get(job.mapId);
+/** What a worker remembers of the maps it works on: their inputs, and when it last found each still wanted. */
+export interface ChunkMemory {
+  inputs: Map<string, MapInputs>;
+  checkedAt: Map<string, number>;
+}
+
+export const chunkMemory = (): ChunkMemory => ({ inputs: new Map(), checkedAt: new Map() });
+
+/**
+ * Computes one chunk: false when the map was gone or cancelled (before or during the row). Whether the map is still
+ * wanted is asked at most every STATUS_CHECK_MS, across its rows too: a row of a map asked about a moment ago starts
+ * without a query (recordMapRow checks again before it keeps anything).
+ */
+export async function computeChunk(db: Kysely<Database>, job: MapRowJob, memory: ChunkMemory = chunkMemory()): Promise<boolean> {
+  const stillWanted = async () => {
+    const at = memory.checkedAt.get(job.mapId);
+    if (at !== undefined && Date.now() - at <= STATUS_CHECK_MS) return true;
+    const active = isActive(await mapStatus(db, job.mapId));
+    if (active) memory.checkedAt.set(job.mapId, Date.now());
+    return active;
+  };
+  let inputs = memory.inputs.get(job.mapId);
   if (!inputs) {
     const work = await mapWork(db, job.mapId);
     if (!work || !isActive(work.status)) return false;
     inputs = work.inputs;
-    inputsCache.set(job.mapId, inputs);
-  } else if (!isActive(await mapStatus(db, job.mapId))) {
+    memory.inputs.set(job.mapId, inputs);
+    memory.checkedAt.set(job.mapId, Date.now());
+  } else if (!(await stillWanted())) {
     return false;
   }
   const points: MapPoint[] = [];
-  let checkedAt = Date.now();
   for (let column = 0; column < inputs.request.x.points; column++) {
-    if (Date.now() - checkedAt > STATUS_CHECK_MS) {
-      if (!isActive(await mapStatus(db, job.mapId))) return false;
-      checkedAt = Date.now();
-    }
+    if (!(await stillWanted())) return false;
     points.push(computeMapPoint(inputs.document, inputs.request, column, job.row));
   }
   return recordMapRow(db, job.mapId, mapRowOf(job.row, points));
@@ -61,7 +77,7 @@ export async function startMapWorker(options: MapWorkerOptions): Promise<MapWork
   const log = options.log ?? (() => undefined);
   const idleMs = (options.pollingIntervalSeconds ?? 0.5) * 1000;
   const boss: PgBoss = await startQueue({ supervise: true });
-  const inputsCache = new Map<string, MapInputs>();
+  const memory = chunkMemory();
   let chunks = 0;
   let stopping = false;
   let wake: (() => void) | null = null;
@@ -69,7 +85,7 @@ export async function startMapWorker(options: MapWorkerOptions): Promise<MapWork
   const runOne = async (job: PgBoss.JobWithMetadata<MapRowJob>) => {
     log(`map ${job.data.mapId} row ${job.data.row}: started (try ${job.retryCount + 1})`);
     try {
-      const kept = await computeChunk(options.db, job.data, inputsCache);
+      const kept = await computeChunk(options.db, job.data, memory);
       await boss.complete(MAP_ROWS_QUEUE, job.id);
       chunks++;
       log(`map ${job.data.mapId} row ${job.data.row}: ${kept ? "done" : "not wanted (map cancelled or gone)"}`);
@@ -80,7 +96,10 @@ export async function startMapWorker(options: MapWorkerOptions): Promise<MapWork
       if (job.retryCount >= job.retryLimit) await failParameterMap(options.db, job.data.mapId, `row ${job.data.row} failed: ${message}`);
       await boss.fail(MAP_ROWS_QUEUE, job.id, { message });
     }
-    if (inputsCache.size > 32) inputsCache.clear();
+    if (memory.inputs.size > 32) {
+      memory.inputs.clear();
+      memory.checkedAt.clear();
+    }
   };
 
   const loop = (async () => {

@@ -2,7 +2,8 @@
  * Bench of parameter maps through the queue (figures printed, nothing asserted): a map of BENCH_MAP_SIDE ×
  * BENCH_MAP_SIDE points (default 200 × 200) computed by 1 worker process and then by 2, with the times and the
  * speed-up (target ≥ 1.8× on a 2-core machine); the cost of one map point against one plain computation of the
- * same point; and the queue's overhead per chunk (a row), from a map of two points a row. Runs on a fresh database on the configured server (DATABASE_URL, or the project-local cluster),
+ * same point; the queue's overhead per chunk (a row), from a map of two points a row; and the machine's own ceiling,
+ * two plain compute loops at once against one alone (compute-loop.ts), which no number of workers can beat. Runs on a fresh database on the configured server (DATABASE_URL, or the project-local cluster),
  * dropped afterwards. Run: npm run bench (it starts this when the database answers), or directly:
  *   node --conditions react-server --import tsx tests/bench/maps.ts
  */
@@ -17,18 +18,14 @@ import { createUser } from "../../db/users";
 import { stopMapSender, enqueueMapRows } from "../../lib/map-queue";
 import { computeScenario } from "../../physics/compute";
 import { axisValues, computeMapPoint, documentAt, type MapRequest } from "../../physics/maps";
-import { defaultScenarioDocument, type ScenarioDocument } from "../../physics/scenario/schema";
+import type { ScenarioDocument } from "../../physics/scenario/schema";
+import { benchMapDocument } from "./map-bench-scenario";
 import { migrateToLatest } from "../../scripts/migrate";
 
 const SIDE = Number(process.env.BENCH_MAP_SIDE ?? 200);
 const root = path.resolve(__dirname, "../..");
 
-/** The run.ts bench scenario (Rindler, 10 ms ramps around a 30 ms hold), mapped over both ramp-and-hold times. */
-const document: ScenarioDocument = {
-  ...defaultScenarioDocument(),
-  background: { kind: "rindler", accelerationMetresPerSecondSquared: 9.81 },
-  protocol: { kind: "segments", separation: { durationSeconds: 0.01, shape: "minimum-jerk" }, hold: { durationSeconds: 0.03 }, recombination: { durationSeconds: 0.01, shape: "minimum-jerk" } },
-};
+const document: ScenarioDocument = benchMapDocument;
 const request: MapRequest = {
   x: { parameter: "recombination-time", from: 2e-3, to: 5e-2, points: SIDE, scale: "log" },
   y: { parameter: "hold-time", from: 1e-2, to: 1, points: SIDE, scale: "log" },
@@ -57,6 +54,21 @@ function startWorker(url: string): Promise<ChildProcess> {
     child.stdout!.on("data", (chunk: Buffer) => chunk.toString().includes("ready") && resolve(child));
     child.once("exit", (code) => reject(new Error(`a worker exited with ${code} before it was ready`)));
   });
+}
+
+/** Plain computations a second in one process alone, and in each of two running at once (compute-loop.ts). */
+async function computeLoops(count: number): Promise<number[]> {
+  const runs = Array.from(
+    { length: count },
+    () =>
+      new Promise<number>((resolve, reject) => {
+        const child = spawn(process.execPath, ["--import", "tsx", "tests/bench/compute-loop.ts"], { cwd: root, stdio: ["ignore", "pipe", "inherit"] });
+        let out = "";
+        child.stdout!.on("data", (chunk: Buffer) => (out += chunk.toString()));
+        child.once("exit", (code) => (code === 0 ? resolve((JSON.parse(out) as { perSecond: number }).perSecond) : reject(new Error(`a compute loop exited with ${code}`))));
+      }),
+  );
+  return Promise.all(runs);
 }
 
 async function stop(children: ChildProcess[]): Promise<void> {
@@ -129,8 +141,16 @@ async function main(): Promise<void> {
     await db.destroy();
     await admin(`drop database if exists "${name}" with (force)`);
   }
+  // The machine's own ceiling: two plain compute loops at once against one alone (no queue, no database).
+  // This machine's speed drifts from minute to minute (a shared host): one loop alone before and after the pair.
+  const [aloneBefore] = await computeLoops(1);
+  const together = await computeLoops(2);
+  const [aloneAfter] = await computeLoops(1);
+  const alone = (aloneBefore + aloneAfter) / 2;
+  const ceiling = together.reduce((a, b) => a + b, 0) / alone;
   lines.push(
     `speed-up 2 workers / 1: ${(wall[1] / wall[2]).toFixed(2)}× (target ≥ 1.8× on 2 cores: ${wall[1] / wall[2] >= 1.8 ? "met" : "not met"})`,
+    `this machine's own ceiling: two plain compute loops at once do ${ceiling.toFixed(2)}× the computations of one alone (${together.map((r) => r.toFixed(0)).join(" + ")} against ${aloneBefore.toFixed(0)} and ${aloneAfter.toFixed(0)} a second alone, before and after): the most a second worker can give here, queue or not`,
     `one map point: ${perPoint.toFixed(2)} ms on average against ${(plainMs / points).toFixed(2)} ms for one plain computation of the same point (${(mapMs / plainMs).toFixed(2)}×; ${points} points of ${sampledRows.length} rows)`,
     `load average while measuring: ${loadavg().map((l) => l.toFixed(1)).join(", ")} on ${cpus().length} cores (other work on the machine slows both runs and hides the speed-up)`,
   );

@@ -16,6 +16,7 @@ import { computeScenario } from "../../physics/compute";
 import { elementaryCharge } from "../../physics/constants";
 import { massLengthMetres, schwarzschildHorizonRate } from "../../physics/horizon/schwarzschild-exact";
 import { defaultScenarioDocument, type ScenarioDocument } from "../../physics/scenario/schema";
+import { startingBackground } from "../../physics/scenario/starting";
 import { clearSpectrumCache } from "../../physics/spectra/window-spectrum";
 import { sweepScenario } from "../../physics/sweeps";
 import { channelTable } from "../../canvas/kernels/budget/channel-table";
@@ -39,7 +40,7 @@ function benchScenario(): ScenarioDocument {
   const doc = defaultScenarioDocument();
   return {
     ...doc,
-    background: { kind: "rindler", accelerationMetresPerSecondSquared: 9.81 },
+    ...startingBackground("rindler"),
     protocol: {
       kind: "segments",
       separation: { durationSeconds: 0.01, shape: "minimum-jerk" },

@@ -6,16 +6,21 @@ import { useReportDiagramSize } from "@/components/export/diagram-size";
 import { DIAGRAM_MIN_HEIGHT, diagramHeightFor } from "@/components/export/figure-size";
 import { BranchLegend } from "./BranchLegend";
 import { useElementSize } from "./useElementSize";
+import { usePanelValue } from "./usePacedDuringDrag";
 
 const DiagramStage = dynamic(() => import("@/canvas/layers/DiagramStage"), {
   ssr: false,
   loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the diagram…</p>,
 });
 
-/** Notes under the figure: what is exaggerated or rescaled (from the same scene the stage draws). */
+/**
+ * Notes under the figure: what is exaggerated or rescaled (from the same scene the stage draws). Some carry the
+ * drawn lengths, which change with a drag: they follow it at the panels' pace (a new line of text each frame would
+ * lay the page out again on every frame).
+ */
 function DiagramNotes() {
-  // One string, so that a drag (a new scene each frame, mostly the same notes) re-renders nothing here.
-  const joined = useEditor((s) => {
+  // One string, so that a frame whose notes did not change re-renders nothing here.
+  const joined = usePanelValue((s) => {
     const outcome = s.diagramScene(s.document);
     return outcome.ok ? outcome.scene.notes.join("\n") : "";
   });

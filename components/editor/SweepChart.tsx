@@ -19,6 +19,7 @@ import type { ScenarioDocument } from "@/physics/scenario/schema";
 import { SWEEP_PARAMETER_WORDS as PARAMETER_WORDS } from "@/components/export/sweep-export";
 import { parameterDimension } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
+import { usePacedDuringDrag } from "./usePacedDuringDrag";
 
 export interface SweepPoint {
   x: number;
@@ -40,7 +41,8 @@ function sweptValueNow(document: ScenarioDocument, parameter: SweepParameter): n
 
 /** A vertical rule at the scenario's current value of the swept parameter, where it falls inside the sweep. */
 export function NowMarker({ parameter, from, to }: { parameter: SweepParameter; from: number; to: number }) {
-  const current = useEditor((s) => sweptValueNow(s.document, parameter));
+  // A readout like the Budget's: it follows a drag at the panels' pace, not on every frame.
+  const current = usePacedDuringDrag(useEditor((s) => sweptValueNow(s.document, parameter)));
   const scale = useXAxisScale();
   const plot = usePlotArea();
   if (current === null || !(current >= from && current <= to) || !scale || !plot) return null;

@@ -39,8 +39,27 @@
  * busy 16–17.5 ms a frame: the headroom here is well under a factor of two. About 40 % of the main thread is the
  * browser's own style, layout, paint and compositing in software (--disable-gpu); the rest is React, Konva and the
  * store.
- * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag; BRANCH_CPU_SLOWDOWN=N (≥ 1)
- * slows the page's CPU N times (Chromium's throttling) to show the headroom.
+ * Before and after the editor object (2026-12-05, this machine quiet, load average about 2, the same bench on builds
+ * of c602f31, before it, and of the code after it, alternated): main thread busy per frame 12.5–13.3 ms before and
+ * 12.4–13.5 ms after as the editor opens, 10.6–11.5 ms before and 11.6–12.9 ms after with a sweep's chart shown; p95
+ * 16.7–16.8 ms in both, with the first drag after a page load at 33 ms now and then in both. With
+ * BRANCH_CPU_SLOWDOWN=2: p95 33–67 ms, busy 17–21 ms a frame. The redesign moved no frame time; the target of at
+ * most 8 ms of work a frame (p95 ≤ 16.8 ms at BRANCH_CPU_SLOWDOWN=2) is NOT met. This machine's speed drifts by
+ * ±20 % from minute to minute (tests/bench/maps.ts prints it), so read figures over several runs.
+ * Where a frame's time goes (BRANCH_TRACE=1, 13 ms): about 8 ms in the browser's frame (of which 2 ms committing
+ * the layer tree, 1–1.5 ms updating layers and copying the changed canvases, 1.5 ms Konva drawing the changed
+ * layers in the animation frame, 1–1.7 ms style, layout and paint), 3.5–4.5 ms in the pointer-move handler (the
+ * store's drag step, the Diagram's scene and figure for the new document, react-konva reconciling both stages),
+ * and 2 ms in messages (the Budget worker's answers, React's scheduler). Taken off in this round: the Budget worker
+ * asked every 50 ms during a drag instead of every frame, the Diagram's notes and the sweep's "now" marker at the
+ * panels' pace (a note's new line laid the page out again each frame), data-handles written only when they move.
+ * What is left is the browser's software compositing of seven canvas layers (--disable-gpu: no GPU here) and the
+ * two stages drawn on the main thread; the next step would be drawing the stages in a worker (OffscreenCanvas),
+ * which Konva supports, so that the main thread only composites.
+ * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag, summed by package or source
+ * file and, for our own functions, by total time; a build made with BRANCHLINE_BROWSER_SOURCE_MAPS=1 names them
+ * through its source maps. BRANCH_TRACE=1 adds the main thread by trace event (the browser's own work named).
+ * BRANCH_CPU_SLOWDOWN=N (≥ 1) slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */
 import { chromium, type CDPSession, type Page } from "@playwright/test";
 import { SourceMapConsumer } from "source-map-js";

@@ -10,9 +10,7 @@
 import { type ChildProcess, spawn } from "node:child_process";
 import { cpus, loadavg } from "node:os";
 import path from "node:path";
-import pg from "pg";
 import { createDb } from "../../db/connect";
-import { databaseUrl } from "../../db/config";
 import { createParameterMap, mapStatus } from "../../db/parameter-maps";
 import { createUser } from "../../db/users";
 import { stopMapSender, enqueueMapRows } from "../../lib/map-queue";
@@ -20,7 +18,7 @@ import { computeScenario } from "../../physics/compute";
 import { axisValues, computeMapPoint, documentAt, type MapRequest } from "../../physics/maps";
 import type { ScenarioDocument } from "../../physics/scenario/schema";
 import { benchMapDocument } from "./map-bench-scenario";
-import { migrateToLatest } from "../../scripts/migrate";
+import { createScratchDatabase } from "../scratch-database";
 
 const SIDE = Number(process.env.BENCH_MAP_SIDE ?? 200);
 const root = path.resolve(__dirname, "../..");
@@ -31,18 +29,6 @@ const request: MapRequest = {
   y: { parameter: "hold-time", from: 1e-2, to: 1, points: SIDE, scale: "log" },
   quantity: "total-quanta",
 };
-
-async function admin(statement: string): Promise<void> {
-  const url = new URL(databaseUrl());
-  url.pathname = "/postgres";
-  const client = new pg.Client({ connectionString: url.toString() });
-  await client.connect();
-  try {
-    await client.query(statement);
-  } finally {
-    await client.end();
-  }
-}
 
 function startWorker(url: string): Promise<ChildProcess> {
   const child = spawn(process.execPath, ["--conditions", "react-server", "--import", "tsx", "scripts/worker.ts"], {
@@ -107,18 +93,15 @@ async function main(): Promise<void> {
   const perPoint = mapMs / points;
   const rowMs = mapMs / sampledRows.length;
 
-  const name = `branchline_bench_maps_${process.pid}`;
-  const url = new URL(databaseUrl());
-  url.pathname = `/${name}`;
-  await admin(`create database "${name}"`);
-  process.env.DATABASE_URL = url.toString();
-  const db = createDb(url.toString(), 4);
+  const database = await createScratchDatabase(`branchline_bench_maps_${process.pid}`);
+  const url = database.url;
+  process.env.DATABASE_URL = url;
+  const db = createDb(url, 4);
   const lines = [`map ${SIDE} × ${SIDE} = ${SIDE * SIDE} points of the Rindler bench scenario (recombination time × hold time), one chunk per row`];
   const wall: Record<number, number> = {};
   try {
-    await migrateToLatest(url.toString());
     const runMap = async (workers: number, mapRequest: MapRequest) => {
-      const children = await Promise.all(Array.from({ length: workers }, () => startWorker(url.toString())));
+      const children = await Promise.all(Array.from({ length: workers }, () => startWorker(url)));
       const user = await createUser(db, { email: `bench-${workers}-${Date.now()}@example.test`, name: "Bench" });
       // The clock starts once the rows are queued (the first run also starts this process's queue sender).
       const map = await createParameterMap(db, { userId: user.id, siteRole: "member" }, { document, request: mapRequest }, enqueueMapRows);
@@ -139,7 +122,7 @@ async function main(): Promise<void> {
   } finally {
     await stopMapSender();
     await db.destroy();
-    await admin(`drop database if exists "${name}" with (force)`);
+    await database.drop();
   }
   // The machine's own ceiling: two plain compute loops at once against one alone (no queue, no database).
   // This machine's speed drifts from minute to minute (a shared host): one loop alone before and after the pair.

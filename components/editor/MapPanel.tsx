@@ -30,6 +30,7 @@ import type { SweepParameter } from "@/physics/sweeps/vary";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
+import { CompactSelect } from "@/components/ui/Field";
 import { dimensionOf, PARAMETER_WORDS } from "./SweepChart";
 import { useEdit } from "./useEdit";
 import { usePanelValue } from "./usePacedDuringDrag";
@@ -101,16 +102,7 @@ const MapView = memo(function MapView({ projectId, scenarioId, title, document }
             <AxisFields name="y" axis={yAxis} available={available.filter((p) => p !== xAxis.parameter)} document={document} onChange={setY} />
           </div>
           <div className="flex flex-wrap items-end gap-3">
-            <label className="block text-xs font-semibold text-ink-soft">
-              Quantity
-              <select className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink" value={quantity} onChange={(e) => setQuantity(e.target.value as MapQuantity)}>
-                {MAP_QUANTITIES.map((q) => (
-                  <option key={q} value={q}>
-                    {MAP_QUANTITY_WORDS[q]}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <CompactSelect<MapQuantity> label="Quantity" value={quantity} options={MAP_QUANTITIES.map((q) => ({ value: q, words: MAP_QUANTITY_WORDS[q] }))} onChange={setQuantity} />
             <button type="button" className={`${buttonStyles.secondary} py-1.5`} onClick={run} disabled={start.isPending || active} data-testid="start-map">
               {start.isPending ? "Starting…" : "Start map"}
             </button>
@@ -166,21 +158,13 @@ function AxisFields({ name, axis, available, document, onChange }: { name: "x" |
   const dimension = dimensionOf(axis.parameter);
   return (
     <>
-      <label className="block text-xs font-semibold text-ink-soft">
-        {name === "x" ? "Across (x)" : "Up (y)"}
-        <select
-          className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
-          value={axis.parameter}
-          onChange={(e) => onChange(draftFor(document, e.target.value as SweepParameter))}
-          aria-label={`Map ${name} parameter`}
-        >
-          {available.map((p) => (
-            <option key={p} value={p}>
-              {PARAMETER_WORDS[p]}
-            </option>
-          ))}
-        </select>
-      </label>
+      <CompactSelect
+        label={name === "x" ? "Across (x)" : "Up (y)"}
+        value={axis.parameter}
+        options={available.map((p) => ({ value: p, words: PARAMETER_WORDS[p] }))}
+        onChange={(parameter) => onChange(draftFor(document, parameter))}
+        ariaLabel={`Map ${name} parameter`}
+      />
       <div className="w-32">
         <QuantityField compact label={`${name} from`} dimension={dimension} shown={formatQuantity(axis.from, dimension)} onCommit={(v) => {
           if (!(v > 0) || v >= axis.to) return { ok: false, message: "must be positive and below the end of the range" };
@@ -210,13 +194,13 @@ function AxisFields({ name, axis, available, document, onChange }: { name: "x" |
           aria-label={`Map ${name} points (2 to ${MAX_MAP_SIDE})`}
         />
       </label>
-      <label className="block text-xs font-semibold text-ink-soft">
-        Spacing
-        <select className="mt-1 block rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink" value={axis.scale} onChange={(e) => onChange({ ...axis, scale: e.target.value as AxisScale })} aria-label={`Map ${name} spacing`}>
-          <option value="log">log</option>
-          <option value="linear">linear</option>
-        </select>
-      </label>
+      <CompactSelect
+        label="Spacing"
+        value={axis.scale}
+        options={[{ value: "log", words: "log" }, { value: "linear", words: "linear" }] as const}
+        onChange={(scale) => onChange({ ...axis, scale })}
+        ariaLabel={`Map ${name} spacing`}
+      />
     </>
   );
 }

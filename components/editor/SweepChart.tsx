@@ -7,7 +7,7 @@
  * parameter or the read-only state changes: the "now" marker reads the scenario's current value from the store
  * itself, so a drag in the Offsets panel moves one SVG line, not the whole chart.
  */
-import { memo, useMemo, useState } from "react";
+import { memo, useMemo, useState, type ReactNode } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis, usePlotArea, useXAxisScale, useYAxisScale } from "recharts";
 import type { SweepParameter } from "@/canvas/compute-client";
 import { useEditor } from "@/canvas/EditorProvider";
@@ -114,6 +114,80 @@ export function logAxis(values: number[], dimension: ReturnType<typeof parameter
   return { from, to, ticks, unit, label: (v: number) => labels.get(v) ?? tickLabel(v, unit) };
 }
 
+/** The log y axis of a sweep chart: its ticks, its title turned up the left edge. */
+export function sweepYAxis(axis: NonNullable<ReturnType<typeof logAxis>>, title: string, dataKey?: string) {
+  return (
+    <YAxis
+      dataKey={dataKey}
+      {...logAxisProps(axis)}
+      width={64}
+      label={{ value: title, angle: -90, position: "insideLeft", offset: 4, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR, style: { textAnchor: "middle" } }}
+    />
+  );
+}
+
+/**
+ * What both sweep charts share: the hover readout above the plot (so it never covers the curves, their axes or
+ * labels), the log x axis with its title, the grid, the cursor line, and a click that sets the scenario to a point.
+ * `children` are the y axis (sweepYAxis), the curves and the marks.
+ */
+export function SweepChartFrame<Row extends { x: number }>({
+  data,
+  xAxis,
+  parameter,
+  readOnly,
+  readout,
+  onPick,
+  children,
+}: {
+  data: Row[];
+  xAxis: NonNullable<ReturnType<typeof logAxis>>;
+  parameter: SweepParameter;
+  readOnly: boolean;
+  /** The words of the readout for the point at this index. */
+  readout(index: number): string;
+  onPick(x: number): void;
+  children: ReactNode;
+}) {
+  const [hovered, setHovered] = useState<number | null>(null);
+  const pointAt = (state: { activeIndex?: unknown } | null | undefined) => {
+    const index = Number(state?.activeIndex);
+    return Number.isInteger(index) && data[index] ? index : null;
+  };
+  return (
+    <>
+      <p className="h-5 shrink-0 truncate text-right font-mono text-xs text-ink-soft" data-testid="sweep-readout" aria-live="polite">
+        {hovered !== null && data[hovered] ? readout(hovered) : ""}
+      </p>
+      <div className="min-h-0 flex-1">
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart
+            data={data}
+            margin={{ top: 14, right: 24, bottom: 30, left: 14 }}
+            onMouseMove={(state) => setHovered(pointAt(state))}
+            onMouseLeave={() => setHovered(null)}
+            onClick={(state) => {
+              const index = pointAt(state);
+              if (!readOnly && index !== null) onPick(data[index].x);
+            }}
+            style={{ cursor: readOnly ? "default" : "pointer" }}
+          >
+            <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
+            <XAxis
+              dataKey="x"
+              {...logAxisProps(xAxis)}
+              label={{ value: axisTitle(PARAMETER_WORDS[parameter], xAxis.unit), position: "insideBottom", offset: -20, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
+            />
+            {/* The cursor line shows where the pointer is; the numbers go to the readout above. */}
+            <Tooltip content={() => null} cursor={{ stroke: AXIS_COLOUR, strokeDasharray: "3 3" }} isAnimationActive={false} />
+            {children}
+          </LineChart>
+        </ResponsiveContainer>
+      </div>
+    </>
+  );
+}
+
 export const SweepChart = memo(function SweepChart({
   data,
   best,
@@ -130,54 +204,25 @@ export const SweepChart = memo(function SweepChart({
   onPick(x: number): void;
 }) {
   const dimension = dimensionOf(parameter);
-  const [hovered, setHovered] = useState<SweepPoint | null>(null);
   const xAxis = useMemo(() => logAxis(data.map((p) => p.x), dimension), [data, dimension]);
   const yAxis = useMemo(() => logAxis(data.map((p) => p.decoherence), "number"), [data]);
   if (!xAxis || !yAxis) return null;
-  const xTitle = axisTitle(PARAMETER_WORDS[parameter], xAxis.unit);
   return (
     <div className="flex h-full w-full flex-col">
-      {/* The hover readout sits above the plot, so it never covers the curve's axes or their labels. */}
-      <p className="h-5 shrink-0 text-right font-mono text-xs text-ink-soft" data-testid="sweep-readout" aria-live="polite">
-        {hovered ? `${PARAMETER_WORDS[parameter]} ${formatQuantity(hovered.x, dimension)}   𝒟 = ${compactNumber(hovered.decoherence, 3)}` : ""}
-      </p>
-      <div className="min-h-0 flex-1">
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart
-            data={data}
-            margin={{ top: 14, right: 24, bottom: 30, left: 14 }}
-            onMouseMove={(state) => {
-              const index = Number(state?.activeIndex);
-              setHovered(Number.isInteger(index) && data[index] ? data[index] : null);
-            }}
-            onMouseLeave={() => setHovered(null)}
-            onClick={(state) => {
-              const index = Number(state?.activeIndex);
-              if (!readOnly && Number.isInteger(index) && data[index]) onPick(data[index].x);
-            }}
-            style={{ cursor: readOnly ? "default" : "pointer" }}
-          >
-            <CartesianGrid stroke="#d9d6cf" strokeDasharray="2 4" />
-            <XAxis
-              dataKey="x"
-              {...logAxisProps(xAxis)}
-              label={{ value: xTitle, position: "insideBottom", offset: -20, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR }}
-            />
-            <YAxis
-              dataKey="decoherence"
-              {...logAxisProps(yAxis)}
-              width={64}
-              label={{ value: "decoherence 𝒟", angle: -90, position: "insideLeft", offset: 4, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR, style: { textAnchor: "middle" } }}
-            />
-            {/* The cursor line shows where the pointer is; the numbers go to the readout above. */}
-            <Tooltip content={() => null} cursor={{ stroke: AXIS_COLOUR, strokeDasharray: "3 3" }} isAnimationActive={false} />
-            <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
-            <MinorTicks x={xAxis.ticks.minor} y={yAxis.ticks.minor} />
-            {data.length > 0 && <NowMarker parameter={parameter} from={data[0].x} to={data[data.length - 1].x} />}
-            {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
-          </LineChart>
-        </ResponsiveContainer>
-      </div>
+      <SweepChartFrame
+        data={data}
+        xAxis={xAxis}
+        parameter={parameter}
+        readOnly={readOnly}
+        readout={(i) => `${PARAMETER_WORDS[parameter]} ${formatQuantity(data[i].x, dimension)}   𝒟 = ${compactNumber(data[i].decoherence, 3)}`}
+        onPick={onPick}
+      >
+        {sweepYAxis(yAxis, "decoherence 𝒟", "decoherence")}
+        <Line dataKey="decoherence" stroke="#0072B2" strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
+        <MinorTicks x={xAxis.ticks.minor} y={yAxis.ticks.minor} />
+        {data.length > 0 && <NowMarker parameter={parameter} from={data[0].x} to={data[data.length - 1].x} />}
+        {best && <ReferenceDot x={best.x} y={best.decoherence} r={5} fill="#fbfaf7" stroke="#1c2024" strokeWidth={2} />}
+      </SweepChartFrame>
     </div>
   );
 });

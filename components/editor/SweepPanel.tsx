@@ -20,6 +20,7 @@ import { canVary, withParameter } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
 import { QuantityField } from "./QuantityField";
+import { CompactSelect } from "@/components/ui/Field";
 import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
 import { SweepChannelsChart } from "./SweepChannelsChart";
 import { useEdit } from "./useEdit";
@@ -120,23 +121,15 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         Sweep
       </h2>
       <div className="flex flex-wrap items-end gap-3">
-        <label className="block min-w-0 max-w-full text-xs font-semibold text-ink-soft">
-          Decoherence against
-          <select
-            className="mt-1 block max-w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
-            value={parameter}
-            onChange={(e) => {
-              setRange(null);
-              store.getState().setSweepParameter(e.target.value as SweepParameter);
-            }}
-          >
-            {available.map((p) => (
-              <option key={p} value={p}>
-                {PARAMETER_WORDS[p]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <CompactSelect
+          label="Decoherence against"
+          value={parameter}
+          options={available.map((p) => ({ value: p, words: PARAMETER_WORDS[p] }))}
+          onChange={(chosen) => {
+            setRange(null);
+            store.getState().setSweepParameter(chosen);
+          }}
+        />
         {shownRange && (
           <>
             <div className="w-32">

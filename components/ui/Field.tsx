@@ -82,3 +82,37 @@ export function SelectField({ label, hint, error, className, children, ...select
     </FieldFrame>
   );
 }
+
+/** A small labelled choice for dense panels (the editor's): the words shown for each value, the value handed back. */
+export function CompactSelect<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+  ariaLabel,
+}: {
+  label: ReactNode;
+  value: T;
+  options: readonly { value: T; words: ReactNode }[];
+  onChange(value: T): void;
+  /** Names the control for screen readers where the visible label is shared or short. */
+  ariaLabel?: string;
+}) {
+  return (
+    <label className={`${COMPACT_LABEL} min-w-0 max-w-full`}>
+      {label}
+      <select
+        className="mt-1 block max-w-full rounded border border-rule-strong bg-white px-2 py-1.5 text-sm font-normal text-ink"
+        value={value}
+        onChange={(e) => onChange(e.target.value as T)}
+        aria-label={ariaLabel}
+      >
+        {options.map((option) => (
+          <option key={option.value} value={option.value}>
+            {option.words}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}

@@ -2,7 +2,7 @@
  * Demo data, all invented: an owner and a viewer account, and a project of a fictitious research group with
  * five scenarios (flat space, a lab hovering outside a stellar-mass black hole, an accelerated lab, and two with the
  * lab's environment: a charged silica sphere above a gold-coated chip in a cryostat, a neutral diamond held long in
- * a room-temperature vacuum — scripts/demo-environment.ts), and, when the
+ * a room-temperature vacuum; the documents are in scripts/demo-documents.ts), and, when the
  * object store is up (scripts/services.sh starts the fake one), a sequencer run kept with the flat-space scenario.
  * Idempotent: a second run finds the demo account and changes nothing. Run with the react-server condition
  * (npm run db:seed) so that the data access layer's server-only marker resolves.
@@ -15,48 +15,13 @@ import { createProject } from "../db/projects";
 import { createScenario } from "../db/scenarios";
 import { createShareLink } from "../db/share-links";
 import { createUser, findUserByEmail } from "../db/users";
-import { solarMass } from "../physics/constants";
 import { sendInvitationMail } from "../lib/invitation-mail";
 import { shareUrl } from "../lib/links";
 import { createObjectStore } from "../lib/storage";
-import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
-import { neutralDiamondLongHold, silicaAboveGoldChip } from "./demo-environment";
+import { acceleratedLab, flatSpaceStudy, hoveringLab, neutralDiamondLongHold, silicaAboveGoldChip } from "./demo-documents";
 
 export const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner", name: "Demo Owner (group lead)" };
 export const DEMO_VIEWER = { email: "referee@lindenbrook.example", password: "lindenbrook-demo-viewer", name: "Demo Viewer (referee)" };
-
-const e = 1.602_176_634e-19;
-
-function flatSpaceStudy(): ScenarioDocument {
-  const doc = defaultScenarioDocument();
-  doc.source = { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null };
-  doc.separation = { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 };
-  return doc;
-}
-
-function hoveringLab(): ScenarioDocument {
-  const doc = defaultScenarioDocument();
-  doc.background = { kind: "schwarzschild", massKg: 10 * solarMass.value };
-  doc.lab = { placement: "areal-radius", arealRadiusMetres: 1.5e5 };
-  doc.source = { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null };
-  doc.separation = { axis: "radial", split: "symmetric", distanceMetres: 1e-5 };
-  doc.protocol = {
-    kind: "segments",
-    separation: { durationSeconds: 0.05, shape: "minimum-jerk" },
-    hold: { durationSeconds: 1 },
-    recombination: { durationSeconds: 0.05, shape: "minimum-jerk" },
-  };
-  return doc;
-}
-
-function acceleratedLab(): ScenarioDocument {
-  const doc = defaultScenarioDocument();
-  doc.background = { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 };
-  doc.lab = { placement: "uniformly-accelerated" };
-  doc.source = { chargeCoulombs: 10 * e, massKg: 1e-15, labMassKg: null };
-  doc.separation = { axis: "tangential", split: "one-branch-stays", distanceMetres: 5e-7 };
-  return doc;
-}
 
 /** An invented sequencer run: separate over 40 ms with a cubic ramp (3u² − 2u³), hold 2.5 µm for 120 ms, recombine over 40 ms. */
 function sequencerRunCsv(): string {

@@ -2,9 +2,23 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { computeScenario, computeScenarioFromJson } from "@/physics/compute";
 import { parseScenarioDocument } from "@/physics/scenario/schema";
-import { neutralDiamondLongHold, silicaAboveGoldChip } from "../../../scripts/demo-environment";
+import { acceleratedLab, flatSpaceStudy, hoveringLab, neutralDiamondLongHold, silicaAboveGoldChip } from "../../../scripts/demo-documents";
 
-describe("the demo's environment scenarios", () => {
+describe("the demo's scenarios", () => {
+  it("are all documents the schema accepts as they are (the current version, so the seed needs no upgrade)", () => {
+    for (const document of [flatSpaceStudy(), hoveringLab(), acceleratedLab(), silicaAboveGoldChip(), neutralDiamondLongHold()]) {
+      const parsed = parseScenarioDocument(JSON.parse(JSON.stringify(document)));
+      expect(parsed.ok, JSON.stringify(parsed.ok ? null : parsed.issues)).toBe(true);
+      if (parsed.ok) expect(parsed.document).toEqual(document);
+    }
+  });
+
+  it("carry charges that are whole multiples of the elementary charge (CODATA 2018, exact: 1.602176634e-19 C)", () => {
+    for (const [document, electrons] of [[flatSpaceStudy(), 100], [hoveringLab(), 100], [acceleratedLab(), 10], [silicaAboveGoldChip(), 200]] as const) {
+      expect(document.source.chargeCoulombs / 1.602176634e-19).toBeCloseTo(electrons, 9);
+    }
+  });
+
   it("are documents the schema accepts as they are, and compute every channel their environment switches on", () => {
     for (const document of [silicaAboveGoldChip(), neutralDiamondLongHold()]) {
       const parsed = parseScenarioDocument(JSON.parse(JSON.stringify(document)));

@@ -1,12 +1,53 @@
 /**
- * The demo's two scenarios with a lab environment, both invented: a charged silica microsphere in a cryogenic
- * chamber 40 µm above a gold-coated chip, where the warm (well, 4 K) metal's image noise outruns every other channel;
- * and a neutral diamond held apart for a long time in a room-temperature vacuum, where residual gas and thermal
- * radiation dwarf the body's own gravitational field. Pure documents, for scripts/seed.ts and the tests.
+ * The demo's five scenario documents, all invented, for scripts/seed.ts and the tests: a charged microsphere in flat
+ * space; a lab hovering outside a 10 M☉ black hole; a lab accelerated at 10¹⁸ m/s²; and two with the lab's
+ * environment: a charged silica microsphere in a cryogenic chamber 40 µm above a gold-coated chip, where the warm
+ * (well, 4 K) metal's image noise outruns every other channel, and a neutral diamond held apart for a long time in
+ * a room-temperature vacuum, where residual gas and thermal radiation dwarf the body's own gravitational field.
  */
+import { elementaryCharge, solarMass } from "../physics/constants";
 import { defaultScenarioDocument, type ScenarioDocument } from "../physics/scenario/schema";
 
-const e = 1.602_176_634e-19;
+const e = elementaryCharge.value;
+
+/** Ramps of the minimum-jerk shape around a hold, each time in seconds. */
+function minimumJerkSegments(separationSeconds: number, holdSeconds: number, recombinationSeconds: number): ScenarioDocument["protocol"] {
+  return {
+    kind: "segments",
+    separation: { durationSeconds: separationSeconds, shape: "minimum-jerk" },
+    hold: { durationSeconds: holdSeconds },
+    recombination: { durationSeconds: recombinationSeconds, shape: "minimum-jerk" },
+  };
+}
+
+export function flatSpaceStudy(): ScenarioDocument {
+  return {
+    ...defaultScenarioDocument(),
+    source: { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null },
+    separation: { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 },
+  };
+}
+
+export function hoveringLab(): ScenarioDocument {
+  return {
+    ...defaultScenarioDocument(),
+    background: { kind: "schwarzschild", massKg: 10 * solarMass.value },
+    lab: { placement: "areal-radius", arealRadiusMetres: 1.5e5 },
+    source: { chargeCoulombs: 100 * e, massKg: 1e-14, labMassKg: null },
+    separation: { axis: "radial", split: "symmetric", distanceMetres: 1e-5 },
+    protocol: minimumJerkSegments(0.05, 1, 0.05),
+  };
+}
+
+export function acceleratedLab(): ScenarioDocument {
+  return {
+    ...defaultScenarioDocument(),
+    background: { kind: "rindler", accelerationMetresPerSecondSquared: 1e18 },
+    lab: { placement: "uniformly-accelerated" },
+    source: { chargeCoulombs: 10 * e, massKg: 1e-15, labMassKg: null },
+    separation: { axis: "tangential", split: "one-branch-stays", distanceMetres: 5e-7 },
+  };
+}
 
 /** A sphere's mass from its radius and density. */
 const sphereMassKg = (radiusMetres: number, densityKgPerCubicMetre: number) => densityKgPerCubicMetre * (4 / 3) * Math.PI * radiusMetres ** 3;
@@ -25,12 +66,7 @@ export function silicaAboveGoldChip(): ScenarioDocument {
   const radius = 1e-6;
   doc.source = { chargeCoulombs: 200 * e, massKg: sphereMassKg(radius, SILICA_DENSITY), labMassKg: null };
   doc.separation = { axis: "tangential", split: "symmetric", distanceMetres: 1e-6 };
-  doc.protocol = {
-    kind: "segments",
-    separation: { durationSeconds: 0.02, shape: "minimum-jerk" },
-    hold: { durationSeconds: 0.1 },
-    recombination: { durationSeconds: 0.02, shape: "minimum-jerk" },
-  };
+  doc.protocol = minimumJerkSegments(0.02, 0.1, 0.02);
   doc.environment = {
     body: { radiusMetres: radius, material: "fused-silica", permittivity: null, internalTemperatureKelvin: 12 },
     gas: { pressurePascals: 1e-10, temperatureKelvin: 4, species: "He" },
@@ -57,12 +93,7 @@ export function neutralDiamondLongHold(): ScenarioDocument {
   const radius = 0.5e-6;
   doc.source = { chargeCoulombs: 0, massKg: sphereMassKg(radius, DIAMOND_DENSITY), labMassKg: null };
   doc.separation = { axis: "tangential", split: "one-branch-stays", distanceMetres: 2e-6 };
-  doc.protocol = {
-    kind: "segments",
-    separation: { durationSeconds: 0.5, shape: "minimum-jerk" },
-    hold: { durationSeconds: 10 },
-    recombination: { durationSeconds: 0.5, shape: "minimum-jerk" },
-  };
+  doc.protocol = minimumJerkSegments(0.5, 10, 0.5);
   doc.environment = {
     body: { radiusMetres: radius, material: "diamond", permittivity: null, internalTemperatureKelvin: null },
     gas: { pressurePascals: 1e-6, temperatureKelvin: 295, species: "N2" },

@@ -56,9 +56,11 @@
  * panels' pace (a note's new line laid the page out again each frame), data-handles written only when they move.
  * What is left is the browser's software compositing of seven canvas layers (--disable-gpu: no GPU here) and the
  * two stages drawn on the main thread; the next step would be drawing the stages in a worker (OffscreenCanvas),
- * which Konva supports, so that the main thread only composites.
+ * which Konva supports, so that the main thread only composites. Tried and dropped: the Diagram's radiation, grid
+ * and branches in one canvas instead of three (fewer canvases to composite, but the grid redrawn every frame:
+ * 1–2 ms a frame more).
  * BRANCH_PROFILE=1 adds the main thread's top functions by self time during the drag, summed by package or source
- * file and, for our own functions, by total time; a build made with BRANCHLINE_BROWSER_SOURCE_MAPS=1 names them
+ * file and, for our own functions, by total time (BRANCH_PROFILE_ROWS rows each, default 14); a build made with BRANCHLINE_BROWSER_SOURCE_MAPS=1 names them
  * through its source maps. BRANCH_TRACE=1 adds the main thread by trace event (the browser's own work named).
  * BRANCH_CPU_SLOWDOWN=N (≥ 1) slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */
@@ -295,7 +297,7 @@ function totalShares(profile: { nodes: ProfileNode[] }, keyOf: (node: ProfileNod
  * The functions with the most samples of a CPU profile (self time), with their share, then the same summed by
  * package or source file; "(program)" is the browser's own work outside scripts.
  */
-async function topSelfTime(profile: { nodes: ProfileNode[] }, count = 14): Promise<string[]> {
+async function topSelfTime(profile: { nodes: ProfileNode[] }, count = Number(process.env.BRANCH_PROFILE_ROWS ?? 14)): Promise<string[]> {
   const sourceOf = await sourceMapsOf(profile);
   const functionKey = (node: ProfileNode) => {
     const mapped = sourceOf(node.callFrame);

@@ -118,10 +118,24 @@ function horizonObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): La
     .map((b) => ({ points: b.points.map((p) => toPx(viewport, p)), clearance: 1 }));
 }
 
-/** What the backdrop's labels keep clear of: the horizons, and the lab's worldline with the branches' whole corridor. */
+/**
+ * The edges at null infinity around the lab's region: the grid's and the slices' labels keep clear of them (a
+ * radius label across ℐ⁺ reads as if the line ended there); the boundaries' own names sit beside them as placed.
+ */
+function nullInfinityObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): LabelObstacle[] {
+  return scene.boundaries
+    .filter((b) => b.kind === "null-infinity" && b.bordersLabRegion)
+    .map((b) => ({ points: b.points.map((p) => toPx(viewport, p)), clearance: 1, forPriorityBelow: LABEL_PRIORITY.contextBoundary }));
+}
+
+/**
+ * What the backdrop's labels keep clear of: the horizons, null infinity (all but the boundaries' own names), and the
+ * lab's worldline with the branches' whole corridor.
+ */
 export function diagramLabelObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): LabelObstacle[] {
   return [
     ...horizonObstacles(scene, viewport),
+    ...nullInfinityObstacles(scene, viewport),
     { points: scene.labWorldline.map((p) => toPx(viewport, p)), clearance: corridorPx(scene, viewport) + LINE_CLEARANCE_PX },
   ];
 }
@@ -157,6 +171,7 @@ export function sliceLabelObstacles(scene: DiagramBackdrop, protocol: ProtocolOn
   const { a, b } = branchPixels(protocol, viewport);
   return [
     ...horizonObstacles(scene, viewport),
+    ...nullInfinityObstacles(scene, viewport),
     { points: scene.labWorldline.map((p) => toPx(viewport, p)), clearance: LINE_CLEARANCE_PX },
     { points: a, clearance: LINE_CLEARANCE_PX },
     { points: b, clearance: LINE_CLEARANCE_PX },

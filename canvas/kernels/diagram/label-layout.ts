@@ -48,6 +48,8 @@ export interface PlacedLabel extends LabelCandidate {
 export interface LabelObstacle {
   points: Px[];
   clearance: number;
+  /** Only labels of a lower priority keep clear of it (a boundary's own name is placed beside it by design). */
+  forPriorityBelow?: number;
 }
 
 /** Priorities of the Diagram's label families (the layout itself only compares them). */
@@ -148,7 +150,7 @@ export function layoutLabels(candidates: LabelCandidate[], stage: { width: numbe
     for (const spot of [label, ...(label.alternatives ?? [])]) {
       const box = labelBox({ ...spot, text: label.text, fontSize: label.fontSize, characterEm: label.characterEm });
       const onStage = box.left >= 0 && box.top >= 0 && box.left + box.width <= stage.width && box.top + box.height <= stage.height;
-      if (!onStage || kept.some((p) => boxesOverlap(p.box, box, gap)) || obstacles.some((o) => blockedBy(o, box))) continue;
+      if (!onStage || kept.some((p) => boxesOverlap(p.box, box, gap)) || obstacles.some((o) => (o.forPriorityBelow === undefined || label.priority < o.forPriorityBelow) && blockedBy(o, box))) continue;
       const { alternatives: _unused, ...rest } = label;
       const chosen: PlacedLabel = { ...rest, x: spot.x, y: spot.y, align: spot.align, verticalAlign: spot.verticalAlign, rotation: spot.rotation, box };
       kept.push(chosen);

@@ -216,6 +216,11 @@ describe.each(Object.keys(EXAMPLES))("the labels of the %s diagram", (name) => {
         }
         const { a, b } = branchPixels(scene.protocol!, viewport);
         const worldline = scene.labWorldline.map((p) => toPx(viewport, p));
+        // Null infinity around the lab's region: no grid, radius or slice label lies across it (its own name may sit by it).
+        const nullInfinity = scene.boundaries.filter((edge) => edge.kind === "null-infinity" && edge.bordersLabRegion).map((edge) => edge.points.map((p) => toPx(viewport, p)));
+        for (const label of placed.filter((l) => l.priority < 90)) {
+          for (const edge of nullInfinity) expect(polylineCrossesBox(edge, label.box), `${label.text} across null infinity`).toBe(false);
+        }
         for (const label of placed) {
           expect(polylineCrossesBox(a, label.box), `${label.text} on branch A`).toBe(false);
           expect(polylineCrossesBox(b, label.box), `${label.text} on branch B`).toBe(false);

@@ -13,6 +13,9 @@
  *
  * Run against a running Branchline with the demo data (`npm run demo`, or a `next start` of a build on a seeded
  * database): BRANCH_URL=http://localhost:3000 npx tsx tests/bench/editor-browser.ts (that URL is the default).
+ * Before and after a change: BRANCH_BEFORE_URL names a second server running the older build (a worktree at the
+ * older commit, its demo on other ports: BRANCHLINE_PG_PORT, SMTP_FAKE_PORT, MAILBOX_PORT, S3_FAKE_PORT, PORT);
+ * the bench then alternates the two for BRANCH_ROUNDS rounds (default 3) and prints both ranges.
  * `npm run bench` runs it too when BRANCH_URL is set, and skips it otherwise.
  *
  * Seen on an earlier machine of this kind (2 cores, headless Chromium with --disable-gpu, `next start` of a production
@@ -39,14 +42,15 @@
  * busy 16–17.5 ms a frame: the headroom here is well under a factor of two. About 40 % of the main thread is the
  * browser's own style, layout, paint and compositing in software (--disable-gpu); the rest is React, Konva and the
  * store.
- * Before and after the editor object (2026-12-05, this machine quiet, load average about 2, the same bench on builds
- * of c602f31, before it, and of the code after it, alternated): main thread busy per frame 12.5–13.3 ms before and
- * 12.4–13.5 ms after as the editor opens, 10.6–11.5 ms before and 11.6–12.9 ms after with a sweep's chart shown; p95
- * 16.7–16.8 ms in both, with the first drag after a page load at 33 ms now and then in both. With
- * BRANCH_CPU_SLOWDOWN=2: p95 33–67 ms, busy 17–21 ms a frame. As the editor opens the redesign moved no frame time;
- * with a sweep shown about 1 ms more (the sweep now draws a curve per channel, which the older build had not). The target of at
- * most 8 ms of work a frame (p95 ≤ 16.8 ms at BRANCH_CPU_SLOWDOWN=2) is NOT met. This machine's speed drifts by
- * ±20 % from minute to minute (tests/bench/maps.ts prints it), so read figures over several runs.
+ * Before and after the editor object (2026-12-05, this machine quiet, load average about 2; BRANCH_BEFORE_URL on a
+ * build of c602f31, the commit before it, against main, five rounds alternated): main thread busy per frame as the
+ * editor opens 11.6–14.0 ms before (mean 12.5) and 11.1–13.5 ms after (mean 12.5); with a sweep's chart shown
+ * 10.5–12.3 ms before (mean 11.4) and 11.0–12.4 ms after (mean 11.6); p95 16.7–16.8 ms in both, with the first
+ * drag after a page load at 33 ms now and then in both. With BRANCH_CPU_SLOWDOWN=2: p95 33–67 ms, busy 17–21 ms a
+ * frame. The redesign moved no frame time (the sweep now draws a curve per channel, which the older build had not,
+ * and still costs the same). The target of at most 8 ms of work a frame (p95 ≤ 16.8 ms at BRANCH_CPU_SLOWDOWN=2) is
+ * NOT met. This machine's speed drifts by ±20 % from minute to minute (tests/bench/maps.ts prints it): compare
+ * builds with BRANCH_BEFORE_URL, which alternates them.
  * Where a frame's time goes (BRANCH_TRACE=1, 13 ms): about 8 ms in the browser's frame (of which 2 ms committing
  * the layer tree, 1–1.5 ms updating layers and copying the changed canvases, 1.5 ms Konva drawing the changed
  * layers in the animation frame, 1–1.7 ms style, layout and paint), 3.5–4.5 ms in the pointer-move handler (the
@@ -64,10 +68,13 @@
  * through its source maps. BRANCH_TRACE=1 adds the main thread by trace event (the browser's own work named).
  * BRANCH_CPU_SLOWDOWN=N (≥ 1) slows the page's CPU N times (Chromium's throttling) to show the headroom.
  */
-import { chromium, type CDPSession, type Page } from "@playwright/test";
+import { chromium, type Browser, type CDPSession, type Page } from "@playwright/test";
 import { SourceMapConsumer } from "source-map-js";
 
 const BASE_URL = (process.env.BRANCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
+/** A second server with a build from before a change: the bench then alternates the two and prints both. */
+const BEFORE_URL = process.env.BRANCH_BEFORE_URL?.replace(/\/$/, "") ?? null;
+const ROUNDS = Number(process.env.BRANCH_ROUNDS ?? 3);
 const DEMO_OWNER = { email: "owner@lindenbrook.example", password: "lindenbrook-demo-owner" };
 const DRAG_MS = 2000;
 const DRAG_AMPLITUDE_PX = 80;
@@ -92,8 +99,8 @@ function spread(values: number[]): string {
   return `p50 ${ms(quantile(values, 0.5))}, p95 ${ms(quantile(values, 0.95))}, p99 ${ms(quantile(values, 0.99))}, max ${ms(Math.max(...values))}`;
 }
 
-async function signIn(page: Page): Promise<void> {
-  await page.goto(`${BASE_URL}/sign-in`);
+async function signIn(page: Page, base: string): Promise<void> {
+  await page.goto(`${base}/sign-in`);
   await page.getByLabel("E-mail").fill(DEMO_OWNER.email);
   await page.getByLabel("Password").fill(DEMO_OWNER.password);
   await page.getByRole("button", { name: /sign in/i }).first().click();
@@ -104,18 +111,18 @@ async function signIn(page: Page): Promise<void> {
  * A copy, made for the bench, of the first Schwarzschild scenario with a segment protocol (one with handles) the demo
  * owner can see: the drags are saved as usual, so the bench works on its own copy and deletes it afterwards.
  */
-async function benchCopyOfHorizonScenario(page: Page): Promise<{ path: string; title: string; remove(): Promise<void> }> {
-  const { projects } = (await (await page.request.get(`${BASE_URL}/api/projects`)).json()) as { projects: { id: string }[] };
+async function benchCopyOfHorizonScenario(page: Page, base: string): Promise<{ path: string; title: string; remove(): Promise<void> }> {
+  const { projects } = (await (await page.request.get(`${base}/api/projects`)).json()) as { projects: { id: string }[] };
   for (const project of projects) {
-    const listed = await page.request.get(`${BASE_URL}/api/projects/${project.id}/scenarios?background=schwarzschild`);
+    const listed = await page.request.get(`${base}/api/projects/${project.id}/scenarios?background=schwarzschild`);
     const { items } = (await listed.json()) as { items: { id: string; title: string }[] };
     for (const item of items) {
-      const { scenario } = (await (await page.request.get(`${BASE_URL}/api/projects/${project.id}/scenarios/${item.id}`)).json()) as {
+      const { scenario } = (await (await page.request.get(`${base}/api/projects/${project.id}/scenarios/${item.id}`)).json()) as {
         scenario: { document: { protocol: { kind: string } } | null };
       };
       if (scenario.document?.protocol.kind !== "segments") continue;
       const title = `Bench copy of ${item.title}`;
-      const made = await page.request.post(`${BASE_URL}/api/projects/${project.id}/scenarios`, { data: { title, document: scenario.document } });
+      const made = await page.request.post(`${base}/api/projects/${project.id}/scenarios`, { data: { title, document: scenario.document } });
       if (made.status() !== 201) throw new Error(`could not make the bench's copy of "${item.title}": HTTP ${made.status()} ${await made.text()}`);
       const copy = ((await made.json()) as { scenario: { id: string } }).scenario;
       const path = `/projects/${project.id}/scenarios/${copy.id}`;
@@ -123,7 +130,7 @@ async function benchCopyOfHorizonScenario(page: Page): Promise<{ path: string; t
         path,
         title: item.title,
         async remove() {
-          const removed = await page.request.delete(`${BASE_URL}/api${path}`);
+          const removed = await page.request.delete(`${base}/api${path}`);
           if (!removed.ok()) console.warn(`warning: the bench's copy "${title}" was not deleted (HTTP ${removed.status()}): delete it by hand`);
         },
       };
@@ -402,8 +409,15 @@ function mainThreadByTraceEvent(trace: { traceEvents: TraceEvent[] }, frames: nu
 
 const TRACE_CATEGORIES = ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink", "cc", "v8.execute", "toplevel"];
 
-/** One recorded drag: its figures as printed lines, and whether the frame-time target was met. */
-async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<{ lines: string[]; met: boolean }> {
+/** One recorded drag: its figures as printed lines, whether the frame-time target was met, and the two headline figures. */
+interface DragFigures {
+  lines: string[];
+  met: boolean;
+  busyMs: number;
+  p95Ms: number;
+}
+
+async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<DragFigures> {
   await budgetCurrent(page);
   const longTasksObserved = await startRecording(page);
   const profiling = Boolean(process.env.BRANCH_PROFILE);
@@ -447,7 +461,7 @@ async function measuredDrag(page: Page, cdp: CDPSession, what: string): Promise<
   ];
   if (profile) lines.push("  main thread during the drag, by self time:", ...(await topSelfTime(profile)));
   if (trace) lines.push("  main thread during the drag, by trace event:", ...mainThreadByTraceEvent(trace, deltas.length));
-  return { lines, met };
+  return { lines, met, busyMs: busy("task"), p95Ms: p95 };
 }
 
 /** Runs a recombination-time sweep in the Sweep panel and waits for its chart. */
@@ -457,32 +471,72 @@ async function showSweep(page: Page): Promise<void> {
 }
 
 /** Both drags on the scenario at `path`, printed. */
-async function benchScenario(page: Page, scenario: { path: string; title: string }, slowdown: number): Promise<void> {
-  await page.goto(`${BASE_URL}${scenario.path}`);
+async function benchScenario(page: Page, base: string, scenario: { path: string; title: string }, slowdown: number): Promise<{ opens: DragFigures; withSweep: DragFigures }> {
+  await page.goto(`${base}${scenario.path}`);
   await offsetsPanel(page).waitFor();
   const cdp = await page.context().newCDPSession(page);
   await cdp.send("Performance.enable");
   if (slowdown > 1) await cdp.send("Emulation.setCPUThrottlingRate", { rate: slowdown });
-  const header = `scenario: a copy of "${scenario.title}" at ${BASE_URL}${slowdown > 1 ? `, CPU slowed ${slowdown}× (BRANCH_CPU_SLOWDOWN)` : ""}`;
-  const plain = await measuredDrag(page, cdp, "drag with the editor as it opens");
+  const header = `scenario: a copy of "${scenario.title}" at ${base}${slowdown > 1 ? `, CPU slowed ${slowdown}× (BRANCH_CPU_SLOWDOWN)` : ""}`;
+  const opens = await measuredDrag(page, cdp, "drag with the editor as it opens");
   await showSweep(page);
   const withSweep = await measuredDrag(page, cdp, "drag with a sweep's chart shown");
-  console.log([header, ...plain.lines, ...withSweep.lines].join("\n"));
+  console.log([header, ...opens.lines, ...withSweep.lines].join("\n"));
+  return { opens, withSweep };
 }
+
+/** One bench run against one server, in a page of its own: sign in, copy a scenario, drag twice, delete the copy. */
+async function benchServer(browser: Browser, base: string, slowdown: number) {
+  const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+  try {
+    await signIn(page, base);
+    const scenario = await benchCopyOfHorizonScenario(page, base);
+    try {
+      return await benchScenario(page, base, scenario, slowdown);
+    } finally {
+      await scenario.remove();
+    }
+  } finally {
+    await page.close();
+  }
+}
+
+const range = (values: number[]) => `${ms(Math.min(...values))}–${ms(Math.max(...values))}`;
 
 async function main(): Promise<void> {
   const slowdown = Number(process.env.BRANCH_CPU_SLOWDOWN ?? 1);
   if (!(slowdown >= 1)) throw new Error(`BRANCH_CPU_SLOWDOWN must be a number ≥ 1 (got "${process.env.BRANCH_CPU_SLOWDOWN}")`);
+  if (!(Number.isInteger(ROUNDS) && ROUNDS >= 1)) throw new Error(`BRANCH_ROUNDS must be a whole number ≥ 1 (got "${process.env.BRANCH_ROUNDS}")`);
   const browser = await chromium.launch(LAUNCH);
   try {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
-    await signIn(page);
-    const scenario = await benchCopyOfHorizonScenario(page);
-    try {
-      await benchScenario(page, scenario, slowdown);
-    } finally {
-      await scenario.remove();
+    if (!BEFORE_URL) {
+      await benchServer(browser, BASE_URL, slowdown);
+      return;
     }
+    // Before and after, alternated round by round: this machine's speed drifts from minute to minute, and
+    // alternating spreads the drift over both.
+    const runs: Record<"before" | "after", { opens: DragFigures; withSweep: DragFigures }[]> = { before: [], after: [] };
+    for (let round = 1; round <= ROUNDS; round++) {
+      for (const [label, base] of [["before", BEFORE_URL], ["after", BASE_URL]] as const) {
+        console.log(`\n== round ${round} of ${ROUNDS}, ${label}`);
+        runs[label].push(await benchServer(browser, base, slowdown));
+      }
+    }
+    const summary = (label: "before" | "after", drag: "opens" | "withSweep") => {
+      const figures = runs[label].map((r) => r[drag]);
+      return `${label.padEnd(6)} busy per frame ${range(figures.map((f) => f.busyMs))}, frame time p95 ${range(figures.map((f) => f.p95Ms))}`;
+    };
+    console.log(
+      [
+        `\nbefore (${BEFORE_URL}) and after (${BASE_URL}), ${ROUNDS} rounds alternated${slowdown > 1 ? `, CPU slowed ${slowdown}×` : ""}:`,
+        "  drag with the editor as it opens:",
+        `    ${summary("before", "opens")}`,
+        `    ${summary("after", "opens")}`,
+        "  drag with a sweep's chart shown:",
+        `    ${summary("before", "withSweep")}`,
+        `    ${summary("after", "withSweep")}`,
+      ].join("\n"),
+    );
   } finally {
     await browser.close();
   }

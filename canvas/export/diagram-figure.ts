@@ -9,7 +9,7 @@ import { memoizeLast } from "../kernels/memoize";
 import type { DiagramBackdrop, DiagramScene, SceneBoundary } from "../kernels/diagram/scene";
 import { fitDiagramViewport, flatPx, toPx, type DiagramViewport, type Padding } from "../kernels/diagram/viewport";
 import { wavyLine } from "../kernels/diagram/decorations";
-import { diagramLabelCandidates, diagramLabelObstacles, sliceLabelCandidates, sliceLabelObstacles } from "../layers/diagram-labels";
+import { diagramLabelCandidates, diagramLabelObstacles, diagramLabelRegion, sliceLabelCandidates, sliceLabelObstacles } from "../layers/diagram-labels";
 import { DASHES, type FigurePalette } from "../theme";
 import { cutAtCursor, type TimeCursor } from "./time-cursor";
 
@@ -152,7 +152,10 @@ function backdropGroups(scene: DiagramBackdrop, width: number, height: number, p
   const viewport = diagramViewport(scene, size, labelScale, inset);
   const area = (points: number[], fill: string): FigureShape => ({ kind: "area", points, fill });
   const tone = { ink: palette.ink, soft: palette.inkSoft, faint: palette.inkFaint };
-  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), labelStage(width, height, inset), { obstacles: diagramLabelObstacles(scene, viewport) });
+  const labels = layoutLabels(scaled(diagramLabelCandidates(scene, viewport), labelScale), labelStage(width, height, inset), {
+    obstacles: diagramLabelObstacles(scene, viewport),
+    within: diagramLabelRegion(scene, viewport),
+  });
   return {
     viewport,
     under: [

@@ -10,7 +10,7 @@
 import { branchCorridor, type ProtocolOnDiagram } from "../kernels/diagram/protocol-path";
 import type { DiagramBackdrop } from "../kernels/diagram/scene";
 import { labRadiusLabel } from "../kernels/diagram/labels";
-import { LABEL_PRIORITY, type LabelCandidate, type LabelObstacle, type LabelSpot, type Px } from "../kernels/diagram/label-layout";
+import { LABEL_PRIORITY, type LabelCandidate, type LabelObstacle, type LabelSpot, type LayoutOptions, type Px } from "../kernels/diagram/label-layout";
 import { toPx, type DiagramViewport } from "../kernels/diagram/viewport";
 
 const BOUNDARY_OFFSETS_PX = [13, 24];
@@ -119,18 +119,24 @@ function horizonObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): La
 }
 
 /**
- * The edges at null infinity around the lab's region: the grid's and the slices' labels keep clear of them (a
- * radius label across ℐ⁺ reads as if the line ended there); the boundaries' own names sit beside them as placed.
+ * The edges at null infinity around the lab's region: the grid's labels keep clear of them (a radius label across
+ * ℐ⁺ reads as if the line ended there). The boundaries' names, the lab's and the time slices' are placed beside
+ * their own marks and keep their spots.
  */
 function nullInfinityObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): LabelObstacle[] {
   return scene.boundaries
     .filter((b) => b.kind === "null-infinity" && b.bordersLabRegion)
-    .map((b) => ({ points: b.points.map((p) => toPx(viewport, p)), clearance: 1, forPriorityBelow: LABEL_PRIORITY.contextBoundary }));
+    .map((b) => ({ points: b.points.map((p) => toPx(viewport, p)), clearance: 1, forPriorityBelow: LABEL_PRIORITY.timeSlice }));
+}
+
+/** The grid's labels lie inside the diagram's outline, never in the blank paper beyond null infinity. */
+export function diagramLabelRegion(scene: DiagramBackdrop, viewport: DiagramViewport): NonNullable<LayoutOptions["within"]> {
+  return { polygon: scene.outline.map((p) => toPx(viewport, p)), forPriorityBelow: LABEL_PRIORITY.timeSlice };
 }
 
 /**
- * What the backdrop's labels keep clear of: the horizons, null infinity (all but the boundaries' own names), and the
- * lab's worldline with the branches' whole corridor.
+ * What the backdrop's labels keep clear of: the horizons, null infinity (the grid's labels), and the lab's worldline
+ * with the branches' whole corridor.
  */
 export function diagramLabelObstacles(scene: DiagramBackdrop, viewport: DiagramViewport): LabelObstacle[] {
   return [
@@ -171,7 +177,6 @@ export function sliceLabelObstacles(scene: DiagramBackdrop, protocol: ProtocolOn
   const { a, b } = branchPixels(protocol, viewport);
   return [
     ...horizonObstacles(scene, viewport),
-    ...nullInfinityObstacles(scene, viewport),
     { points: scene.labWorldline.map((p) => toPx(viewport, p)), clearance: LINE_CLEARANCE_PX },
     { points: a, clearance: LINE_CLEARANCE_PX },
     { points: b, clearance: LINE_CLEARANCE_PX },

@@ -130,6 +130,8 @@ export interface LayoutOptions {
   /** Room kept between two labels, px. */
   gapPx?: number;
   obstacles?: LabelObstacle[];
+  /** A convex region (the figure's outline) that labels of a lower priority than given must lie inside. */
+  within?: { polygon: Px[]; forPriorityBelow: number };
   /** Labels already on the stage (laid out earlier, e.g. once per background): the new ones keep clear of them. */
   placed?: PlacedLabel[];
 }
@@ -139,6 +141,29 @@ export interface LayoutOptions {
  * and clear of the labels kept so far and of the obstacles; an empty text (a grid line drawn for context only) is
  * no label. Returns the newly placed labels, each with the spot it took.
  */
+/** Whether a box lies inside a convex polygon (its four corners do; the polygon's vertices in either turning order). */
+export function boxInsideConvex(polygon: Px[], box: Box): boolean {
+  if (polygon.length < 3) return false;
+  const corners = [
+    { x: box.left, y: box.top },
+    { x: box.left + box.width, y: box.top },
+    { x: box.left, y: box.top + box.height },
+    { x: box.left + box.width, y: box.top + box.height },
+  ];
+  return corners.every((c) => {
+    let sign = 0;
+    for (let i = 0; i < polygon.length; i++) {
+      const p = polygon[i];
+      const q = polygon[(i + 1) % polygon.length];
+      const cross = (q.x - p.x) * (c.y - p.y) - (q.y - p.y) * (c.x - p.x);
+      if (cross === 0) continue;
+      if (sign === 0) sign = Math.sign(cross);
+      else if (Math.sign(cross) !== sign) return false;
+    }
+    return true;
+  });
+}
+
 export function layoutLabels(candidates: LabelCandidate[], stage: { width: number; height: number }, options: LayoutOptions = {}): PlacedLabel[] {
   const gap = options.gapPx ?? 2;
   const obstacles = (options.obstacles ?? []).filter((o) => o.points.length > 0).map(prepare);
@@ -150,7 +175,8 @@ export function layoutLabels(candidates: LabelCandidate[], stage: { width: numbe
     for (const spot of [label, ...(label.alternatives ?? [])]) {
       const box = labelBox({ ...spot, text: label.text, fontSize: label.fontSize, characterEm: label.characterEm });
       const onStage = box.left >= 0 && box.top >= 0 && box.left + box.width <= stage.width && box.top + box.height <= stage.height;
-      if (!onStage || kept.some((p) => boxesOverlap(p.box, box, gap)) || obstacles.some((o) => (o.forPriorityBelow === undefined || label.priority < o.forPriorityBelow) && blockedBy(o, box))) continue;
+      const outside = options.within !== undefined && label.priority < options.within.forPriorityBelow && !boxInsideConvex(options.within.polygon, box);
+      if (!onStage || outside || kept.some((p) => boxesOverlap(p.box, box, gap)) || obstacles.some((o) => (o.forPriorityBelow === undefined || label.priority < o.forPriorityBelow) && blockedBy(o, box))) continue;
       const { alternatives: _unused, ...rest } = label;
       const chosen: PlacedLabel = { ...rest, x: spot.x, y: spot.y, align: spot.align, verticalAlign: spot.verticalAlign, rotation: spot.rotation, box };
       kept.push(chosen);

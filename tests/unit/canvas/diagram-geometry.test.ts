@@ -9,7 +9,7 @@ import { diagramFigure, diagramViewport } from "@/canvas/export/diagram-figure";
 import { boxesOverlap, layoutLabels, polylineCrossesBox, type PlacedLabel } from "@/canvas/kernels/diagram/label-layout";
 import { buildDiagramScene, type DiagramScene } from "@/canvas/kernels/diagram/scene";
 import { toPx } from "@/canvas/kernels/diagram/viewport";
-import { branchPixels, diagramLabelCandidates, diagramLabelObstacles, sliceLabelCandidates, sliceLabelObstacles } from "@/canvas/layers/diagram-labels";
+import { branchPixels, diagramLabelCandidates, diagramLabelObstacles, diagramLabelRegion, sliceLabelCandidates, sliceLabelObstacles } from "@/canvas/layers/diagram-labels";
 import { FIGURE_PALETTES } from "@/canvas/theme";
 import { c } from "@/physics/constants";
 import { schwarzschildRadiusMetres, type DiagramPoint } from "@/physics/backgrounds";
@@ -186,6 +186,16 @@ const EXAMPLES: Record<string, ScenarioDocument> = {
   "de Sitter": { ...base, background: { kind: "de-sitter", hubbleRatePerSecond: 2.2e-18 }, lab: { placement: "areal-radius", arealRadiusMetres: 3e25 } },
 };
 
+/** Point in polygon by ray casting (even–odd crossings), independent of the layout's own convex test. */
+function insidePolygon(polygon: { x: number; y: number }[], x: number, y: number): boolean {
+  let inside = false;
+  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
+    const [a, b] = [polygon[i], polygon[j]];
+    if (a.y > y !== b.y > y && x < ((b.x - a.x) * (y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
+  }
+  return inside;
+}
+
 describe.each(Object.keys(EXAMPLES))("the labels of the %s diagram", (name) => {
   for (const width of SIZES) {
     for (const labelScale of [1, 2]) {
@@ -199,7 +209,7 @@ describe.each(Object.keys(EXAMPLES))("the labels of the %s diagram", (name) => {
         const backdrop = layoutLabels(
           diagramLabelCandidates(scene, viewport).map((c) => ({ ...c, fontSize: c.fontSize * (c.priority >= 90 ? labelScale : 1 + (labelScale - 1) / 2) })),
           size,
-          { obstacles: diagramLabelObstacles(scene, viewport) },
+          { obstacles: diagramLabelObstacles(scene, viewport), within: diagramLabelRegion(scene, viewport) },
         );
         const slices = layoutLabels(
           sliceLabelCandidates(scene.protocol!, viewport).map((c) => ({ ...c, fontSize: c.fontSize * (1 + (labelScale - 1) / 2) })),
@@ -216,10 +226,14 @@ describe.each(Object.keys(EXAMPLES))("the labels of the %s diagram", (name) => {
         }
         const { a, b } = branchPixels(scene.protocol!, viewport);
         const worldline = scene.labWorldline.map((p) => toPx(viewport, p));
-        // Null infinity around the lab's region: no grid, radius or slice label lies across it (its own name may sit by it).
+        // The grid's labels lie across no null infinity, and inside the diagram, not on the blank paper beyond it. (The
+        // time slices' may sit by their lines' ends out past i⁰: dropping them would leave the protocol's instants unnamed.)
         const nullInfinity = scene.boundaries.filter((edge) => edge.kind === "null-infinity" && edge.bordersLabRegion).map((edge) => edge.points.map((p) => toPx(viewport, p)));
-        for (const label of placed.filter((l) => l.priority < 90)) {
+        const outline = scene.outline.map((p) => toPx(viewport, p));
+        for (const label of placed.filter((l) => l.priority < 30)) {
           for (const edge of nullInfinity) expect(polylineCrossesBox(edge, label.box), `${label.text} across null infinity`).toBe(false);
+          const { left, top, width: w, height: h } = label.box;
+          for (const [x, y] of [[left, top], [left + w, top], [left, top + h], [left + w, top + h]]) expect(insidePolygon(outline, x, y), `${label.text} inside the diagram`).toBe(true);
         }
         for (const label of placed) {
           expect(polylineCrossesBox(a, label.box), `${label.text} on branch A`).toBe(false);

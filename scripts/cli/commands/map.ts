@@ -37,6 +37,8 @@ export const mapUsage = [
 
 const DEFAULT_POINTS = 24;
 const POLL_MS = 500;
+/** A map still queued this long gets a hint on standard error: no worker may be running. */
+const QUEUED_HINT_MS = 10_000;
 
 const AXIS_OPTIONS = (name: "x" | "y") =>
   ({
@@ -111,6 +113,8 @@ async function followRemoteMap(remote: Remote, started: ParameterMapDto, stderr:
     interrupted = true;
   };
   process.once("SIGINT", onInterrupt);
+  const since = Date.now();
+  let hinted = false;
   try {
     for (let map = started; ; ) {
       if (interrupted) {
@@ -122,6 +126,10 @@ async function followRemoteMap(remote: Remote, started: ParameterMapDto, stderr:
       if (map.status === "done") return map;
       if (map.status === "failed" || map.status === "cancelled") {
         throw new CommandFailure(EXIT.unavailable, [`map ${map.id} ${map.status} on the server${map.failure ? `: ${map.failure}` : ""}`]);
+      }
+      if (map.status === "queued" && !hinted && Date.now() - since > QUEUED_HINT_MS) {
+        hinted = true;
+        stderr.write(`map ${map.id} is still queued after ${QUEUED_HINT_MS / 1000} s: no map worker may be running there (npm run worker); Ctrl-C cancels it\n`);
       }
       await new Promise((resolve) => setTimeout(resolve, POLL_MS));
       map = (await send(remote, "GET", map.url)).json<{ map: ParameterMapDto }>().map;

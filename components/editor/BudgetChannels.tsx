@@ -43,6 +43,19 @@ export function QuantityLink({ quantity, testId, label }: { quantity: Quantity; 
   );
 }
 
+/** A row of the whole budget under the channels: its words, its number, no share. */
+function WholeBudgetRow({ words, quantity, testId, label }: { words: string; quantity: Quantity | null; testId: string; label: string }) {
+  return (
+    <tr className="border-b border-rule">
+      <th scope="row" className="px-1 py-1.5 text-left font-normal sm:px-2">
+        {words}
+      </th>
+      <NumberCell quantity={quantity} testId={testId} label={label} />
+      <td />
+    </tr>
+  );
+}
+
 function NumberCell({ quantity, testId, label }: { quantity: Quantity | null; testId: string; label: string }) {
   return (
     <td className="whitespace-nowrap px-1 py-1.5 text-right sm:px-2">
@@ -91,20 +104,8 @@ export function ChannelTableView({ table }: { table: ChannelTable }) {
             <NumberCell quantity={table.total} testId="budget-whole-total" label="Total ⟨N⟩, every channel" />
             <td className="tabular px-1 py-1.5 text-right text-ink-soft sm:px-2">{table.dominantWords ? "100 %" : "—"}</td>
           </tr>
-          <tr className="border-b border-rule">
-            <th scope="row" className="px-1 py-1.5 text-left font-normal sm:px-2">
-              Decoherence 𝒟
-            </th>
-            <NumberCell quantity={table.decoherence} testId="budget-whole-decoherence" label="Decoherence, every channel" />
-            <td />
-          </tr>
-          <tr className="border-b border-rule">
-            <th scope="row" className="px-1 py-1.5 text-left font-normal sm:px-2">
-              Decoherence time
-            </th>
-            <NumberCell quantity={table.decoherenceTime} testId="budget-whole-decoherence-time" label="Decoherence time, every channel" />
-            <td />
-          </tr>
+          <WholeBudgetRow words="Decoherence 𝒟" quantity={table.decoherence} testId="budget-whole-decoherence" label="Decoherence, every channel" />
+          <WholeBudgetRow words="Decoherence time" quantity={table.decoherenceTime} testId="budget-whole-decoherence-time" label="Decoherence time, every channel" />
         </tbody>
       </table>
       {table.rows

@@ -27,10 +27,9 @@ import { MAP_QUANTITIES, MAX_MAP_SIDE, type AxisScale, type MapQuantity } from "
 import { documentAt } from "@/physics/maps/point";
 import type { ScenarioDocument } from "@/physics/scenario/schema";
 import type { SweepParameter } from "@/physics/sweeps/vary";
-import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
-import { QuantityField } from "./QuantityField";
 import { CompactSelect } from "@/components/ui/Field";
+import { RangeFields } from "./RangeFields";
 import { dimensionOf, PARAMETER_WORDS } from "./SweepChart";
 import { useEdit } from "./useEdit";
 import { usePanelValue } from "./usePacedDuringDrag";
@@ -165,20 +164,7 @@ function AxisFields({ name, axis, available, document, onChange }: { name: "x" |
         onChange={(parameter) => onChange(draftFor(document, parameter))}
         ariaLabel={`Map ${name} parameter`}
       />
-      <div className="w-32">
-        <QuantityField compact label={`${name} from`} dimension={dimension} shown={formatQuantity(axis.from, dimension)} onCommit={(v) => {
-          if (!(v > 0) || v >= axis.to) return { ok: false, message: "must be positive and below the end of the range" };
-          onChange({ ...axis, from: v });
-          return { ok: true };
-        }} />
-      </div>
-      <div className="w-32">
-        <QuantityField compact label={`${name} to`} dimension={dimension} shown={formatQuantity(axis.to, dimension)} onCommit={(v) => {
-          if (!(v > axis.from)) return { ok: false, message: "must be above the start of the range" };
-          onChange({ ...axis, to: v });
-          return { ok: true };
-        }} />
-      </div>
+      <RangeFields range={axis} dimension={dimension} labels={[`${name} from`, `${name} to`]} onChange={(range) => onChange({ ...axis, ...range })} />
       <label className="block text-xs font-semibold text-ink-soft">
         Points
         <input

@@ -19,7 +19,7 @@ import { sweepCurves } from "@/canvas/kernels/sweep-channels";
 import { canVary, withParameter } from "@/physics/sweeps";
 import { formatQuantity } from "@/physics/units";
 import { FlagIcon } from "./FlagIcon";
-import { QuantityField } from "./QuantityField";
+import { RangeFields, SweepResultBox } from "./RangeFields";
 import { CompactSelect } from "@/components/ui/Field";
 import { dimensionOf, PARAMETER_WORDS, SweepChart, type SweepPoint } from "./SweepChart";
 import { SweepChannelsChart } from "./SweepChannelsChart";
@@ -132,20 +132,7 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         />
         {shownRange && (
           <>
-            <div className="w-32">
-              <QuantityField compact label="From" dimension={dimension} shown={formatQuantity(shownRange.from, dimension)} onCommit={(v) => {
-                if (!(v > 0) || v >= shownRange.to) return { ok: false, message: "must be positive and below the end of the range" };
-                setRange({ ...shownRange, from: v });
-                return { ok: true };
-              }} />
-            </div>
-            <div className="w-32">
-              <QuantityField compact label="To" dimension={dimension} shown={formatQuantity(shownRange.to, dimension)} onCommit={(v) => {
-                if (!(v > shownRange.from)) return { ok: false, message: "must be above the start of the range" };
-                setRange({ ...shownRange, to: v });
-                return { ok: true };
-              }} />
-            </div>
+            <RangeFields range={shownRange} dimension={dimension} labels={["From", "To"]} onChange={setRange} />
           </>
         )}
         <button type="button" className={`${buttonStyles.secondary} py-1.5`} onClick={run} disabled={!shownRange || sweep.status === "running"} data-testid="run-sweep">
@@ -183,25 +170,15 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
         </p>
       )}
       {curves.length > 0 && sweep.result && (
-        <div className={stale ? "opacity-60" : undefined}>
-          {stale && (
-            <p className="mt-2 flex items-start gap-1.5 text-xs text-caution">
-              <FlagIcon kind="caution" /> Computed for an earlier version of the scenario: run the sweep again.
-            </p>
-          )}
+        <SweepResultBox stale={stale}>
           <div className="mt-3 h-80 w-full" data-testid="sweep-chart">
             <SweepChannelsChart xs={xs} curves={curves} parameter={sweep.result.parameter} readOnly={readOnly} onPick={setTo} />
           </div>
           {!readOnly && <p className="mt-1 text-xs text-ink-soft">Click a point to set the scenario to it.</p>}
-        </div>
+        </SweepResultBox>
       )}
       {curves.length === 0 && data.length > 0 && (
-        <div className={stale ? "opacity-60" : undefined}>
-          {stale && (
-            <p className="mt-2 flex items-start gap-1.5 text-xs text-caution">
-              <FlagIcon kind="caution" /> Computed for an earlier version of the scenario: run the sweep again.
-            </p>
-          )}
+        <SweepResultBox stale={stale}>
           <div className="mt-3 h-64 w-full" data-testid="sweep-chart">
             <SweepChart data={data} best={best} parameter={parameter} readOnly={readOnly} onPick={setTo} />
           </div>
@@ -211,7 +188,7 @@ const SweepView = memo(function SweepView({ document, revision }: { document: Sc
               {!readOnly && " Click a point to set the scenario to it."}
             </p>
           )}
-        </div>
+        </SweepResultBox>
       )}
     </section>
   );

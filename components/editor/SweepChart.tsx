@@ -114,13 +114,13 @@ export function logAxis(values: number[], dimension: ReturnType<typeof parameter
   return { from, to, ticks, unit, label: (v: number) => labels.get(v) ?? tickLabel(v, unit) };
 }
 
-/** The log y axis of a sweep chart: its ticks, its title turned up the left edge. */
+/** The log y axis of a sweep chart: its ticks, its title turned up the left edge (80 px, so a "6 × 10⁻¹⁹" tick clears the title). */
 export function sweepYAxis(axis: NonNullable<ReturnType<typeof logAxis>>, title: string, dataKey?: string) {
   return (
     <YAxis
       dataKey={dataKey}
       {...logAxisProps(axis)}
-      width={64}
+      width={80}
       label={{ value: title, angle: -90, position: "insideLeft", offset: 4, fontSize: TICK_FONT_PX, fill: AXIS_COLOUR, style: { textAnchor: "middle" } }}
     />
   );
